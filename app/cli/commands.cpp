@@ -1,0 +1,333 @@
+#include "commands.h"
+
+#include "format.h"
+#include "ingest.h"
+#include "metricspec.h"
+#include "repository.h"
+
+#include <CLI/CLI.hpp>
+#include <nlohmann/json.hpp>
+
+#include <cstdlib>
+#include <filesystem>
+#include <iostream>
+#include <unistd.h>
+
+namespace pitchloop::cli {
+
+using namespace pitchloop::model;
+namespace fs = std::filesystem;
+
+namespace {
+
+/// The club file when --db is not given: $PITCHLOOP_DB, else the user's data folder.
+std::string defaultClubFile() {
+    if (const char* env = std::getenv("PITCHLOOP_DB"); env && *env) return env;
+    fs::path base;
+    if (const char* xdg = std::getenv("XDG_DATA_HOME"); xdg && *xdg) base = xdg;
+    else if (const char* home = std::getenv("HOME"); home && *home)
+        base = fs::path(home) / ".local" / "share";
+    else
+        base = fs::current_path();
+    return (base / "pitchloop" / "club.sqlite").string();
+}
+
+struct Globals {
+    std::string db;
+};
+
+std::unique_ptr<ClubRepository> openClub(const Globals& g) {
+    const fs::path path(g.db);
+    if (path.has_parent_path()) {
+        std::error_code ec;
+        fs::create_directories(path.parent_path(), ec);
+    }
+    return std::make_unique<ClubRepository>(g.db);
+}
+
+int cmdIngest(const Globals& g, const std::vector<std::string>& files, const IngestOptions& opts,
+              std::ostream& err) {
+    auto repo = openClub(g);
+    const bool progress = files.size() > 1 && isatty(STDERR_FILENO);
+    int added = 0, replaced = 0, unchanged = 0, failed = 0;
+    for (std::size_t i = 0; i < files.size(); ++i) {
+        if (progress)
+            err << "\r\033[K[" << i + 1 << "/" << files.size() << "] " << files[i] << std::flush;
+        const IngestReport r = ingestFile(*repo, files[i], opts);
+        if (progress && (!r.ok() || !r.warnings.empty())) err << "\r\033[K";
+        for (const auto& w : r.warnings) err << "warning: " << w.describe() << "\n";
+        switch (r.status) {
+        case IngestStatus::Added: ++added; break;
+        case IngestStatus::Replaced: ++replaced; break;
+        case IngestStatus::Unchanged: ++unchanged; break;
+        case IngestStatus::Invalid:
+        case IngestStatus::Refused:
+            ++failed;
+            for (const auto& e : r.errors) err << "error: " << e.describe() << "\n";
+            err << r.file << ": not ingested; the club file is unchanged by it\n";
+            break;
+        }
+        if (!progress && r.ok())
+            err << toString(r.status) << ": " << r.matchId << " (" << r.events << " events) from "
+                << r.file << "\n";
+    }
+    if (progress) err << "\r\033[K";
+    err << added << " added, " << replaced << " replaced, " << unchanged << " unchanged, "
+        << failed << " failed\n";
+    return failed ? kExitBadInput : kExitOk;
+}
+
+int cmdMatches(const Globals& g, const std::string& format, std::ostream& out) {
+    auto repo = openClub(g);
+    const auto matches = repo->matches();
+    if (format == "csv") {
+        out << "match_id,date,competition,venue,opponent,goals_us,goals_opp,squad,season,events\n";
+        for (const auto& m : matches)
+            out << csvField(m.id) << ',' << m.date << ',' << csvField(m.competition) << ','
+                << m.venue << ',' << csvField(m.opponent) << ','
+                << (m.goalsUs ? std::to_string(*m.goalsUs) : "") << ','
+                << (m.goalsOpp ? std::to_string(*m.goalsOpp) : "") << ',' << csvField(m.squad)
+                << ',' << m.season << ',' << m.eventCount << "\n";
+        return kExitOk;
+    }
+    for (const auto& m : matches) {
+        char line[256];
+        std::snprintf(line, sizeof line, "%-12s %s  %-5s %-24s %-8s %5d events  %s %s\n",
+                      m.id.c_str(), m.date.c_str(), m.venue.c_str(), m.opponent.c_str(),
+                      scoreLine(m).c_str(), m.eventCount, m.squad.c_str(), m.season.c_str());
+        out << line;
+    }
+    if (matches.empty()) out << "(no matches yet: pitchloop ingest FILE.json)\n";
+    return kExitOk;
+}
+
+int cmdTallies(const Globals& g, const std::string& format, const std::string& match,
+               const std::string& metric, std::ostream& out, std::ostream& err) {
+    auto repo = openClub(g);
+    if (!match.empty() && !repo->sourceOf(match)) {
+        err << "error: no match '" << match << "' in " << g.db << "\n";
+        return kExitBadInput;
+    }
+    if (!metric.empty() && !repo->metric(metric)) {
+        err << "error: no metric '" << metric << "' (see: pitchloop metrics list)\n";
+        return kExitBadInput;
+    }
+    const auto rows = repo->tallies(match.empty() ? std::nullopt : std::optional(match),
+                                    metric.empty() ? std::nullopt : std::optional(metric));
+    if (format == "csv") {
+        out << "match_id,metric,band,lane,num,den\n";
+        for (const auto& r : rows)
+            out << csvField(r.matchId) << ',' << r.metricId << ',' << r.band << ',' << r.lane
+                << ',' << r.num << ',' << r.den << "\n";
+    } else {
+        for (const auto& r : rows) {
+            char line[160];
+            std::snprintf(line, sizeof line, "%-12s %-24s band %d lane %d  %5ld / %-5ld\n",
+                          r.matchId.c_str(), r.metricId.c_str(), r.band, r.lane, r.num, r.den);
+            out << line;
+        }
+    }
+    return kExitOk;
+}
+
+int cmdDebrief(const Globals& g, const std::string& match, const std::vector<std::string>& only,
+               std::ostream& out, std::ostream& err) {
+    auto repo = openClub(g);
+    const auto summary = repo->matchSummary(match);
+    if (!summary) {
+        err << "error: no match '" << match << "' in " << g.db
+            << " (see: pitchloop matches)\n";
+        return kExitBadInput;
+    }
+    const ZoneGrid grid = repo->tallyGrid();
+    out << summary->id << "  " << summary->date << "  " << repo->clubName() << " v "
+        << summary->opponent << " (" << summary->venue << ")  " << scoreLine(*summary) << "\n"
+        << "pitch " << summary->pitch.lengthM << " × " << summary->pitch.widthM << " m, "
+        << summary->eventCount << " events, grid " << grid.name() << "; values are this match's "
+        << "tallies (numerator/denominator)\n\n";
+    std::vector<MetricSpec> specs;
+    if (only.empty()) {
+        specs = builtinMetrics();
+    } else {
+        for (const auto& id : only) {
+            auto spec = repo->metric(id);
+            if (!spec) {
+                err << "error: no metric '" << id << "' (see: pitchloop metrics list)\n";
+                return kExitBadInput;
+            }
+            specs.push_back(*spec);
+        }
+    }
+    for (const auto& spec : specs) printZoneTable(out, spec, grid, repo->matchTally(match, spec.id));
+    return kExitOk;
+}
+
+int cmdMetricsList(const Globals& g, std::ostream& out) {
+    auto repo = openClub(g);
+    for (const auto& m : repo->metrics()) {
+        char line[256];
+        std::snprintf(line, sizeof line, "%-26s %-9s %-7s %s\n", m.id.c_str(),
+                      std::string(toString(m.kind())).c_str(),
+                      std::string(toString(m.better)).c_str(), m.name.c_str());
+        out << line;
+    }
+    return kExitOk;
+}
+
+int cmdMetricsShow(const Globals& g, const std::string& id, std::ostream& out, std::ostream& err) {
+    auto repo = openClub(g);
+    auto m = repo->metric(id);
+    if (!m) {
+        err << "error: no metric '" << id << "'\n";
+        return kExitBadInput;
+    }
+    out << nlohmann::json::parse(m->json).dump(2) << "\n";
+    return kExitOk;
+}
+
+int cmdMetricsAdd(const Globals& g, const std::string& file, bool replace, std::ostream& err) {
+    std::string text;
+    try {
+        text = readFileBytes(file);
+    } catch (const IoError& e) {
+        err << "error: " << file << ": cannot be read\n";
+        return kExitBadInput;
+    }
+    auto [specs, problems] = parseMetricFile(text, file);
+    if (!problems.empty()) {
+        for (const auto& p : problems) err << "error: " << p.describe() << "\n";
+        err << file << ": no metric added\n";
+        return kExitBadInput;
+    }
+    auto repo = openClub(g);
+    for (const auto& spec : specs) {
+        if (repo->metric(spec.id) && !replace) {
+            err << "error: " << file << ": metric '" << spec.id
+                << "' exists; use --replace to redefine it (its tallies are recomputed)\n";
+            return kExitBadInput;
+        }
+    }
+    for (const auto& spec : specs) {
+        repo->saveMetric(spec);
+        err << "saved metric " << spec.id << " and recomputed its tallies\n";
+    }
+    return kExitOk;
+}
+
+} // namespace
+
+int run(int argc, char** argv, std::ostream& out, std::ostream& err) {
+    CLI::App app{"Pitchloop: zone targets, match debriefs, training focuses and follow-ups "
+                 "for a football club's staff."};
+    app.name("pitchloop");
+    app.set_version_flag("--version", std::string("pitchloop ") + PITCHLOOP_VERSION);
+    app.require_subcommand(1);
+    Globals g;
+    g.db = defaultClubFile();
+    app.add_option("--db", g.db, "Club file (SQLite); default $PITCHLOOP_DB or the data folder")
+        ->capture_default_str();
+
+    auto* ingest = app.add_subcommand("ingest", "Load match files (one transaction per file)");
+    std::vector<std::string> files;
+    IngestOptions ingestOptions;
+    std::vector<std::string> typeMaps;
+    ingest->add_option("files", files, "Match files (JSON, format v1)")->required();
+    ingest->add_flag("--replace", ingestOptions.replace,
+                     "Replace stored matches that have the same id");
+    ingest->add_option("--squad", ingestOptions.squad, "Squad the matches belong to")
+        ->capture_default_str();
+    ingest->add_option("--map-type", typeMaps,
+                       "Read a foreign event type as one of ours, e.g. dribble=carry");
+
+    auto* matches = app.add_subcommand("matches", "List stored matches");
+    std::string matchesFormat = "table";
+    matches->add_option("--format", matchesFormat)->check(CLI::IsMember({"table", "csv"}));
+
+    auto* tallies = app.add_subcommand("tallies", "Per-match, per-zone tallies of every metric");
+    std::string talliesFormat = "table", talliesMatch, talliesMetric;
+    tallies->add_option("--format", talliesFormat, "table or csv")
+        ->check(CLI::IsMember({"table", "csv"}));
+    tallies->add_option("--match", talliesMatch, "Only this match id");
+    tallies->add_option("--metric", talliesMetric, "Only this metric id");
+
+    auto* debrief = app.add_subcommand("debrief", "Per-zone values of one match, as tables");
+    std::string debriefMatch;
+    std::vector<std::string> debriefMetrics;
+    debrief->add_option("match", debriefMatch, "Match id (see: pitchloop matches)")->required();
+    debrief->add_option("--metric", debriefMetrics, "Only these metrics (default: built-in)");
+
+    auto* metrics = app.add_subcommand("metrics", "List, show and add metric definitions");
+    metrics->require_subcommand(1);
+    auto* metricsList = metrics->add_subcommand("list", "List metrics");
+    auto* metricsShow = metrics->add_subcommand("show", "Print one metric's spec as JSON");
+    std::string showId;
+    metricsShow->add_option("id", showId)->required();
+    auto* metricsAdd = metrics->add_subcommand("add", "Add metrics from a JSON spec file");
+    std::string addFile;
+    bool addReplace = false;
+    metricsAdd->add_option("file", addFile)->required();
+    metricsAdd->add_flag("--replace", addReplace, "Redefine an existing user metric");
+    auto* metricsRemove = metrics->add_subcommand("remove", "Remove a user metric");
+    std::string removeId;
+    metricsRemove->add_option("id", removeId)->required();
+
+    auto* backup = app.add_subcommand("backup", "Copy the club file while it is in use");
+    std::string backupTarget;
+    backup->add_option("target", backupTarget, "File to write")->required();
+
+    try {
+        app.parse(argc, argv);
+    } catch (const CLI::Success& e) {
+        return app.exit(e, out, err);
+    } catch (const CLI::ParseError& e) {
+        app.exit(e, out, err);
+        return kExitBadInput;
+    }
+
+    try {
+        if (*ingest) {
+            for (const auto& map : typeMaps) {
+                const auto eq = map.find('=');
+                auto type = eq == std::string::npos
+                                ? std::nullopt
+                                : eventTypeFromString(std::string_view(map).substr(eq + 1));
+                if (!type) {
+                    err << "error: --map-type " << map << ": expected NAME=TYPE with one of our "
+                        << "types after '='\n";
+                    return kExitBadInput;
+                }
+                ingestOptions.read.typeMap[map.substr(0, eq)] = *type;
+            }
+            return cmdIngest(g, files, ingestOptions, err);
+        }
+        if (*matches) return cmdMatches(g, matchesFormat, out);
+        if (*tallies) return cmdTallies(g, talliesFormat, talliesMatch, talliesMetric, out, err);
+        if (*debrief) return cmdDebrief(g, debriefMatch, debriefMetrics, out, err);
+        if (*metricsList) return cmdMetricsList(g, out);
+        if (*metricsShow) return cmdMetricsShow(g, showId, out, err);
+        if (*metricsAdd) return cmdMetricsAdd(g, addFile, addReplace, err);
+        if (*metricsRemove) {
+            auto repo = openClub(g);
+            if (!repo->removeMetric(removeId)) {
+                err << "error: no metric '" << removeId << "'\n";
+                return kExitBadInput;
+            }
+            err << "removed metric " << removeId << " and its tallies\n";
+            return kExitOk;
+        }
+        if (*backup) {
+            openClub(g)->backupTo(backupTarget);
+            err << "backed up " << g.db << " to " << backupTarget << "\n";
+            return kExitOk;
+        }
+    } catch (const StorageError& e) {
+        err << "error: " << e.what() << "\n";
+        return kExitFault;
+    } catch (const std::exception& e) {
+        err << "error: " << e.what() << "\n";
+        return kExitFault;
+    }
+    return kExitOk;
+}
+
+} // namespace pitchloop::cli

@@ -1,0 +1,25 @@
+#pragma once
+// Turning model numbers into text for people (tables) and scripts (CSV, RFC 4180).
+
+#include "metricengine.h"
+#include "metricspec.h"
+#include "repository.h"
+
+#include <ostream>
+#include <string>
+#include <vector>
+
+namespace pitchloop::cli {
+
+/// One CSV field, quoted when needed (RFC 4180).
+std::string csvField(const std::string& s);
+
+/// A per-zone table of one metric for one match, drawn as the pitch seen from above with our
+/// goal on the left: lanes as rows (our left touchline at the top), bands as columns.
+void printZoneTable(std::ostream& out, const model::MetricSpec& spec, const model::ZoneGrid& grid,
+                    const model::MatchTally& tally);
+
+/// "2–1 W" style result from our side's point of view.
+std::string scoreLine(const model::MatchSummary& m);
+
+} // namespace pitchloop::cli

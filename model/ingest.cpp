@@ -1,0 +1,73 @@
+#include "ingest.h"
+
+namespace pitchloop::model {
+
+IngestReport ingestBytes(ClubRepository& repo, std::string_view bytes,
+                         const std::string& fileName, const IngestOptions& options) {
+    IngestReport report;
+    report.file = fileName;
+    ReadResult read = parseMatch(bytes, fileName, options.read);
+    report.warnings = std::move(read.warnings);
+    if (!read.ok()) {
+        report.errors = std::move(read.errors);
+        report.status = IngestStatus::Invalid;
+        return report;
+    }
+    const Match& match = *read.match;
+    report.matchId = match.info.id;
+    report.events = static_cast<int>(match.events.size());
+
+    const std::string hash = contentHash(bytes);
+    const auto stored = repo.sourceOf(match.info.id);
+    if (stored && stored->hash == hash) {
+        report.status = IngestStatus::Unchanged;
+        return report;
+    }
+    if (stored && !options.replace) {
+        std::string from = stored->name.empty() ? "" : " from " + stored->name;
+        if (!stored->ingestedAt.empty()) from += " on " + stored->ingestedAt.substr(0, 10);
+        report.errors.push_back({fileName, "match", "id",
+                                 "match '" + match.info.id + "' is already in the club file" +
+                                     from + " with different content; use --replace to replace it"});
+        report.status = IngestStatus::Refused;
+        return report;
+    }
+    const std::string club = repo.clubName();
+    if (!club.empty() && club != match.info.us)
+        report.warnings.push_back({fileName, "match", "us",
+                                   "'" + match.info.us + "' is not this club file's club '" +
+                                       club + "'; stored in squad '" + options.squad + "'"});
+    repo.storeMatch(match, {fileName, hash, {}}, options.squad, stored.has_value());
+    report.status = stored ? IngestStatus::Replaced : IngestStatus::Added;
+    return report;
+}
+
+IngestReport ingestFile(ClubRepository& repo, const std::filesystem::path& file,
+                        const IngestOptions& options) {
+    std::string bytes;
+    try {
+        bytes = readFileBytes(file);
+    } catch (const IoError&) {
+        IngestReport report;
+        report.file = file.string();
+        std::error_code ec;
+        report.errors.push_back({file.string(), "", "",
+                                 std::filesystem::exists(file, ec) ? "cannot be read"
+                                                                   : "no such file"});
+        return report;
+    }
+    return ingestBytes(repo, bytes, file.string(), options);
+}
+
+std::string_view toString(IngestStatus s) {
+    switch (s) {
+    case IngestStatus::Added: return "added";
+    case IngestStatus::Replaced: return "replaced";
+    case IngestStatus::Unchanged: return "unchanged";
+    case IngestStatus::Invalid: return "invalid";
+    case IngestStatus::Refused: return "refused";
+    }
+    return "?";
+}
+
+} // namespace pitchloop::model

@@ -1,0 +1,606 @@
+#include "repository.h"
+
+#include "problem.h"
+
+#include <SQLiteCpp/Backup.h>
+#include <SQLiteCpp/Database.h>
+#include <SQLiteCpp/Statement.h>
+#include <SQLiteCpp/Transaction.h>
+#include <nlohmann/json.hpp>
+
+#include <chrono>
+#include <cstdint>
+#include <cstdio>
+#include <map>
+
+namespace pitchloop::model {
+
+namespace {
+
+// Each entry moves the schema one version up. Never edit a released entry: add a new one.
+const char* const kMigrations[] = {
+    // 1: the first shape of the club file.
+    R"sql(
+CREATE TABLE club(
+  id INTEGER PRIMARY KEY,
+  name TEXT NOT NULL UNIQUE);
+CREATE TABLE squad(
+  id INTEGER PRIMARY KEY,
+  club_id INTEGER NOT NULL REFERENCES club(id) ON DELETE CASCADE,
+  name TEXT NOT NULL,
+  UNIQUE(club_id, name));
+CREATE TABLE season(
+  id INTEGER PRIMARY KEY,
+  squad_id INTEGER NOT NULL REFERENCES squad(id) ON DELETE CASCADE,
+  name TEXT NOT NULL,
+  starts TEXT NOT NULL,
+  ends TEXT NOT NULL,
+  UNIQUE(squad_id, name));
+CREATE TABLE match(
+  id INTEGER PRIMARY KEY,
+  code TEXT NOT NULL UNIQUE,
+  season_id INTEGER NOT NULL REFERENCES season(id),
+  date TEXT NOT NULL,
+  competition TEXT NOT NULL DEFAULT '',
+  venue TEXT NOT NULL,
+  us TEXT NOT NULL,
+  opponent TEXT NOT NULL,
+  goals_us INTEGER,
+  goals_opp INTEGER,
+  length_m REAL NOT NULL,
+  width_m REAL NOT NULL,
+  source_frame TEXT NOT NULL,
+  extra TEXT);
+CREATE INDEX match_by_season ON match(season_id, date);
+CREATE TABLE period(
+  match_id INTEGER NOT NULL REFERENCES match(id) ON DELETE CASCADE,
+  n INTEGER NOT NULL,
+  length_s REAL NOT NULL,
+  PRIMARY KEY(match_id, n)) WITHOUT ROWID;
+CREATE TABLE event(
+  match_id INTEGER NOT NULL REFERENCES match(id) ON DELETE CASCADE,
+  seq INTEGER NOT NULL,
+  file_index INTEGER NOT NULL,
+  period INTEGER NOT NULL,
+  t REAL NOT NULL,
+  side TEXT NOT NULL CHECK(side IN ('us', 'opp')),
+  player TEXT NOT NULL DEFAULT '',
+  type TEXT NOT NULL,
+  result TEXT NOT NULL DEFAULT '',
+  x REAL NOT NULL,
+  y REAL NOT NULL,
+  to_x REAL,
+  to_y REAL,
+  tags TEXT,
+  extra TEXT,
+  PRIMARY KEY(match_id, seq)) WITHOUT ROWID;
+CREATE TABLE metric(
+  id TEXT PRIMARY KEY,
+  spec TEXT NOT NULL,
+  builtin INTEGER NOT NULL DEFAULT 0,
+  position INTEGER NOT NULL);
+CREATE TABLE tally(
+  match_id INTEGER NOT NULL REFERENCES match(id) ON DELETE CASCADE,
+  metric_id TEXT NOT NULL REFERENCES metric(id) ON DELETE CASCADE,
+  band INTEGER NOT NULL,
+  lane INTEGER NOT NULL,
+  num INTEGER NOT NULL,
+  den INTEGER NOT NULL,
+  PRIMARY KEY(match_id, metric_id, band, lane)) WITHOUT ROWID;
+)sql",
+    // 2: remember each match's source file (to recognise re-ingests) and club settings.
+    R"sql(
+ALTER TABLE match ADD COLUMN source_name TEXT NOT NULL DEFAULT '';
+ALTER TABLE match ADD COLUMN source_hash TEXT NOT NULL DEFAULT '';
+ALTER TABLE match ADD COLUMN ingested_at TEXT NOT NULL DEFAULT '';
+CREATE TABLE setting(
+  key TEXT PRIMARY KEY,
+  value TEXT NOT NULL) WITHOUT ROWID;
+INSERT INTO setting(key, value) VALUES ('tally_grid', 'equal:6x5');
+)sql",
+};
+
+static_assert(std::size(kMigrations) == ClubRepository::kSchemaVersion);
+
+std::string nowUtc() {
+    const auto now = std::chrono::system_clock::now();
+    const std::time_t tt = std::chrono::system_clock::to_time_t(now);
+    std::tm tm{};
+    gmtime_r(&tt, &tm);
+    char buf[32];
+    std::strftime(buf, sizeof buf, "%Y-%m-%dT%H:%M:%SZ", &tm);
+    return buf;
+}
+
+template <typename F>
+auto guarded(const char* what, F&& f) -> decltype(f()) {
+    try {
+        return f();
+    } catch (const SQLite::Exception& e) {
+        throw StorageError(std::string(what) + ": " + e.what());
+    }
+}
+
+void bindOptionalInt(SQLite::Statement& st, int index, const std::optional<int>& v) {
+    if (v) st.bind(index, *v);
+    else st.bind(index);
+}
+
+std::optional<int> optionalInt(const SQLite::Column& c) {
+    if (c.isNull()) return std::nullopt;
+    return c.getInt();
+}
+
+const char* kSummaryColumns =
+    "m.code, m.date, m.competition, m.venue, m.opponent, m.goals_us, m.goals_opp, sq.name, "
+    "se.name, m.length_m, m.width_m, (SELECT count(*) FROM event e WHERE e.match_id = m.id), "
+    "m.source_name, m.source_hash, m.ingested_at "
+    "FROM match m JOIN season se ON se.id = m.season_id JOIN squad sq ON sq.id = se.squad_id ";
+
+MatchSummary readSummary(SQLite::Statement& q) {
+    MatchSummary s;
+    s.id = q.getColumn(0).getString();
+    s.date = q.getColumn(1).getString();
+    s.competition = q.getColumn(2).getString();
+    s.venue = q.getColumn(3).getString();
+    s.opponent = q.getColumn(4).getString();
+    s.goalsUs = optionalInt(q.getColumn(5));
+    s.goalsOpp = optionalInt(q.getColumn(6));
+    s.squad = q.getColumn(7).getString();
+    s.season = q.getColumn(8).getString();
+    s.pitch = {q.getColumn(9).getDouble(), q.getColumn(10).getDouble()};
+    s.eventCount = q.getColumn(11).getInt();
+    s.source = {q.getColumn(12).getString(), q.getColumn(13).getString(),
+                q.getColumn(14).getString()};
+    return s;
+}
+
+} // namespace
+
+std::string contentHash(std::string_view bytes) {
+    std::uint64_t h = 14695981039346656037ull;
+    for (unsigned char c : bytes) {
+        h ^= c;
+        h *= 1099511628211ull;
+    }
+    char buf[17];
+    std::snprintf(buf, sizeof buf, "%016llx", static_cast<unsigned long long>(h));
+    return buf;
+}
+
+std::string seasonOf(const std::string& isoDate) {
+    const int year = std::stoi(isoDate.substr(0, 4));
+    const int month = std::stoi(isoDate.substr(5, 2));
+    const int first = month >= 7 ? year : year - 1;
+    char buf[16];
+    std::snprintf(buf, sizeof buf, "%d-%02d", first, (first + 1) % 100);
+    return buf;
+}
+
+void ClubRepository::migrate(SQLite::Database& db, int version) {
+    const int current = db.execAndGet("PRAGMA user_version").getInt();
+    if (current > kSchemaVersion)
+        throw StorageError("the club file has schema version " + std::to_string(current) +
+                           ", newer than this Pitchloop understands (" +
+                           std::to_string(kSchemaVersion) + "); use a newer Pitchloop");
+    for (int v = current + 1; v <= version; ++v) {
+        SQLite::Transaction tx(db);
+        db.exec(kMigrations[v - 1]);
+        db.exec("PRAGMA user_version = " + std::to_string(v));
+        tx.commit();
+    }
+}
+
+ClubRepository::ClubRepository(const std::string& file) {
+    guarded("cannot open club file", [&] {
+        m_db = std::make_unique<SQLite::Database>(file, SQLite::OPEN_READWRITE |
+                                                            SQLite::OPEN_CREATE);
+        m_db->exec("PRAGMA foreign_keys = ON");
+        if (file != ":memory:") {
+            m_db->exec("PRAGMA journal_mode = WAL");
+            m_db->exec("PRAGMA synchronous = NORMAL");
+        }
+        m_db->setBusyTimeout(5000);
+        migrate(*m_db, kSchemaVersion);
+        // Built-in metrics are always present; a newer Pitchloop may have changed them.
+        for (const auto& spec : builtinMetrics()) {
+            SQLite::Statement q(*m_db, "SELECT spec FROM metric WHERE id = ?");
+            q.bind(1, spec.id);
+            if (!q.executeStep() || q.getColumn(0).getString() != spec.json) saveMetric(spec);
+        }
+        return 0;
+    });
+}
+
+ClubRepository::~ClubRepository() = default;
+
+int ClubRepository::schemaVersion() const {
+    return guarded("cannot read schema version",
+                   [&] { return m_db->execAndGet("PRAGMA user_version").getInt(); });
+}
+
+std::string ClubRepository::clubName() const {
+    return guarded("cannot read club", [&] {
+        SQLite::Statement q(*m_db, "SELECT name FROM club ORDER BY id LIMIT 1");
+        return q.executeStep() ? q.getColumn(0).getString() : std::string{};
+    });
+}
+
+ZoneGrid ClubRepository::tallyGrid() const {
+    return guarded("cannot read settings", [&] {
+        SQLite::Statement q(*m_db, "SELECT value FROM setting WHERE key = 'tally_grid'");
+        if (q.executeStep())
+            if (auto g = ZoneGrid::parse(q.getColumn(0).getString())) return *g;
+        return ZoneGrid{};
+    });
+}
+
+std::vector<MetricSpec> ClubRepository::metrics() const {
+    return guarded("cannot read metrics", [&] {
+        std::vector<MetricSpec> out;
+        SQLite::Statement q(*m_db, "SELECT id, spec FROM metric ORDER BY position, id");
+        while (q.executeStep()) {
+            auto parsed = parseMetricSpec(q.getColumn(1).getString(), "club file");
+            if (!parsed.spec)
+                throw StorageError("stored metric '" + q.getColumn(0).getString() +
+                                   "' no longer parses:\n" + describeAll(parsed.errors));
+            out.push_back(std::move(*parsed.spec));
+        }
+        return out;
+    });
+}
+
+std::optional<MetricSpec> ClubRepository::metric(const std::string& id) const {
+    for (auto& m : metrics())
+        if (m.id == id) return m;
+    return std::nullopt;
+}
+
+void ClubRepository::saveMetric(const MetricSpec& spec) {
+    guarded("cannot save metric", [&] {
+        bool builtin = false;
+        for (const auto& b : builtinMetrics()) {
+            if (b.id != spec.id) continue;
+            if (b.json != spec.json)
+                throw StorageError("'" + spec.id +
+                                   "' is a built-in metric; give your variant its own id");
+            builtin = true;
+        }
+        SQLite::Transaction tx(*m_db);
+        SQLite::Statement q(*m_db,
+                            "INSERT INTO metric(id, spec, builtin, position) VALUES (?, ?, ?, "
+                            "(SELECT coalesce(max(position), 0) + 1 FROM metric)) "
+                            "ON CONFLICT(id) DO UPDATE SET spec = excluded.spec, "
+                            "builtin = excluded.builtin");
+        q.bind(1, spec.id);
+        q.bind(2, spec.json);
+        q.bind(3, builtin ? 1 : 0);
+        q.exec();
+        SQLite::Statement ids(*m_db, "SELECT id FROM match");
+        std::vector<std::int64_t> rows;
+        while (ids.executeStep()) rows.push_back(ids.getColumn(0).getInt64());
+        SQLite::Statement code(*m_db, "SELECT code FROM match WHERE id = ?");
+        for (std::int64_t row : rows) {
+            code.reset();
+            code.bind(1, row);
+            code.executeStep();
+            auto match = loadMatch(code.getColumn(0).getString());
+            writeTallies(row, *match, {spec});
+        }
+        tx.commit();
+        return 0;
+    });
+}
+
+bool ClubRepository::removeMetric(const std::string& id) {
+    for (const auto& b : builtinMetrics())
+        if (b.id == id) throw StorageError("'" + id + "' is a built-in metric and stays");
+    return guarded("cannot remove metric", [&] {
+        SQLite::Statement q(*m_db, "DELETE FROM metric WHERE id = ?");
+        q.bind(1, id);
+        return q.exec() > 0;
+    });
+}
+
+std::optional<SourceFile> ClubRepository::sourceOf(const std::string& matchId) const {
+    return guarded("cannot read match", [&]() -> std::optional<SourceFile> {
+        SQLite::Statement q(*m_db,
+                            "SELECT source_name, source_hash, ingested_at FROM match WHERE code = ?");
+        q.bind(1, matchId);
+        if (!q.executeStep()) return std::nullopt;
+        return SourceFile{q.getColumn(0).getString(), q.getColumn(1).getString(),
+                          q.getColumn(2).getString()};
+    });
+}
+
+std::vector<MatchSummary> ClubRepository::matches() const {
+    return guarded("cannot list matches", [&] {
+        std::vector<MatchSummary> out;
+        SQLite::Statement q(*m_db, std::string("SELECT ") + kSummaryColumns +
+                                       "ORDER BY m.date, m.code");
+        while (q.executeStep()) out.push_back(readSummary(q));
+        return out;
+    });
+}
+
+std::optional<MatchSummary> ClubRepository::matchSummary(const std::string& matchId) const {
+    return guarded("cannot read match", [&]() -> std::optional<MatchSummary> {
+        SQLite::Statement q(*m_db, std::string("SELECT ") + kSummaryColumns + "WHERE m.code = ?");
+        q.bind(1, matchId);
+        if (!q.executeStep()) return std::nullopt;
+        return readSummary(q);
+    });
+}
+
+std::optional<Match> ClubRepository::loadMatch(const std::string& matchId) const {
+    return guarded("cannot load match", [&]() -> std::optional<Match> {
+        SQLite::Statement q(*m_db,
+                            "SELECT id, code, date, competition, venue, us, opponent, goals_us, "
+                            "goals_opp, length_m, width_m, source_frame, extra "
+                            "FROM match WHERE code = ?");
+        q.bind(1, matchId);
+        if (!q.executeStep()) return std::nullopt;
+        Match m;
+        const std::int64_t row = q.getColumn(0).getInt64();
+        MatchInfo& info = m.info;
+        info.id = q.getColumn(1).getString();
+        info.date = q.getColumn(2).getString();
+        info.competition = q.getColumn(3).getString();
+        info.venue = q.getColumn(4).getString();
+        info.us = q.getColumn(5).getString();
+        info.opponent = q.getColumn(6).getString();
+        info.goalsUs = optionalInt(q.getColumn(7));
+        info.goalsOpp = optionalInt(q.getColumn(8));
+        info.pitch = {q.getColumn(9).getDouble(), q.getColumn(10).getDouble()};
+        info.sourceFrame = frameFromString(q.getColumn(11).getString()).value_or(Frame::Acting);
+        info.extra = q.getColumn(12).isNull() ? "" : q.getColumn(12).getString();
+
+        SQLite::Statement p(*m_db, "SELECT n, length_s FROM period WHERE match_id = ? ORDER BY n");
+        p.bind(1, row);
+        while (p.executeStep())
+            info.periods.push_back({p.getColumn(0).getInt(), p.getColumn(1).getDouble()});
+
+        SQLite::Statement e(*m_db,
+                            "SELECT file_index, period, t, side, player, type, result, x, y, "
+                            "to_x, to_y, tags, extra FROM event WHERE match_id = ? ORDER BY seq");
+        e.bind(1, row);
+        while (e.executeStep()) {
+            Event ev;
+            ev.fileIndex = e.getColumn(0).getInt();
+            ev.period = e.getColumn(1).getInt();
+            ev.t = e.getColumn(2).getDouble();
+            ev.side = sideFromString(e.getColumn(3).getString()).value_or(Side::Us);
+            ev.player = e.getColumn(4).getString();
+            const std::string type = e.getColumn(5).getString();
+            auto t = eventTypeFromString(type);
+            if (!t) throw StorageError("stored event has unknown type '" + type + "'");
+            ev.type = *t;
+            ev.result = resultFromString(e.getColumn(6).getString()).value_or(Result::None);
+            ev.at = {e.getColumn(7).getDouble(), e.getColumn(8).getDouble()};
+            if (!e.getColumn(9).isNull())
+                ev.to = Point{e.getColumn(9).getDouble(), e.getColumn(10).getDouble()};
+            if (!e.getColumn(11).isNull())
+                ev.tags = nlohmann::json::parse(e.getColumn(11).getString())
+                              .get<std::vector<std::string>>();
+            if (!e.getColumn(12).isNull()) ev.extra = e.getColumn(12).getString();
+            m.events.push_back(std::move(ev));
+        }
+        return m;
+    });
+}
+
+void ClubRepository::storeMatch(const Match& match, const SourceFile& source,
+                                const std::string& squad, bool replace) {
+    const auto specs = metrics();
+    guarded("cannot store match", [&] {
+        SQLite::Transaction tx(*m_db);
+        const MatchInfo& info = match.info;
+        if (replace) {
+            SQLite::Statement del(*m_db, "DELETE FROM match WHERE code = ?");
+            del.bind(1, info.id);
+            del.exec();
+        }
+        // Club, squad and season are found or made on the fly.
+        {
+            SQLite::Statement q(*m_db, "INSERT OR IGNORE INTO club(name) SELECT ? WHERE NOT "
+                                       "EXISTS (SELECT 1 FROM club)");
+            q.bind(1, info.us);
+            q.exec();
+        }
+        const std::int64_t clubId = m_db->execAndGet("SELECT min(id) FROM club").getInt64();
+        {
+            SQLite::Statement q(*m_db, "INSERT OR IGNORE INTO squad(club_id, name) VALUES (?, ?)");
+            q.bind(1, clubId);
+            q.bind(2, squad);
+            q.exec();
+        }
+        SQLite::Statement sq(*m_db, "SELECT id FROM squad WHERE club_id = ? AND name = ?");
+        sq.bind(1, clubId);
+        sq.bind(2, squad);
+        sq.executeStep();
+        const std::int64_t squadId = sq.getColumn(0).getInt64();
+        std::int64_t seasonId = 0;
+        {
+            SQLite::Statement q(*m_db, "SELECT id FROM season WHERE squad_id = ? AND starts <= ? "
+                                       "AND ends >= ? ORDER BY starts DESC LIMIT 1");
+            q.bind(1, squadId);
+            q.bind(2, info.date);
+            q.bind(3, info.date);
+            if (q.executeStep()) {
+                seasonId = q.getColumn(0).getInt64();
+            } else {
+                const std::string name = seasonOf(info.date);
+                const int first = std::stoi(name.substr(0, 4));
+                SQLite::Statement ins(*m_db, "INSERT INTO season(squad_id, name, starts, ends) "
+                                             "VALUES (?, ?, ?, ?)");
+                ins.bind(1, squadId);
+                ins.bind(2, name);
+                ins.bind(3, std::to_string(first) + "-07-01");
+                ins.bind(4, std::to_string(first + 1) + "-06-30");
+                ins.exec();
+                seasonId = m_db->getLastInsertRowid();
+            }
+        }
+        SQLite::Statement ins(*m_db,
+                              "INSERT INTO match(code, season_id, date, competition, venue, us, "
+                              "opponent, goals_us, goals_opp, length_m, width_m, source_frame, "
+                              "extra, source_name, source_hash, ingested_at) "
+                              "VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)");
+        ins.bind(1, info.id);
+        ins.bind(2, seasonId);
+        ins.bind(3, info.date);
+        ins.bind(4, info.competition);
+        ins.bind(5, info.venue);
+        ins.bind(6, info.us);
+        ins.bind(7, info.opponent);
+        bindOptionalInt(ins, 8, info.goalsUs);
+        bindOptionalInt(ins, 9, info.goalsOpp);
+        ins.bind(10, info.pitch.lengthM);
+        ins.bind(11, info.pitch.widthM);
+        ins.bind(12, std::string(toString(info.sourceFrame)));
+        if (info.extra.empty()) ins.bind(13);
+        else ins.bind(13, info.extra);
+        ins.bind(14, source.name);
+        ins.bind(15, source.hash);
+        ins.bind(16, source.ingestedAt.empty() ? nowUtc() : source.ingestedAt);
+        ins.exec();
+        const std::int64_t row = m_db->getLastInsertRowid();
+
+        SQLite::Statement per(*m_db, "INSERT INTO period(match_id, n, length_s) VALUES (?, ?, ?)");
+        for (const auto& p : info.periods) {
+            per.reset();
+            per.bind(1, row);
+            per.bind(2, p.n);
+            per.bind(3, p.lengthS);
+            per.exec();
+        }
+        SQLite::Statement ev(*m_db,
+                             "INSERT INTO event(match_id, seq, file_index, period, t, side, "
+                             "player, type, result, x, y, to_x, to_y, tags, extra) "
+                             "VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)");
+        int seq = 0;
+        for (const Event& e : match.events) {
+            ev.reset();
+            ev.clearBindings();
+            ev.bind(1, row);
+            ev.bind(2, seq++);
+            ev.bind(3, e.fileIndex);
+            ev.bind(4, e.period);
+            ev.bind(5, e.t);
+            ev.bindNoCopy(6, toString(e.side).data());
+            ev.bind(7, e.player);
+            ev.bindNoCopy(8, toString(e.type).data());
+            ev.bindNoCopy(9, toString(e.result).data());
+            ev.bind(10, e.at.x);
+            ev.bind(11, e.at.y);
+            if (e.to) {
+                ev.bind(12, e.to->x);
+                ev.bind(13, e.to->y);
+            }
+            if (!e.tags.empty()) ev.bind(14, nlohmann::json(e.tags).dump());
+            if (!e.extra.empty()) ev.bind(15, e.extra);
+            ev.exec();
+        }
+        writeTallies(row, match, specs);
+        tx.commit();
+        return 0;
+    });
+}
+
+void ClubRepository::writeTallies(std::int64_t matchRowId, const Match& match,
+                                  const std::vector<MetricSpec>& specs) {
+    const ZoneGrid grid = tallyGrid();
+    const MatchFacts facts(match);
+    SQLite::Statement del(*m_db, "DELETE FROM tally WHERE match_id = ? AND metric_id = ?");
+    SQLite::Statement ins(*m_db, "INSERT INTO tally(match_id, metric_id, band, lane, num, den) "
+                                 "VALUES (?, ?, ?, ?, ?, ?)");
+    for (const auto& spec : specs) {
+        del.reset();
+        del.bind(1, matchRowId);
+        del.bind(2, spec.id);
+        del.exec();
+        const MatchTally tally = computeTally(facts, spec, grid);
+        for (int i = 0; i < grid.zoneCount(); ++i) {
+            const ZoneTally& z = tally[static_cast<std::size_t>(i)];
+            if (z.num == 0 && z.den == 0) continue;
+            const Zone zone = grid.zoneAt(i);
+            ins.reset();
+            ins.bind(1, matchRowId);
+            ins.bind(2, spec.id);
+            ins.bind(3, zone.band);
+            ins.bind(4, zone.lane);
+            ins.bind(5, static_cast<std::int64_t>(z.num));
+            ins.bind(6, static_cast<std::int64_t>(z.den));
+            ins.exec();
+        }
+    }
+}
+
+std::vector<TallyRow> ClubRepository::tallies(const std::optional<std::string>& matchId,
+                                              const std::optional<std::string>& metricId) const {
+    return guarded("cannot read tallies", [&] {
+        std::vector<TallyRow> out;
+        SQLite::Statement q(*m_db,
+                            "SELECT m.code, t.metric_id, t.band, t.lane, t.num, t.den "
+                            "FROM tally t JOIN match m ON m.id = t.match_id "
+                            "JOIN metric k ON k.id = t.metric_id "
+                            "WHERE t.den <> 0 AND (?1 IS NULL OR m.code = ?1) "
+                            "AND (?2 IS NULL OR t.metric_id = ?2) "
+                            "ORDER BY m.date, m.code, k.position, t.band, t.lane");
+        if (matchId) q.bind(1, *matchId);
+        if (metricId) q.bind(2, *metricId);
+        while (q.executeStep())
+            out.push_back({q.getColumn(0).getString(), q.getColumn(1).getString(),
+                           q.getColumn(2).getInt(), q.getColumn(3).getInt(),
+                           static_cast<long>(q.getColumn(4).getInt64()),
+                           static_cast<long>(q.getColumn(5).getInt64())});
+        return out;
+    });
+}
+
+MatchTally ClubRepository::matchTally(const std::string& matchId,
+                                      const std::string& metricId) const {
+    const ZoneGrid grid = tallyGrid();
+    return guarded("cannot read tallies", [&] {
+        MatchTally out(static_cast<std::size_t>(grid.zoneCount()));
+        SQLite::Statement q(*m_db, "SELECT t.band, t.lane, t.num, t.den FROM tally t JOIN match "
+                                   "m ON m.id = t.match_id WHERE m.code = ? AND t.metric_id = ?");
+        q.bind(1, matchId);
+        q.bind(2, metricId);
+        while (q.executeStep()) {
+            const Zone z{q.getColumn(0).getInt(), q.getColumn(1).getInt()};
+            if (z.band < 1 || z.band > grid.bands() || z.lane < 1 || z.lane > grid.lanes())
+                continue;
+            out[static_cast<std::size_t>(grid.indexOf(z))] = {
+                static_cast<long>(q.getColumn(2).getInt64()),
+                static_cast<long>(q.getColumn(3).getInt64())};
+        }
+        return out;
+    });
+}
+
+void ClubRepository::recomputeTallies(const std::optional<std::string>& metricId) {
+    std::vector<MetricSpec> specs = metrics();
+    if (metricId)
+        std::erase_if(specs, [&](const MetricSpec& s) { return s.id != *metricId; });
+    guarded("cannot recompute tallies", [&] {
+        SQLite::Transaction tx(*m_db);
+        std::vector<std::pair<std::int64_t, std::string>> rows;
+        SQLite::Statement q(*m_db, "SELECT id, code FROM match");
+        while (q.executeStep()) rows.emplace_back(q.getColumn(0).getInt64(), q.getColumn(1).getString());
+        for (const auto& [row, code] : rows) writeTallies(row, *loadMatch(code), specs);
+        tx.commit();
+        return 0;
+    });
+}
+
+void ClubRepository::backupTo(const std::string& target) const {
+    guarded("cannot back up club file", [&] {
+        SQLite::Database out(target, SQLite::OPEN_READWRITE | SQLite::OPEN_CREATE);
+        SQLite::Backup backup(out, *m_db);
+        backup.executeStep(-1);
+        return 0;
+    });
+}
+
+} // namespace pitchloop::model

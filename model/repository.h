@@ -1,0 +1,115 @@
+#pragma once
+// The club file: one SQLite database per club holding squads, seasons, matches, their events,
+// metric definitions and per-match zone tallies (docs/storage.md).
+
+#include "metricengine.h"
+#include "metricspec.h"
+#include "types.h"
+#include "zones.h"
+
+#include <cstdint>
+#include <filesystem>
+#include <memory>
+#include <optional>
+#include <string>
+#include <vector>
+
+namespace SQLite {
+class Database;
+}
+
+namespace pitchloop::model {
+
+/// Where a stored match came from, to recognise a re-ingest of the same file.
+struct SourceFile {
+    std::string name;  ///< file name as given
+    std::string hash;  ///< FNV-1a 64 of the bytes, hex
+    std::string ingestedAt; ///< ISO 8601 UTC time of ingest
+};
+
+struct MatchSummary {
+    std::string id;
+    std::string date;
+    std::string competition;
+    std::string venue;
+    std::string opponent;
+    std::optional<int> goalsUs;
+    std::optional<int> goalsOpp;
+    std::string squad;
+    std::string season;
+    Pitch pitch;
+    int eventCount = 0;
+    SourceFile source;
+};
+
+struct TallyRow {
+    std::string matchId;
+    std::string metricId;
+    int band = 0;
+    int lane = 0;
+    long num = 0;
+    long den = 0;
+};
+
+/// Owns the SQLite connection; returns domain structs. Throws StorageError on faults.
+class ClubRepository {
+public:
+    static constexpr int kSchemaVersion = 2;
+
+    /// Opens (creating when missing) and migrates the club file. ":memory:" works for tests.
+    explicit ClubRepository(const std::string& file);
+    ~ClubRepository();
+    ClubRepository(const ClubRepository&) = delete;
+    ClubRepository& operator=(const ClubRepository&) = delete;
+
+    int schemaVersion() const;
+    std::string clubName() const; ///< empty until the first match names it
+    ZoneGrid tallyGrid() const;
+
+    // Metrics --------------------------------------------------------------------------
+    std::vector<MetricSpec> metrics() const;
+    std::optional<MetricSpec> metric(const std::string& id) const;
+    /// Adds or replaces a metric and recomputes its tallies for every stored match, in one
+    /// transaction. Built-in metrics cannot be replaced by user metrics of the same id.
+    void saveMetric(const MetricSpec& spec);
+    bool removeMetric(const std::string& id);
+
+    // Matches --------------------------------------------------------------------------
+    std::optional<SourceFile> sourceOf(const std::string& matchId) const;
+    std::vector<MatchSummary> matches() const;
+    std::optional<MatchSummary> matchSummary(const std::string& matchId) const;
+    std::optional<Match> loadMatch(const std::string& matchId) const;
+
+    /// Stores a match with its events and tallies in one transaction, replacing a stored
+    /// match of the same id when `replace` (the caller decides whether that is allowed).
+    void storeMatch(const Match& match, const SourceFile& source, const std::string& squad,
+                    bool replace);
+
+    // Tallies --------------------------------------------------------------------------
+    /// Stored tallies with a non-zero denominator, ordered by match date, id, metric, zone.
+    std::vector<TallyRow> tallies(const std::optional<std::string>& matchId = std::nullopt,
+                                  const std::optional<std::string>& metricId = std::nullopt) const;
+    /// One match's tally for one metric, dense over the stored grid.
+    MatchTally matchTally(const std::string& matchId, const std::string& metricId) const;
+    /// Recomputes stored tallies from stored events (all metrics, or one).
+    void recomputeTallies(const std::optional<std::string>& metricId = std::nullopt);
+
+    /// Online backup of the whole club file to `target`.
+    void backupTo(const std::string& target) const;
+
+    /// Applies migrations 1..`version` to a database (tests use it to build old files).
+    static void migrate(SQLite::Database& db, int version);
+
+private:
+    void writeTallies(std::int64_t matchRowId, const Match& match,
+                      const std::vector<MetricSpec>& specs);
+    std::unique_ptr<SQLite::Database> m_db;
+};
+
+/// FNV-1a 64-bit hash of bytes as 16 hex digits (identity of a source file, not security).
+std::string contentHash(std::string_view bytes);
+
+/// The season a date falls in under the July–June convention, e.g. "2026-27".
+std::string seasonOf(const std::string& isoDate);
+
+} // namespace pitchloop::model

@@ -1,0 +1,87 @@
+#pragma once
+// Zone grids (BRIEF §4): bands along the length from our goal line × lanes across from our
+// right touchline, scaled to each match's pitch.
+
+#include "types.h"
+
+#include <optional>
+#include <string>
+#include <string_view>
+#include <vector>
+
+namespace pitchloop::model {
+
+/// Law 1 of the Laws of the Game: goal area 18.32 m wide, penalty area 40.32 m wide.
+inline constexpr double kGoalAreaWidthM = 18.32;
+inline constexpr double kPenaltyAreaWidthM = 40.32;
+
+struct Zone {
+    int band = 1; ///< 1-based, band 1 at our goal line
+    int lane = 1; ///< 1-based, lane 1 at our right touchline
+    bool operator==(const Zone&) const = default;
+};
+
+/// A way of cutting a pitch into zones.
+class ZoneGrid {
+public:
+    enum class Kind {
+        Equal,    ///< `bands` × `lanes` of equal size
+        Markings, ///< `bands` equal bands; five lanes cut at the penalty- and goal-area lines
+    };
+
+    /// The default grid: 6 bands × 5 lanes of equal size (common practice, no published source).
+    ZoneGrid() = default;
+    static ZoneGrid equal(int bands, int lanes);
+    static ZoneGrid markings(int bands);
+
+    /// Parses "equal:6x5" or "markings:6"; nullopt when the text is not a grid.
+    static std::optional<ZoneGrid> parse(std::string_view text);
+    /// The text `parse` reads back.
+    std::string name() const;
+
+    Kind kind() const { return m_kind; }
+    int bands() const { return m_bands; }
+    int lanes() const { return m_lanes; }
+    int zoneCount() const { return m_bands * m_lanes; }
+
+    /// Band edges along the length (bands + 1 values from 0 to length).
+    std::vector<double> bandEdges(const Pitch& pitch) const;
+    /// Lane edges across the width (lanes + 1 values from 0 to width).
+    std::vector<double> laneEdges(const Pitch& pitch) const;
+
+    /// The zone holding `p`; a point on a boundary goes to the higher index, the far edge to
+    /// the last. Points are expected on the pitch (the reader clamps them).
+    Zone zoneOf(Point p, const Pitch& pitch) const;
+
+    /// 0-based position of a zone in band-major order: (band − 1) × lanes + (lane − 1).
+    int indexOf(Zone z) const { return (z.band - 1) * m_lanes + (z.lane - 1); }
+    Zone zoneAt(int index) const { return {index / m_lanes + 1, index % m_lanes + 1}; }
+
+    bool operator==(const ZoneGrid&) const = default;
+
+private:
+    ZoneGrid(Kind kind, int bands, int lanes) : m_kind(kind), m_bands(bands), m_lanes(lanes) {}
+    Kind m_kind = Kind::Equal;
+    int m_bands = 6;
+    int m_lanes = 5;
+};
+
+/// A grid fitted to one pitch, with its edges computed once (for per-event lookups).
+class ZoneLocator {
+public:
+    ZoneLocator(const ZoneGrid& grid, const Pitch& pitch);
+    Zone zoneOf(Point p) const;
+    int indexOf(Point p) const { return m_grid.indexOf(zoneOf(p)); }
+    const ZoneGrid& grid() const { return m_grid; }
+
+private:
+    ZoneGrid m_grid;
+    std::vector<double> m_bandEdges;
+    std::vector<double> m_laneEdges;
+};
+
+/// Index of the bin holding `v`: the number of edges ≤ v among the inner ones, so a value on a
+/// boundary goes up; v ≥ the last edge falls in the last bin. Returns 1-based.
+int binOf(double v, const std::vector<double>& edges);
+
+} // namespace pitchloop::model
