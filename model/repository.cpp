@@ -558,6 +558,30 @@ std::vector<TallyRow> ClubRepository::tallies(const std::optional<std::string>& 
     });
 }
 
+std::vector<TallyRow> ClubRepository::talliesOnGrid(
+    const ZoneGrid& grid, const std::optional<std::string>& matchId,
+    const std::optional<std::string>& metricId) const {
+    if (grid == tallyGrid()) return tallies(matchId, metricId);
+    std::vector<MetricSpec> specs = metrics();
+    if (metricId) std::erase_if(specs, [&](const MetricSpec& s) { return s.id != *metricId; });
+    std::vector<TallyRow> out;
+    for (const auto& summary : matches()) {
+        if (matchId && summary.id != *matchId) continue;
+        const auto match = loadMatch(summary.id);
+        const MatchFacts facts(*match);
+        for (const auto& spec : specs) {
+            const MatchTally tally = computeTally(facts, spec, grid);
+            for (int i = 0; i < grid.zoneCount(); ++i) {
+                const ZoneTally& z = tally[static_cast<std::size_t>(i)];
+                if (z.den == 0) continue;
+                const Zone zone = grid.zoneAt(i);
+                out.push_back({summary.id, spec.id, zone.band, zone.lane, z.num, z.den});
+            }
+        }
+    }
+    return out;
+}
+
 MatchTally ClubRepository::matchTally(const std::string& matchId,
                                       const std::string& metricId) const {
     const ZoneGrid grid = tallyGrid();

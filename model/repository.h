@@ -89,6 +89,10 @@ public:
     /// Stored tallies with a non-zero denominator, ordered by match date, id, metric, zone.
     std::vector<TallyRow> tallies(const std::optional<std::string>& matchId = std::nullopt,
                                   const std::optional<std::string>& metricId = std::nullopt) const;
+    /// The same on another grid, computed from the stored events (nothing is stored).
+    std::vector<TallyRow> talliesOnGrid(const ZoneGrid& grid,
+                                        const std::optional<std::string>& matchId,
+                                        const std::optional<std::string>& metricId) const;
     /// One match's tally for one metric, dense over the stored grid.
     MatchTally matchTally(const std::string& matchId, const std::string& metricId) const;
     /// Recomputes stored tallies from stored events (all metrics, or one).

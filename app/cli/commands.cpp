@@ -101,9 +101,23 @@ int cmdMatches(const Globals& g, const std::string& format, std::ostream& out) {
     return kExitOk;
 }
 
+/// The grid named by --grid, or the club's stored grid when none is given.
+std::optional<ZoneGrid> chooseGrid(const ClubRepository& repo, const std::string& text,
+                                   std::ostream& err) {
+    if (text.empty()) return repo.tallyGrid();
+    auto grid = ZoneGrid::parse(text);
+    if (!grid)
+        err << "error: --grid " << text << ": expected equal:BANDSxLANES (e.g. equal:6x5) or "
+            << "markings:BANDS (lanes cut at the penalty- and goal-area lines)\n";
+    return grid;
+}
+
 int cmdTallies(const Globals& g, const std::string& format, const std::string& match,
-               const std::string& metric, std::ostream& out, std::ostream& err) {
+               const std::string& metric, const std::string& gridText, std::ostream& out,
+               std::ostream& err) {
     auto repo = openClub(g);
+    const auto grid = chooseGrid(*repo, gridText, err);
+    if (!grid) return kExitBadInput;
     if (!match.empty() && !repo->sourceOf(match)) {
         err << "error: no match '" << match << "' in " << g.db << "\n";
         return kExitBadInput;
@@ -112,8 +126,8 @@ int cmdTallies(const Globals& g, const std::string& format, const std::string& m
         err << "error: no metric '" << metric << "' (see: pitchloop metrics list)\n";
         return kExitBadInput;
     }
-    const auto rows = repo->tallies(match.empty() ? std::nullopt : std::optional(match),
-                                    metric.empty() ? std::nullopt : std::optional(metric));
+    const auto rows = repo->talliesOnGrid(*grid, match.empty() ? std::nullopt : std::optional(match),
+                                          metric.empty() ? std::nullopt : std::optional(metric));
     if (format == "csv") {
         out << "match_id,metric,band,lane,num,den\n";
         for (const auto& r : rows)
@@ -131,7 +145,7 @@ int cmdTallies(const Globals& g, const std::string& format, const std::string& m
 }
 
 int cmdDebrief(const Globals& g, const std::string& match, const std::vector<std::string>& only,
-               std::ostream& out, std::ostream& err) {
+               const std::string& gridText, std::ostream& out, std::ostream& err) {
     auto repo = openClub(g);
     const auto summary = repo->matchSummary(match);
     if (!summary) {
@@ -139,7 +153,9 @@ int cmdDebrief(const Globals& g, const std::string& match, const std::vector<std
             << " (see: pitchloop matches)\n";
         return kExitBadInput;
     }
-    const ZoneGrid grid = repo->tallyGrid();
+    const auto chosen = chooseGrid(*repo, gridText, err);
+    if (!chosen) return kExitBadInput;
+    const ZoneGrid grid = *chosen;
     out << summary->id << "  " << summary->date << "  " << repo->clubName() << " v "
         << summary->opponent << " (" << summary->venue << ")  " << scoreLine(*summary) << "\n"
         << "pitch " << summary->pitch.lengthM << " × " << summary->pitch.widthM << " m, "
@@ -158,7 +174,9 @@ int cmdDebrief(const Globals& g, const std::string& match, const std::vector<std
             specs.push_back(*spec);
         }
     }
-    for (const auto& spec : specs) printZoneTable(out, spec, grid, repo->matchTally(match, spec.id));
+    const auto loaded = repo->loadMatch(match);
+    const MatchFacts facts(*loaded);
+    for (const auto& spec : specs) printZoneTable(out, spec, grid, computeTally(facts, spec, grid));
     return kExitOk;
 }
 
@@ -249,12 +267,17 @@ int run(int argc, char** argv, std::ostream& out, std::ostream& err) {
         ->check(CLI::IsMember({"table", "csv"}));
     tallies->add_option("--match", talliesMatch, "Only this match id");
     tallies->add_option("--metric", talliesMetric, "Only this metric id");
+    std::string talliesGrid;
+    tallies->add_option("--grid", talliesGrid,
+                        "Another grid, computed from stored events: equal:6x5, markings:6");
 
     auto* debrief = app.add_subcommand("debrief", "Per-zone values of one match, as tables");
     std::string debriefMatch;
     std::vector<std::string> debriefMetrics;
     debrief->add_option("match", debriefMatch, "Match id (see: pitchloop matches)")->required();
     debrief->add_option("--metric", debriefMetrics, "Only these metrics (default: built-in)");
+    std::string debriefGrid;
+    debrief->add_option("--grid", debriefGrid, "Zone grid: equal:6x5 (default), markings:6");
 
     auto* metrics = app.add_subcommand("metrics", "List, show and add metric definitions");
     metrics->require_subcommand(1);
@@ -301,8 +324,8 @@ int run(int argc, char** argv, std::ostream& out, std::ostream& err) {
             return cmdIngest(g, files, ingestOptions, err);
         }
         if (*matches) return cmdMatches(g, matchesFormat, out);
-        if (*tallies) return cmdTallies(g, talliesFormat, talliesMatch, talliesMetric, out, err);
-        if (*debrief) return cmdDebrief(g, debriefMatch, debriefMetrics, out, err);
+        if (*tallies) return cmdTallies(g, talliesFormat, talliesMatch, talliesMetric, talliesGrid, out, err);
+        if (*debrief) return cmdDebrief(g, debriefMatch, debriefMetrics, debriefGrid, out, err);
         if (*metricsList) return cmdMetricsList(g, out);
         if (*metricsShow) return cmdMetricsShow(g, showId, out, err);
         if (*metricsAdd) return cmdMetricsAdd(g, addFile, addReplace, err);

@@ -61,9 +61,12 @@ void printZoneTable(std::ostream& out, const MetricSpec& spec, const ZoneGrid& g
     out << "\n";
     ZoneTally total;
     for (int lane = grid.lanes(); lane >= 1; --lane) {
+        static const char* const markedLanes[] = {"right wing", "right half-sp.", "centre",
+                                                   "left half-sp.", "left wing"};
         std::string name = "lane " + std::to_string(lane);
-        if (lane == grid.lanes()) name += " (left)";
-        if (lane == 1) name += " (right)";
+        if (grid.kind() == ZoneGrid::Kind::Markings) name = markedLanes[lane - 1];
+        else if (lane == grid.lanes()) name += " (left)";
+        else if (lane == 1) name += " (right)";
         out << "  " << pad(name, label);
         for (int band = 1; band <= grid.bands(); ++band) {
             const ZoneTally& z = tally[static_cast<std::size_t>(grid.indexOf({band, lane}))];
