@@ -37,18 +37,26 @@ std::vector<Loss> findLosses(const Match& match) {
     return losses;
 }
 
+namespace {
+/// Times are written in decimal seconds, so two times exactly W apart may differ by a hair more
+/// than W in binary (8.3 − 3.3 = 5.000000000000001). Compare with this tolerance, far below any
+/// time a match file can resolve.
+constexpr double kTimeToleranceS = 1e-6;
+} // namespace
+
 WindowOutcome findWithin(const Match& m, std::size_t anchor, const WindowQuery& query,
                          const std::function<bool(const Event&)>& matches) {
     const auto& events = m.events;
     const Event& a = events[anchor];
     for (std::size_t i = query.includeAnchor ? anchor : anchor + 1; i < events.size(); ++i) {
         const Event& e = events[i];
-        if (e.period != a.period || e.t - a.t > query.withinS) break;
+        if (e.period != a.period || e.t - a.t > query.withinS + kTimeToleranceS) break;
         if (!query.sameTime && e.t <= a.t) continue;
         if (matches(e)) return WindowOutcome::Found;
     }
     const double left = m.info.periodLength(a.period) - a.t;
-    return left < query.withinS ? WindowOutcome::Censored : WindowOutcome::NotFound;
+    return left < query.withinS - kTimeToleranceS ? WindowOutcome::Censored
+                                                  : WindowOutcome::NotFound;
 }
 
 WindowOutcome regainWithin(const Match& m, const Loss& loss, double withinS) {

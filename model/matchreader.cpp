@@ -160,8 +160,8 @@ std::pair<std::size_t, std::size_t> lineAndColumn(std::string_view text, std::si
         if (text[i] == '\n') {
             ++line;
             column = 1;
-        } else {
-            ++column;
+        } else if ((static_cast<unsigned char>(text[i]) & 0xC0) != 0x80) {
+            ++column; // count characters, not UTF-8 continuation bytes
         }
     }
     return {line, column};

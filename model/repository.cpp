@@ -196,6 +196,8 @@ ClubRepository::ClubRepository(const std::string& file) {
         m_db = std::make_unique<SQLite::Database>(file, SQLite::OPEN_READWRITE |
                                                             SQLite::OPEN_CREATE);
         m_db->exec("PRAGMA foreign_keys = ON");
+        if (m_db->execAndGet("PRAGMA user_version").getInt() > kSchemaVersion)
+            migrate(*m_db, kSchemaVersion); // refuses before anything is changed
         if (file != ":memory:") {
             m_db->exec("PRAGMA journal_mode = WAL");
             m_db->exec("PRAGMA synchronous = NORMAL");

@@ -72,7 +72,7 @@ std::vector<double> ZoneGrid::laneEdges(const Pitch& pitch) const {
 int binOf(double v, const std::vector<double>& edges) {
     const int bins = static_cast<int>(edges.size()) - 1;
     // upper_bound over the inner edges counts how many are <= v.
-    auto it = std::upper_bound(edges.begin() + 1, edges.end() - 1, v);
+    auto it = std::upper_bound(edges.begin() + 1, edges.end() - 1, v + kEdgeToleranceM);
     const int bin = static_cast<int>(it - (edges.begin() + 1)) + 1;
     return std::clamp(bin, 1, bins);
 }

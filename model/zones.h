@@ -80,8 +80,13 @@ private:
     std::vector<double> m_laneEdges;
 };
 
-/// Index of the bin holding `v`: the number of edges ≤ v among the inner ones, so a value on a
-/// boundary goes up; v ≥ the last edge falls in the last bin. Returns 1-based.
+/// Positions within this distance of a zone line count as on the line. Edges such as
+/// 3 × (64 / 5) come out as 38.400000000000006 in binary; a point logged at 38.4 m is meant to
+/// be on that line and so goes to the higher zone.
+inline constexpr double kEdgeToleranceM = 1e-6;
+
+/// Index of the bin holding `v`: the number of inner edges ≤ v (within kEdgeToleranceM), so a
+/// value on a boundary goes up; v ≥ the last edge falls in the last bin. Returns 1-based.
 int binOf(double v, const std::vector<double>& edges);
 
 } // namespace pitchloop::model

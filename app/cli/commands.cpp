@@ -219,6 +219,12 @@ int cmdMetricsAdd(const Globals& g, const std::string& file, bool replace, std::
     }
     auto repo = openClub(g);
     for (const auto& spec : specs) {
+        for (const auto& b : builtinMetrics())
+            if (b.id == spec.id) {
+                err << "error: " << file << ": '" << spec.id
+                    << "' is a built-in metric; give your variant its own id\n";
+                return kExitBadInput;
+            }
         if (repo->metric(spec.id) && !replace) {
             err << "error: " << file << ": metric '" << spec.id
                 << "' exists; use --replace to redefine it (its tallies are recomputed)\n";
@@ -331,6 +337,11 @@ int run(int argc, char** argv, std::ostream& out, std::ostream& err) {
         if (*metricsAdd) return cmdMetricsAdd(g, addFile, addReplace, err);
         if (*metricsRemove) {
             auto repo = openClub(g);
+            for (const auto& b : builtinMetrics())
+                if (b.id == removeId) {
+                    err << "error: '" << removeId << "' is a built-in metric and stays\n";
+                    return kExitBadInput;
+                }
             if (!repo->removeMetric(removeId)) {
                 err << "error: no metric '" << removeId << "'\n";
                 return kExitBadInput;

@@ -77,7 +77,8 @@ private:
     Point flip(Point p) const { return {m_len - p.x, m_wid - p.y}; }
     Point clampToPitch(Point p, double margin = 0.3) const;
     Point slotPosition(int side, int slot, Point ball, bool inPossession) const;
-    int nearestPlayer(int side, Point at, bool inPossession, bool allowKeeper) const;
+    int nearestPlayer(int side, Point at, bool inPossession, bool allowKeeper,
+                      int exclude = -1) const;
     int pickDefender(int side, Point at);
     const Slot& slotOf(int side, int slot) const;
     const TeamStyle& style(int side) const { return m_teams[static_cast<std::size_t>(side)]->style; }
@@ -111,12 +112,12 @@ private:
     void takeCorner();
     void takeFreeKick();
     void keeperDistribution(GainContext ctx);
-    void takeShot(std::uint32_t tags);
-    void shotSaved(Point shotAt);
-    void shotBlocked(Point shotAt);
+    void takeShot(std::uint32_t tags, bool hurried = false);
+    void shotSaved(Point shotAt, bool hurried);
+    void shotBlocked(Point shotAt, bool hurried);
     void looseBall(int favouredSide, Point at, double favouredShare);
-    void ballOut(int lastTouch, Point crossing);
-    void clearance(bool forcedByPressure);
+    void ballOut(int lastTouch, int slot, Point crossing);
+    void clearance();
     void defensiveFoul();
     void attackingFoul();
 
@@ -146,8 +147,10 @@ private:
     Restart m_restart = Restart::None;
     GainContext m_pendingContext = GainContext::OpenPlay;
     bool m_pressPrepared = false;
+    int m_hardDeadline = 0;  // while > 0 the clock may not pass it (a counter-press that must land)
     PressState m_press;
     std::array<Point, 2> m_lastTouch{};
+    int m_overloadPassAt = -1000;  // clock of the last completed pass out of the overload zone
 };
 
 } // namespace pitchloop::demo::detail

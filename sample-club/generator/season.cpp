@@ -139,14 +139,14 @@ Team makeClub() {
     // Slots: 0 GK, 1 RB, 2 RCB, 3 LCB, 4 LB, 5 DM, 6 RCM, 7 LCM, 8 RW, 9 LW, 10 ST.
     club.squad.bench = {{13, 0}, {14, 2}, {21, 3}, {22, 1}, {15, 4}, {19, 5},
                         {16, 6}, {12, 7}, {17, 8}, {20, 9}, {18, 10}, {23, 10}};
-    club.style.passSkill = 0.025;
-    club.style.pressHigh = 0.58;
-    club.style.pressMid = 0.47;
-    club.style.pressDeep = 0.34;
-    club.style.attack = 1.08;
-    club.style.finishing = 1.04;
+    club.style.passSkill = 0.012;
+    club.style.pressHigh = 0.74;
+    club.style.pressMid = 0.45;
+    club.style.pressDeep = 0.30;
+    club.style.attack = 1.12;
+    club.style.finishing = 1.06;
     club.style.keeping = 1.06;
-    club.style.directness = 0.05;
+    club.style.directness = 0.08;
     club.style.foulRate = 0.95;
     return club;
 }
@@ -176,11 +176,11 @@ Team makeOpponent(const OpponentSeed& seed, Rng& rng) {
     }
 
     const double s = seed.strength;
-    team.style.passSkill = 0.018 * s - 0.004;
-    team.style.pressHigh = 0.46 + 0.04 * s;
-    team.style.pressMid = 0.37 + 0.03 * s;
-    team.style.pressDeep = 0.28 + 0.02 * s;
-    team.style.attack = 0.97 + 0.12 * s;
+    team.style.passSkill = 0.018 * s + 0.002;
+    team.style.pressHigh = 0.55 + 0.04 * s;
+    team.style.pressMid = 0.36 + 0.03 * s;
+    team.style.pressDeep = 0.26 + 0.02 * s;
+    team.style.attack = 0.94 + 0.12 * s;
     team.style.finishing = 0.98 + 0.08 * s;
     team.style.keeping = 1.0 + 0.06 * s;
     team.style.directness = 0.05 + 0.07 * rng.uniform();
@@ -220,11 +220,11 @@ double exposureForMatch(int number) {
     }
     switch (number) {
     case 9:
-        return 0.65;
+        return 0.8;
     case 10:
-        return 0.4;
+        return 0.55;
     case 11:
-        return 0.2;
+        return 0.3;
     default:
         return 0.0;
     }

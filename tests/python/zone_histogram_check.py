@@ -228,16 +228,25 @@ def our_pass_origins(doc, name="match.json"):
     return origins
 
 
-def zone_edges(length, width):
-    """Bin edges as the brief fixes them: numpy.linspace over each axis.
+# Pitchloop treats a point within a micrometre of a zone line as on the line, so a position
+# logged as 38.4 m goes to the higher zone even where k * (L / n) comes out as
+# 38.400000000000006 in binary. The same rule here: inner edges lowered by that tolerance.
+EDGE_TOLERANCE_M = 1e-6
 
-    >>> [float(e) for e in zone_edges(105, 68)[0]]
+
+def zone_edges(length, width):
+    """Bin edges: numpy.linspace over each axis, inner edges lowered by EDGE_TOLERANCE_M.
+
+    >>> [round(float(e), 5) for e in zone_edges(105, 68)[0]]
     [0.0, 17.5, 35.0, 52.5, 70.0, 87.5, 105.0]
-    >>> [round(float(e), 6) for e in zone_edges(105, 68)[1]]
+    >>> [round(float(e), 5) for e in zone_edges(105, 68)[1]]
     [0.0, 13.6, 27.2, 40.8, 54.4, 68.0]
     """
-    return (numpy.linspace(0.0, float(length), BANDS + 1),
-            numpy.linspace(0.0, float(width), LANES + 1))
+    def edges(extent, n):
+        e = numpy.linspace(0.0, float(extent), n + 1)
+        e[1:-1] -= EDGE_TOLERANCE_M
+        return e
+    return edges(length, BANDS), edges(width, LANES)
 
 
 def pass_origin_counts(doc, name="match.json"):
@@ -293,7 +302,7 @@ def nonzero_zones(counts):
 
 def on_inner_edge(value, edges):
     inner = edges[1:-1]
-    return any(abs(value - float(e)) <= 1e-9 for e in inner)
+    return any(abs(value - float(e)) <= 2 * EDGE_TOLERANCE_M for e in inner)
 
 
 def run(cmd, what):
