@@ -82,8 +82,8 @@ struct EwmaPoint {
 /// limits start ± k·sigma·sqrt(λ/(2 − λ)), or with exactLimits the time-varying
 /// start ± k·sigma·sqrt(λ/(2 − λ)·(1 − (1 − λ)^{2t})). 0 < λ <= 1, sigma >= 0, k >= 0,
 /// every x finite.
-std::vector<EwmaPoint> ewma(const std::vector<double>& x, double lambda, double start,
-                            double sigma, double k, bool exactLimits);
+std::vector<EwmaPoint> ewma(const std::vector<double>& x, double lambda, double start, double sigma,
+                            double k, bool exactLimits);
 
 /// The EWMA statistics z_1..z_N alone (same recursion as `ewma`).
 std::vector<double> ewmaSeries(const std::vector<double>& x, double lambda, double start);

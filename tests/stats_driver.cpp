@@ -8,10 +8,9 @@
 
 #include "stats.h"
 
-#include <nlohmann/json.hpp>
-
 #include <cmath>
 #include <iostream>
+#include <nlohmann/json.hpp>
 #include <stdexcept>
 #include <string>
 
@@ -21,14 +20,14 @@ namespace stats = pitchloop::model::stats;
 namespace {
 
 json number(double v) {
-    if (std::isnan(v))
-        return "nan";
-    if (std::isinf(v))
-        return v > 0 ? "inf" : "-inf";
+    if (std::isnan(v)) return "nan";
+    if (std::isinf(v)) return v > 0 ? "inf" : "-inf";
     return v;
 }
 
-json interval(const stats::Interval& ci) { return {{"low", number(ci.low)}, {"high", number(ci.high)}}; }
+json interval(const stats::Interval& ci) {
+    return {{"low", number(ci.low)}, {"high", number(ci.high)}};
+}
 
 json numbers(const std::vector<double>& values) {
     json out = json::array();
@@ -37,21 +36,21 @@ json numbers(const std::vector<double>& values) {
     return out;
 }
 
-long count(const json& args, std::size_t i) { return args.at(i).get<long>(); }
-double real(const json& args, std::size_t i) { return args.at(i).get<double>(); }
+long count(const json& args, std::size_t i) {
+    return args.at(i).get<long>();
+}
+double real(const json& args, std::size_t i) {
+    return args.at(i).get<double>();
+}
 
 // Calls the function named in the request with its arguments.
 json call(const std::string& fn, const json& a) {
-    if (fn == "wilson")
-        return interval(stats::wilson(count(a, 0), count(a, 1), real(a, 2)));
-    if (fn == "wilsonCC")
-        return interval(stats::wilsonCC(count(a, 0), count(a, 1), real(a, 2)));
-    if (fn == "jeffreys")
-        return interval(stats::jeffreys(count(a, 0), count(a, 1), real(a, 2)));
+    if (fn == "wilson") return interval(stats::wilson(count(a, 0), count(a, 1), real(a, 2)));
+    if (fn == "wilsonCC") return interval(stats::wilsonCC(count(a, 0), count(a, 1), real(a, 2)));
+    if (fn == "jeffreys") return interval(stats::jeffreys(count(a, 0), count(a, 1), real(a, 2)));
     if (fn == "clopperPearson")
         return interval(stats::clopperPearson(count(a, 0), count(a, 1), real(a, 2)));
-    if (fn == "garwood")
-        return interval(stats::garwood(count(a, 0), real(a, 1), real(a, 2)));
+    if (fn == "garwood") return interval(stats::garwood(count(a, 0), real(a, 1), real(a, 2)));
     if (fn == "probRateBelow")
         return number(stats::probRateBelow(count(a, 0), count(a, 1), real(a, 2)));
     if (fn == "probRateAbove")
@@ -66,13 +65,16 @@ json call(const std::string& fn, const json& a) {
     }
     if (fn == "ewma") {
         json out = json::array();
-        for (const stats::EwmaPoint& p : stats::ewma(a.at(0).get<std::vector<double>>(), real(a, 1), real(a, 2),
-                                                     real(a, 3), real(a, 4), a.at(5).get<bool>()))
-            out.push_back({{"value", number(p.value)}, {"low", number(p.low)}, {"high", number(p.high)}});
+        for (const stats::EwmaPoint& p :
+             stats::ewma(a.at(0).get<std::vector<double>>(), real(a, 1), real(a, 2), real(a, 3),
+                         real(a, 4), a.at(5).get<bool>()))
+            out.push_back(
+                {{"value", number(p.value)}, {"low", number(p.low)}, {"high", number(p.high)}});
         return out;
     }
     if (fn == "ewmaSeries")
-        return numbers(stats::ewmaSeries(a.at(0).get<std::vector<double>>(), real(a, 1), real(a, 2)));
+        return numbers(
+            stats::ewmaSeries(a.at(0).get<std::vector<double>>(), real(a, 1), real(a, 2)));
     if (fn == "benjaminiHochberg")
         return numbers(stats::benjaminiHochberg(a.at(0).get<std::vector<double>>()));
     if (fn == "bhReject") {
@@ -82,29 +84,34 @@ json call(const std::string& fn, const json& a) {
         return out;
     }
     if (fn == "newcombeDifference")
-        return interval(stats::newcombeDifference(count(a, 0), count(a, 1), count(a, 2), count(a, 3), real(a, 4)));
+        return interval(stats::newcombeDifference(count(a, 0), count(a, 1), count(a, 2),
+                                                  count(a, 3), real(a, 4)));
     if (fn == "fisherExact") {
-        const stats::FisherResult r = stats::fisherExact(count(a, 0), count(a, 1), count(a, 2), count(a, 3));
+        const stats::FisherResult r =
+            stats::fisherExact(count(a, 0), count(a, 1), count(a, 2), count(a, 3));
         return {{"pLess", number(r.pLess)},
                 {"pGreater", number(r.pGreater)},
                 {"pTwoSided", number(r.pTwoSided)},
                 {"oddsRatio", number(r.oddsRatio)}};
     }
     if (fn == "poissonConditionalTest") {
-        const stats::PoissonTwoSample r = stats::poissonConditionalTest(count(a, 0), real(a, 1), count(a, 2), real(a, 3));
-        return {{"pLess", number(r.pLess)}, {"pGreater", number(r.pGreater)}, {"pTwoSided", number(r.pTwoSided)}};
+        const stats::PoissonTwoSample r =
+            stats::poissonConditionalTest(count(a, 0), real(a, 1), count(a, 2), real(a, 3));
+        return {{"pLess", number(r.pLess)},
+                {"pGreater", number(r.pGreater)},
+                {"pTwoSided", number(r.pTwoSided)}};
     }
     if (fn == "probRateImproved")
-        return number(
-            stats::probRateImproved(count(a, 0), count(a, 1), count(a, 2), count(a, 3), a.at(4).get<bool>()));
+        return number(stats::probRateImproved(count(a, 0), count(a, 1), count(a, 2), count(a, 3),
+                                              a.at(4).get<bool>()));
     if (fn == "probPoissonRateImproved")
-        return number(
-            stats::probPoissonRateImproved(count(a, 0), real(a, 1), count(a, 2), real(a, 3), a.at(4).get<bool>()));
+        return number(stats::probPoissonRateImproved(count(a, 0), real(a, 1), count(a, 2),
+                                                     real(a, 3), a.at(4).get<bool>()));
     if (fn == "pChart") {
         json out = json::array();
-        for (const stats::PChartPoint& p : stats::pChart(a.at(0).get<std::vector<long>>(),
-                                                         a.at(1).get<std::vector<long>>(),
-                                                         a.at(2).get<std::size_t>(), real(a, 3)))
+        for (const stats::PChartPoint& p :
+             stats::pChart(a.at(0).get<std::vector<long>>(), a.at(1).get<std::vector<long>>(),
+                           a.at(2).get<std::size_t>(), real(a, 3)))
             out.push_back({{"p", number(p.p)},
                            {"centre", number(p.centre)},
                            {"lcl", number(p.lcl)},
@@ -121,8 +128,7 @@ json call(const std::string& fn, const json& a) {
 int main() {
     std::string line;
     while (std::getline(std::cin, line)) {
-        if (line.empty())
-            continue;
+        if (line.empty()) continue;
         json reply;
         try {
             const json request = json::parse(line);

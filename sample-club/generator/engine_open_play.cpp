@@ -6,9 +6,13 @@
 namespace pitchloop::demo::detail {
 namespace {
 
-double distance(Point a, Point b) { return std::sqrt((a.x - b.x) * (a.x - b.x) + (a.y - b.y) * (a.y - b.y)); }
+double distance(Point a, Point b) {
+    return std::sqrt((a.x - b.x) * (a.x - b.x) + (a.y - b.y) * (a.y - b.y));
+}
 
-Point lerp(Point a, Point b, double f) { return {a.x + (b.x - a.x) * f, a.y + (b.y - a.y) * f}; }
+Point lerp(Point a, Point b, double f) {
+    return {a.x + (b.x - a.x) * f, a.y + (b.y - a.y) * f};
+}
 
 bool isBackLine(Role role) {
     switch (role) {
@@ -61,7 +65,7 @@ void MatchEngine::openPlay() {
         return;
     }
     if (m_holder == kKeeperSlot) {
-        keeperInPlay();
+        keeperDistribution(GainContext::OpenPlay);
         return;
     }
 
@@ -92,7 +96,7 @@ void MatchEngine::openPlay() {
     wt[Shot] = shotChance(b) * st.attack * (1.0 + 4.0 * m_homeEdge[static_cast<std::size_t>(a)]);
     if (w > 0.0 && m_clock - m_overloadPassAt <= 100) {
         // Served from the overload: the runner arrives unmarked because our cover went wide.
-        wt[Shot] *= 1.0 + 1.2 * w;
+        wt[Shot] *= 1.0 + 2.0 * w;
     }
     if (zoneThird == 2 && wide && b.x > m_len * 0.72) {
         wt[Cross] = 0.2;
@@ -170,8 +174,6 @@ void MatchEngine::openPlay() {
     }
 }
 
-void MatchEngine::keeperInPlay() { keeperDistribution(GainContext::OpenPlay); }
-
 // The press has been beaten: the carrier gets out of trouble before the 5 s window closes.
 void MatchEngine::escapePress() {
     const int d = other(m_side);
@@ -188,7 +190,9 @@ void MatchEngine::escapePress() {
 }
 
 // A hurried touch by the side being counter-pressed, before the press wins the ball.
-void MatchEngine::quickAction() { playPass(PassKind::Quick); }
+void MatchEngine::quickAction() {
+    playPass(PassKind::Quick);
+}
 
 void MatchEngine::counterPressWins() {
     const int b = m_side;
@@ -295,9 +299,9 @@ void MatchEngine::playPass(PassKind kind, std::uint32_t tags, double successOver
 
     const double length = distance(from, dest);
     const bool lofted = kind == PassKind::Long || kind == PassKind::Cross;
-    const double speed = lofted ? m_rng.uniform(14.0, 19.0)
-                                : (kind == PassKind::Quick ? m_rng.uniform(12.0, 17.0)
-                                                           : m_rng.uniform(10.0, 16.0));
+    const double speed =
+        lofted ? m_rng.uniform(14.0, 19.0)
+               : (kind == PassKind::Quick ? m_rng.uniform(12.0, 17.0) : m_rng.uniform(10.0, 16.0));
     const double travel = length / speed + 0.2;
     if (!ok) {
         passFailed(from, dest, kind, travel);
@@ -321,7 +325,8 @@ void MatchEngine::playPass(PassKind kind, std::uint32_t tags, double successOver
         const double served = inOverloadZone(from) ? 0.25 * w : 0.0;
         if (m_rng.chance((kind == PassKind::Cross ? 0.55 : 0.45) + served)) {
             advance(m_rng.uniform(0.1, 0.4));
-            std::uint32_t shotTags = kind == PassKind::Cross ? static_cast<std::uint32_t>(Tag::Header) : 0u;
+            std::uint32_t shotTags =
+                kind == PassKind::Cross ? static_cast<std::uint32_t>(Tag::Header) : 0u;
             if (hasTag(tags, Tag::SetPiece)) {
                 shotTags = shotTags | Tag::SetPiece;
             }
@@ -377,7 +382,8 @@ int MatchEngine::pickReceiver(PassKind kind, Point& dest) {
             const double lead =
                 kind == PassKind::Through ? m_rng.uniform(6.0, 14.0) : m_rng.uniform(2.0, 9.0);
             const Point p = pos[static_cast<std::size_t>(j)];
-            dest = clampToPitch({std::min(p.x + lead, m_len - 4.0), p.y + m_rng.normal(0.0, 3.0)}, 0.5);
+            dest = clampToPitch({std::min(p.x + lead, m_len - 4.0), p.y + m_rng.normal(0.0, 3.0)},
+                                0.5);
             return j;
         }
         wt.fill(0.0);
@@ -404,12 +410,12 @@ int MatchEngine::pickReceiver(PassKind kind, Point& dest) {
         if (j == kKeeperSlot) {
             wj *= b.x < m_len * 0.3 ? 1.0 : 0.02;
         } else if (role == Role::Striker) {
-            wj *= 0.55;  // marked tight; most play goes through the midfield and the flanks
+            wj *= 0.55; // marked tight; most play goes through the midfield and the flanks
         } else if (isForward(role)) {
             wj *= 0.85;
         }
         if (storyActive && (isRightFlank(role) || role == Role::RightCentreMid)) {
-            wj *= 1.0 + (inOverloadZone(b) ? 1.0 : 0.5) * w;
+            wj *= 1.0 + (inOverloadZone(b) ? 0.6 : 0.3) * w;
         }
         wt[static_cast<std::size_t>(j)] = wj;
     }
@@ -423,7 +429,7 @@ int MatchEngine::pickReceiver(PassKind kind, Point& dest) {
     const Role role = slotOf(a, j).role;
     if (storyActive && kind == PassKind::Normal &&
         (isRightFlank(role) || role == Role::RightCentreMid) && b.x < m_len * 0.85 &&
-        b.y < m_wid * 0.65 && m_rng.chance(0.25 * w)) {
+        b.y < m_wid * 0.65 && m_rng.chance(0.2 * w)) {
         const Point pocket{m_rng.uniform(m_len * 4.0 / 6.0 + 1.0, m_len * 5.0 / 6.0 - 1.0),
                            m_rng.uniform(1.5, m_wid / 5.0 - 1.0)};
         if (distance(pocket, b) > 5.0) {
@@ -466,10 +472,10 @@ double MatchEngine::passSuccess(Point from, Point to, PassKind kind) const {
         }
         const bool wideFrom = from.y < m_wid / 5.0 || from.y > m_wid * 4.0 / 5.0;
         if (third(from.x) == 2 && !wideFrom) {
-            p -= 0.04;  // crowded centre in front of the box
+            p -= 0.04; // crowded centre in front of the box
         }
         if (third(from.x) == 1 && wideFrom) {
-            p -= 0.03;  // pressed against the touchline in midfield
+            p -= 0.03; // pressed against the touchline in midfield
         }
         const double gain = to.x - from.x;
         if (gain > 12.0) {
@@ -554,12 +560,15 @@ void MatchEngine::passFailed(Point from, Point to, PassKind kind, double travel)
         emit(makeEvent(d, slot, EventType::Clearance, Outcome::Ok, p));
         advance(m_rng.uniform(1.2, 2.4));
         if (p.x < 12.0 && m_rng.chance(0.2)) {
-            ballOut(d, slot, {0.0, m_wid / 2.0 + (p.y < m_wid / 2.0 ? -1.0 : 1.0) * m_rng.uniform(6.0, 20.0)});
+            ballOut(
+                d, slot,
+                {0.0, m_wid / 2.0 + (p.y < m_wid / 2.0 ? -1.0 : 1.0) * m_rng.uniform(6.0, 20.0)});
             return;
         }
         if (m_rng.chance(0.15)) {
-            ballOut(d, slot, {std::clamp(p.x + m_rng.uniform(10.0, 30.0), 1.0, m_len - 1.0),
-                              p.y < m_wid / 2.0 ? 0.0 : m_wid});
+            ballOut(d, slot,
+                    {std::clamp(p.x + m_rng.uniform(10.0, 30.0), 1.0, m_len - 1.0),
+                     p.y < m_wid / 2.0 ? 0.0 : m_wid});
             return;
         }
         looseBall(d, {p.x + m_rng.uniform(15.0, 35.0), p.y + m_rng.normal(0.0, 10.0)}, 0.55);
@@ -573,7 +582,8 @@ void MatchEngine::passFailed(Point from, Point to, PassKind kind, double travel)
         emit(makeEvent(d, slot, EventType::Interception, Outcome::Ok, p));
         give(d, slot, p);
     } else {
-        const Point land = clampToPitch({to.x + m_rng.normal(0.0, 2.0), to.y + m_rng.normal(0.0, 2.0)});
+        const Point land =
+            clampToPitch({to.x + m_rng.normal(0.0, 2.0), to.y + m_rng.normal(0.0, 2.0)});
         advance(travel + 0.6);
         const Point p = flip(land);
         const int slot = pickDefender(d, p);
@@ -596,32 +606,38 @@ void MatchEngine::crossDefended(Point to) {
         advance(m_rng.uniform(1.2, 2.2));
         if (m_rng.chance(0.14)) {
             // Headed behind for a corner.
-            ballOut(d, slot, {0.0, m_wid / 2.0 + (p.y < m_wid / 2.0 ? -1.0 : 1.0) * m_rng.uniform(6.0, 20.0)});
+            ballOut(
+                d, slot,
+                {0.0, m_wid / 2.0 + (p.y < m_wid / 2.0 ? -1.0 : 1.0) * m_rng.uniform(6.0, 20.0)});
             return;
         }
         if (m_rng.chance(0.07)) {
-            ballOut(d, slot, {std::clamp(p.x + m_rng.uniform(10.0, 25.0), 1.0, m_len - 1.0),
-                              p.y < m_wid / 2.0 ? 0.0 : m_wid});
+            ballOut(d, slot,
+                    {std::clamp(p.x + m_rng.uniform(10.0, 25.0), 1.0, m_len - 1.0),
+                     p.y < m_wid / 2.0 ? 0.0 : m_wid});
             return;
         }
         looseBall(d, {p.x + m_rng.uniform(12.0, 35.0), m_rng.uniform(5.0, m_wid - 5.0)}, 0.55);
     } else if (r < 0.66) {
         const Point kp = {std::min(p.x, m_rng.uniform(2.0, 9.0)), p.y};
-        emit(makeEvent(d, kKeeperSlot, EventType::Keeper, Outcome::Ok, kp), GainContext::KeeperHold);
+        emit(makeEvent(d, kKeeperSlot, EventType::Keeper, Outcome::Ok, kp),
+             GainContext::KeeperHold);
         setRestart(Restart::KeeperHold, d, kp, m_rng.uniform(3.0, 7.0));
         m_holder = kKeeperSlot;
     } else if (r < 0.74) {
         const int slot = pickDefender(d, p);
         emit(makeEvent(d, slot, EventType::Block, Outcome::Ok, p));
         advance(m_rng.uniform(0.4, 0.9));
-        ballOut(d, slot, {0.0, m_wid / 2.0 + (p.y < m_wid / 2.0 ? -1.0 : 1.0) * m_rng.uniform(5.0, 15.0)});
+        ballOut(d, slot,
+                {0.0, m_wid / 2.0 + (p.y < m_wid / 2.0 ? -1.0 : 1.0) * m_rng.uniform(5.0, 15.0)});
     } else if (r < 0.82) {
         const int slot = pickDefender(d, p);
         emit(makeEvent(d, slot, EventType::Clearance, Outcome::Fail, p));
         advance(m_rng.uniform(0.5, 1.0));
         looseBall(a, {to.x - m_rng.uniform(1.0, 6.0), to.y + m_rng.normal(0.0, 3.0)}, 0.8);
     } else if (r < 0.86) {
-        emit(makeEvent(d, kKeeperSlot, EventType::Keeper, Outcome::Fail, {std::min(p.x, 8.0), p.y}));
+        emit(
+            makeEvent(d, kKeeperSlot, EventType::Keeper, Outcome::Fail, {std::min(p.x, 8.0), p.y}));
         advance(m_rng.uniform(0.5, 1.0));
         looseBall(a, {to.x - m_rng.uniform(0.0, 5.0), to.y + m_rng.normal(0.0, 4.0)}, 0.5);
     } else {
@@ -690,7 +706,7 @@ void MatchEngine::playTakeOn() {
         p += 0.04;
     }
     if (inOverloadZone(b)) {
-        p += 0.2 * exposure(a);  // our left-back left one against two
+        p += 0.2 * exposure(a); // our left-back left one against two
     }
     const bool ok = m_rng.chance(p);
     emit(makeEvent(a, m_holder, EventType::TakeOn, ok ? Outcome::Ok : Outcome::Fail, b));
@@ -710,7 +726,8 @@ void MatchEngine::playTakeOn() {
         emit(makeEvent(d, slot, EventType::Tackle, Outcome::Ok, at));
         give(d, slot, at);
     } else if (r < 0.85) {
-        const Point loose = clampToPitch({at.x + m_rng.uniform(-2.0, 3.0), at.y + m_rng.normal(0.0, 2.0)});
+        const Point loose =
+            clampToPitch({at.x + m_rng.uniform(-2.0, 3.0), at.y + m_rng.normal(0.0, 2.0)});
         const int chaser = pickDefender(d, loose);
         emit(makeEvent(d, chaser, EventType::Recovery, Outcome::Ok, loose));
         give(d, chaser, loose);

@@ -8,7 +8,7 @@ namespace pitchloop::demo::detail {
 void MatchEngine::restart() {
     applyDueSubstitutions();
     if (m_restart != Restart::KickOff && m_rng.chance(0.02)) {
-        advance(m_rng.uniform(40.0, 110.0));  // a player down and treated before the restart
+        advance(m_rng.uniform(40.0, 110.0)); // a player down and treated before the restart
     }
     const Restart kind = m_restart;
     m_restart = Restart::None;
@@ -41,8 +41,8 @@ void MatchEngine::takeKickOff() {
     const Point centre{m_len / 2.0, m_wid / 2.0};
     m_holder = kStrikerSlot;
     m_ball = centre;
-    const Point dest = clampToPitch(
-        {centre.x - m_rng.uniform(7.0, 14.0), centre.y + m_rng.normal(0.0, 6.0)}, 1.0);
+    const Point dest =
+        clampToPitch({centre.x - m_rng.uniform(7.0, 14.0), centre.y + m_rng.normal(0.0, 6.0)}, 1.0);
     const int receiver = nearestPlayer(a, dest, true, false, kStrikerSlot);
     MatchEvent ev = makeEvent(a, m_holder, EventType::Pass, Outcome::Ok, centre);
     ev.hasEnd = true;
@@ -113,7 +113,8 @@ void MatchEngine::keeperDistribution(GainContext ctx) {
     m_holder = kKeeperSlot;
     if (ctx == GainContext::KeeperHold) {
         // The keeper walks the ball to the edge of the box before releasing it.
-        m_ball = clampToPitch({m_rng.uniform(8.0, 15.0), m_wid / 2.0 + m_rng.normal(0.0, 7.0)}, 1.0);
+        m_ball =
+            clampToPitch({m_rng.uniform(8.0, 15.0), m_wid / 2.0 + m_rng.normal(0.0, 7.0)}, 1.0);
     }
     m_pendingContext = ctx;
     if (m_rng.chance(ctx == GainContext::OpenPlay ? 0.65 : 0.55 - style(a).directness)) {
@@ -130,7 +131,7 @@ void MatchEngine::takeShot(std::uint32_t tags, bool hurried) {
     const bool header = hasTag(tags, Tag::Header);
     const bool direct = hasTag(tags, Tag::FreeKick);
     const double angle = goalAngle(b);
-    double xg = std::min(0.5, 0.01 + 0.28 * angle * angle);
+    double xg = std::min(0.5, 0.01 + 0.33 * angle * angle);
     if (header) {
         xg *= 0.55;
     }
@@ -180,7 +181,8 @@ void MatchEngine::takeShot(std::uint32_t tags, bool hurried) {
     case Outcome::Post:
         advance(m_rng.uniform(0.5, 0.9));
         if (m_rng.chance(0.15)) {
-            ballOut(a, m_holder, {m_len, std::clamp(m_wid / 2.0 + m_rng.normal(0.0, 6.0), 1.0, m_wid - 1.0)});
+            ballOut(a, m_holder,
+                    {m_len, std::clamp(m_wid / 2.0 + m_rng.normal(0.0, 6.0), 1.0, m_wid - 1.0)});
         } else {
             looseBall(a, {m_len - m_rng.uniform(3.0, 12.0), m_wid / 2.0 + m_rng.normal(0.0, 7.0)},
                       0.42);
@@ -197,12 +199,13 @@ void MatchEngine::takeShot(std::uint32_t tags, bool hurried) {
 void MatchEngine::shotSaved(Point shotAt, bool hurried) {
     const int a = m_side;
     const int d = other(a);
-    const Point kp = clampToPitch(
-        {m_rng.uniform(0.5, 4.0), m_wid / 2.0 + m_rng.normal(0.0, 1.5) + (m_wid / 2.0 - shotAt.y) * 0.05},
-        0.3);
+    const Point kp = clampToPitch({m_rng.uniform(0.5, 4.0), m_wid / 2.0 + m_rng.normal(0.0, 1.5) +
+                                                                (m_wid / 2.0 - shotAt.y) * 0.05},
+                                  0.3);
     const double r = hurried ? 0.0 : m_rng.uniform();
     if (r < 0.55) {
-        emit(makeEvent(d, kKeeperSlot, EventType::Keeper, Outcome::Ok, kp), GainContext::KeeperHold);
+        emit(makeEvent(d, kKeeperSlot, EventType::Keeper, Outcome::Ok, kp),
+             GainContext::KeeperHold);
         setRestart(Restart::KeeperHold, d, kp, m_rng.uniform(3.0, 8.0));
         m_holder = kKeeperSlot;
     } else if (r < 0.8) {
@@ -213,15 +216,16 @@ void MatchEngine::shotSaved(Point shotAt, bool hurried) {
     } else {
         emit(makeEvent(d, kKeeperSlot, EventType::Keeper, Outcome::Ok, kp));
         advance(m_rng.uniform(0.8, 1.5));
-        looseBall(a, {m_len - m_rng.uniform(4.0, 12.0), m_wid / 2.0 + m_rng.normal(0.0, 7.0)}, 0.45);
+        looseBall(a, {m_len - m_rng.uniform(4.0, 12.0), m_wid / 2.0 + m_rng.normal(0.0, 7.0)},
+                  0.45);
     }
 }
 
 void MatchEngine::shotBlocked(Point shotAt, bool hurried) {
     const int a = m_side;
     const int d = other(a);
-    const Point bp = flip(clampToPitch(
-        {shotAt.x + m_rng.uniform(0.5, 2.5), shotAt.y + m_rng.normal(0.0, 1.0)}, 0.5));
+    const Point bp = flip(
+        clampToPitch({shotAt.x + m_rng.uniform(0.5, 2.5), shotAt.y + m_rng.normal(0.0, 1.0)}, 0.5));
     const int slot = pickDefender(d, bp);
     emit(makeEvent(d, slot, EventType::Block, Outcome::Ok, bp));
     advance(m_rng.uniform(0.4, 1.0));
@@ -265,7 +269,8 @@ void MatchEngine::ballOut(int lastTouch, int slot, Point crossing) {
                    {std::clamp(p.x, 0.5, m_len - 0.5), p.y < m_wid / 2.0 ? 0.0 : m_wid},
                    m_rng.uniform(8.0, 20.0));
     } else if (crossing.x >= m_len - 0.01) {
-        setRestart(Restart::GoalKick, r, {5.5, p.y < m_wid / 2.0 ? m_wid / 2.0 - 5.0 : m_wid / 2.0 + 5.0},
+        setRestart(Restart::GoalKick, r,
+                   {5.5, p.y < m_wid / 2.0 ? m_wid / 2.0 - 5.0 : m_wid / 2.0 + 5.0},
                    m_rng.uniform(16.0, 30.0));
         m_holder = kKeeperSlot;
     } else {
@@ -288,7 +293,8 @@ void MatchEngine::clearance() {
     advance(m_rng.uniform(2.0, 3.5));
     const Point land{b.x + m_rng.uniform(28.0, 55.0), b.y + m_rng.normal(0.0, 12.0)};
     if (m_rng.chance(0.25) || land.y < 0.0 || land.y > m_wid) {
-        ballOut(a, m_holder, {std::clamp(land.x, 1.0, m_len - 1.0), land.y < m_wid / 2.0 ? 0.0 : m_wid});
+        ballOut(a, m_holder,
+                {std::clamp(land.x, 1.0, m_len - 1.0), land.y < m_wid / 2.0 ? 0.0 : m_wid});
         return;
     }
     looseBall(a, land, 0.4);

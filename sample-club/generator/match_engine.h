@@ -20,18 +20,23 @@ constexpr double kBoxDepth = 16.5;
 constexpr double kBoxHalfWidth = 20.16;
 constexpr double kGoalWidth = 7.32;
 
-constexpr int other(int side) { return 1 - side; }
+constexpr int other(int side) {
+    return 1 - side;
+}
 
+// A spot on the pitch in metres, in some side's attacking direction.
 struct Point {
     double x = 0.0;
     double y = 0.0;
 };
 
+// The dead-ball restart the next step has to take.
 enum class Restart { None, KickOff, ThrowIn, GoalKick, Corner, FreeKick, KeeperHold };
 
 // How the ball changed hands; after dead balls the losing side rarely wins it straight back.
 enum class GainContext { OpenPlay, ThrowIn, FreeKick, Corner, GoalKick, KickOff, KeeperHold };
 
+// What a pass is meant to be; decides receiver choice, length, success and tags.
 enum class PassKind { Normal, Safe, Quick, Long, Through, Cross, Cutback };
 
 // The losing side's counter-press after a turnover, decided when the turnover happens so the
@@ -56,11 +61,11 @@ struct Substitution {
 // Possession-chain simulation of one match: the side on the ball acts until it loses it, shoots,
 // or the ball goes dead; every action is one event in the acting side's direction.
 class MatchEngine {
-public:
+  public:
     MatchEngine(const Season& season, const Fixture& fixture, std::uint64_t seed);
     MatchRecord run();
 
-private:
+  private:
     // simulator.cpp: clock, bookkeeping, geometry, squads
     void pickLineups();
     void planSubstitutions();
@@ -81,7 +86,9 @@ private:
                       int exclude = -1) const;
     int pickDefender(int side, Point at);
     const Slot& slotOf(int side, int slot) const;
-    const TeamStyle& style(int side) const { return m_teams[static_cast<std::size_t>(side)]->style; }
+    const TeamStyle& style(int side) const {
+        return m_teams[static_cast<std::size_t>(side)]->style;
+    }
     int shirt(int side, int slot) const;
     double exposure(int side) const { return side == kOpp ? m_fixture.leftFlankExposure : 0.0; }
     bool inBox(Point p) const;
@@ -91,7 +98,6 @@ private:
 
     // engine_open_play.cpp: decisions of the side on the ball
     void openPlay();
-    void keeperInPlay();
     void escapePress();
     void quickAction();
     void counterPressWins();
@@ -121,7 +127,6 @@ private:
     void defensiveFoul();
     void attackingFoul();
 
-    const Season& m_season;
     const Fixture& m_fixture;
     std::array<const Team*, 2> m_teams{};
     Rng m_rng;
@@ -147,10 +152,10 @@ private:
     Restart m_restart = Restart::None;
     GainContext m_pendingContext = GainContext::OpenPlay;
     bool m_pressPrepared = false;
-    int m_hardDeadline = 0;  // while > 0 the clock may not pass it (a counter-press that must land)
+    int m_hardDeadline = 0; // while > 0 the clock may not pass it (a counter-press that must land)
     PressState m_press;
     std::array<Point, 2> m_lastTouch{};
-    int m_overloadPassAt = -1000;  // clock of the last completed pass out of the overload zone
+    int m_overloadPassAt = -1000; // clock of the last completed pass out of the overload zone
 };
 
 } // namespace pitchloop::demo::detail

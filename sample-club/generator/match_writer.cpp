@@ -88,11 +88,13 @@ constexpr std::array<std::pair<Tag, const char*>, 11> kTagNames{{
 }};
 
 // Rounds to 0.1 and clamps; adding 0.0 turns a possible -0.0 into 0.0.
-double tenth(double v, double hi) { return std::clamp(std::round(v * 10.0) / 10.0, 0.0, hi) + 0.0; }
+double tenth(double v, double hi) {
+    return std::clamp(std::round(v * 10.0) / 10.0, 0.0, hi) + 0.0;
+}
 
 // Maps a point from the acting side's direction into the file's frame.
 class FrameMapper {
-public:
+  public:
     FrameMapper(const MatchRecord& record)
         : m_frame(record.fixture.frame), m_len(record.pitchLength), m_wid(record.pitchWidth),
           m_usPlusX(record.usAttackPlusX) {}
@@ -112,7 +114,7 @@ public:
         return {x, y};
     }
 
-private:
+  private:
     Frame m_frame;
     double m_len;
     double m_wid;

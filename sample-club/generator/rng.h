@@ -38,7 +38,7 @@ constexpr double expNeg(double x) {
 
 // xoshiro256** with hand-written distributions: the same seed gives the same numbers everywhere.
 class Rng {
-public:
+  public:
     explicit Rng(std::uint64_t seed) {
         std::uint64_t sm = seed;
         for (auto& word : m_state) {
@@ -121,8 +121,10 @@ public:
         }
     }
 
-private:
-    static constexpr std::uint64_t rotl(std::uint64_t v, int k) { return (v << k) | (v >> (64 - k)); }
+  private:
+    static constexpr std::uint64_t rotl(std::uint64_t v, int k) {
+        return (v << k) | (v >> (64 - k));
+    }
 
     std::array<std::uint64_t, 4> m_state{};
 };

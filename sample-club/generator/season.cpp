@@ -12,61 +12,57 @@ namespace {
 
 using R = Role;
 
-constexpr Formation kFourThreeThree{
-    "4-3-3",
-    {{{R::Goalkeeper, 0.04, 0.50},
-      {R::RightBack, 0.36, 0.08},
-      {R::RightCentreBack, 0.20, 0.34},
-      {R::LeftCentreBack, 0.20, 0.66},
-      {R::LeftBack, 0.36, 0.92},
-      {R::DefensiveMid, 0.42, 0.50},
-      {R::RightCentreMid, 0.56, 0.32},
-      {R::LeftCentreMid, 0.56, 0.68},
-      {R::RightWing, 0.80, 0.07},
-      {R::LeftWing, 0.80, 0.93},
-      {R::Striker, 0.88, 0.50}}}};
+constexpr Formation kFourThreeThree{"4-3-3",
+                                    {{{R::Goalkeeper, 0.04, 0.50},
+                                      {R::RightBack, 0.36, 0.08},
+                                      {R::RightCentreBack, 0.20, 0.34},
+                                      {R::LeftCentreBack, 0.20, 0.66},
+                                      {R::LeftBack, 0.36, 0.92},
+                                      {R::DefensiveMid, 0.42, 0.50},
+                                      {R::RightCentreMid, 0.56, 0.32},
+                                      {R::LeftCentreMid, 0.56, 0.68},
+                                      {R::RightWing, 0.80, 0.07},
+                                      {R::LeftWing, 0.80, 0.93},
+                                      {R::Striker, 0.88, 0.50}}}};
 
-constexpr Formation kFourFourTwo{
-    "4-4-2",
-    {{{R::Goalkeeper, 0.04, 0.50},
-      {R::RightBack, 0.34, 0.08},
-      {R::RightCentreBack, 0.20, 0.35},
-      {R::LeftCentreBack, 0.20, 0.65},
-      {R::LeftBack, 0.34, 0.92},
-      {R::RightMid, 0.62, 0.09},
-      {R::RightCentreMid, 0.50, 0.38},
-      {R::LeftCentreMid, 0.50, 0.62},
-      {R::LeftMid, 0.62, 0.91},
-      {R::Striker, 0.86, 0.40},
-      {R::Striker, 0.84, 0.60}}}};
+constexpr Formation kFourFourTwo{"4-4-2",
+                                 {{{R::Goalkeeper, 0.04, 0.50},
+                                   {R::RightBack, 0.34, 0.08},
+                                   {R::RightCentreBack, 0.20, 0.35},
+                                   {R::LeftCentreBack, 0.20, 0.65},
+                                   {R::LeftBack, 0.34, 0.92},
+                                   {R::RightMid, 0.62, 0.09},
+                                   {R::RightCentreMid, 0.50, 0.38},
+                                   {R::LeftCentreMid, 0.50, 0.62},
+                                   {R::LeftMid, 0.62, 0.91},
+                                   {R::Striker, 0.86, 0.40},
+                                   {R::Striker, 0.84, 0.60}}}};
 
-constexpr Formation kFourTwoThreeOne{
-    "4-2-3-1",
-    {{{R::Goalkeeper, 0.04, 0.50},
-      {R::RightBack, 0.35, 0.08},
-      {R::RightCentreBack, 0.20, 0.35},
-      {R::LeftCentreBack, 0.20, 0.65},
-      {R::LeftBack, 0.35, 0.92},
-      {R::DefensiveMid, 0.44, 0.38},
-      {R::DefensiveMid, 0.44, 0.62},
-      {R::RightWing, 0.74, 0.09},
-      {R::AttackingMid, 0.70, 0.50},
-      {R::LeftWing, 0.74, 0.91},
-      {R::Striker, 0.88, 0.50}}}};
+constexpr Formation kFourTwoThreeOne{"4-2-3-1",
+                                     {{{R::Goalkeeper, 0.04, 0.50},
+                                       {R::RightBack, 0.35, 0.08},
+                                       {R::RightCentreBack, 0.20, 0.35},
+                                       {R::LeftCentreBack, 0.20, 0.65},
+                                       {R::LeftBack, 0.35, 0.92},
+                                       {R::DefensiveMid, 0.44, 0.38},
+                                       {R::DefensiveMid, 0.44, 0.62},
+                                       {R::RightWing, 0.74, 0.09},
+                                       {R::AttackingMid, 0.70, 0.50},
+                                       {R::LeftWing, 0.74, 0.91},
+                                       {R::Striker, 0.88, 0.50}}}};
 
-constexpr Formation kThreeFiveTwo{
-    "3-5-2",
-    {{{R::Goalkeeper, 0.04, 0.50},
-      {R::RightCentreBack, 0.22, 0.25},
-      {R::CentreBack, 0.18, 0.50},
-      {R::LeftCentreBack, 0.22, 0.75},
-      {R::RightWingBack, 0.52, 0.06},
-      {R::RightCentreMid, 0.52, 0.34},
-      {R::DefensiveMid, 0.44, 0.50},
-      {R::LeftCentreMid, 0.52, 0.66},
-      {R::LeftWingBack, 0.52, 0.94},
-      {R::Striker, 0.86, 0.40},
-      {R::Striker, 0.84, 0.60}}}};
+constexpr Formation kThreeFiveTwo{"3-5-2",
+                                  {{{R::Goalkeeper, 0.04, 0.50},
+                                    {R::RightCentreBack, 0.22, 0.25},
+                                    {R::CentreBack, 0.18, 0.50},
+                                    {R::LeftCentreBack, 0.22, 0.75},
+                                    {R::RightWingBack, 0.52, 0.06},
+                                    {R::RightCentreMid, 0.52, 0.34},
+                                    {R::DefensiveMid, 0.44, 0.50},
+                                    {R::LeftCentreMid, 0.52, 0.66},
+                                    {R::LeftWingBack, 0.52, 0.94},
+                                    {R::Striker, 0.86, 0.40},
+                                    {R::Striker, 0.84, 0.60}}}};
 
 // Conventional shirt numbers per slot for each formation above.
 constexpr std::array<int, 11> kNumbers433{1, 2, 5, 4, 3, 6, 8, 10, 7, 11, 9};
@@ -79,8 +75,8 @@ struct OpponentSeed {
     const char* name;
     int length;
     int width;
-    int formation;    // 0 = 4-3-3, 1 = 4-4-2, 2 = 4-2-3-1, 3 = 3-5-2
-    double strength;  // -1 weakest .. +1 strongest
+    int formation;   // 0 = 4-3-3, 1 = 4-4-2, 2 = 4-2-3-1, 3 = 3-5-2
+    double strength; // -1 weakest .. +1 strongest
 };
 
 constexpr std::array<OpponentSeed, 17> kOpponents{{
@@ -137,7 +133,7 @@ Team makeClub() {
     club.formation = &kFourThreeThree;
     club.squad.starters = kNumbers433;
     // Slots: 0 GK, 1 RB, 2 RCB, 3 LCB, 4 LB, 5 DM, 6 RCM, 7 LCM, 8 RW, 9 LW, 10 ST.
-    club.squad.bench = {{13, 0}, {14, 2}, {21, 3}, {22, 1}, {15, 4}, {19, 5},
+    club.squad.bench = {{13, 0}, {14, 2}, {21, 3}, {22, 1}, {15, 4},  {19, 5},
                         {16, 6}, {12, 7}, {17, 8}, {20, 9}, {18, 10}, {23, 10}};
     club.style.passSkill = 0.012;
     club.style.pressHigh = 0.74;

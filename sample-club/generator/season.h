@@ -55,15 +55,15 @@ struct Squad {
 
 // Playing style knobs the match engine reads; all are multipliers or additive probabilities.
 struct TeamStyle {
-    double passSkill = 0.0;     // added to every pass completion probability
-    double pressHigh = 0.0;     // chance the counter-press wins the ball back within 5 s,
-    double pressMid = 0.0;      // by the third of the pitch where the ball was lost
-    double pressDeep = 0.0;     // (third measured in the losing team's direction)
-    double attack = 1.0;        // multiplier on shot attempts
-    double finishing = 1.0;     // multiplier on goal probability
-    double keeping = 1.0;       // divides the opponent's goal probability
-    double directness = 0.05;   // share of long balls from deep
-    double foulRate = 1.0;      // multiplier on defensive fouls
+    double passSkill = 0.0;   // added to every pass completion probability
+    double pressHigh = 0.0;   // chance the counter-press wins the ball back within 5 s,
+    double pressMid = 0.0;    // by the third of the pitch where the ball was lost
+    double pressDeep = 0.0;   // (third measured in the losing team's direction)
+    double attack = 1.0;      // multiplier on shot attempts
+    double finishing = 1.0;   // multiplier on goal probability
+    double keeping = 1.0;     // divides the opponent's goal probability
+    double directness = 0.05; // share of long balls from deep
+    double foulRate = 1.0;    // multiplier on defensive fouls
 };
 
 // A club as the generator knows it.
@@ -80,13 +80,13 @@ enum class Frame { Acting, Us, Ground };
 
 // One league fixture from Kestrel Bay's point of view.
 struct Fixture {
-    int number = 0;            // 1..34
-    std::string id;            // KB-2026-NN
-    std::string date;          // YYYY-MM-DD
+    int number = 0;   // 1..34
+    std::string id;   // KB-2026-NN
+    std::string date; // YYYY-MM-DD
     bool home = true;
-    int opponent = 0;          // index into Season::opponents
+    int opponent = 0; // index into Season::opponents
     Frame frame = Frame::Acting;
-    double leftFlankExposure = 0.0;  // 1 = our left-back zone is wide open (the planted story)
+    double leftFlankExposure = 0.0; // 1 = our left-back zone is wide open (the planted story)
 };
 
 // The demo club, its league opponents and its 34 fixtures.

@@ -37,7 +37,7 @@ std::string matchClock(int period, int tenths) {
 } // namespace
 
 MatchEngine::MatchEngine(const Season& season, const Fixture& fixture, std::uint64_t seed)
-    : m_season(season), m_fixture(fixture), m_rng(seed) {
+    : m_fixture(fixture), m_rng(seed) {
     m_teams[kUs] = &season.club;
     m_teams[kOpp] = &season.opponents[static_cast<std::size_t>(fixture.opponent)];
     const Team& ground = fixture.home ? season.club : *m_teams[kOpp];
@@ -214,13 +214,7 @@ void MatchEngine::emit(MatchEvent ev, GainContext ctx) {
     ev.period = m_period;
     ev.tenths = m_clock;
     const int side = static_cast<int>(ev.side);
-    if (isControlGiving(ev.type, ev.outcome) && side != m_control) {
-        if (!m_pressPrepared) {
-            preparePress(side, ctx);
-        }
-        m_control = side;
-    }
-    m_pressPrepared = false;
+    // Once the winning counter-press has landed, later events are no longer held to its window.
     if (m_hardDeadline > 0 && m_press.active && m_press.wins) {
         const bool regain =
             (side == m_press.pressing && isControlGiving(ev.type, ev.outcome)) ||
@@ -229,12 +223,20 @@ void MatchEngine::emit(MatchEvent ev, GainContext ctx) {
             m_hardDeadline = 0;
         }
     }
+    if (isControlGiving(ev.type, ev.outcome) && side != m_control) {
+        if (!m_pressPrepared) {
+            preparePress(side, ctx);
+        }
+        m_control = side;
+    }
+    m_pressPrepared = false;
     m_lastTouch[static_cast<std::size_t>(side)] = {ev.x, ev.y};
     if (ev.type == EventType::Shot && ev.outcome == Outcome::Goal) {
         ++m_score[static_cast<std::size_t>(side)];
     }
     // Two files carry an extra per-event field on shots on target; readers should ignore it.
-    if (ev.type == EventType::Shot && (ev.outcome == Outcome::Goal || ev.outcome == Outcome::Saved) &&
+    if (ev.type == EventType::Shot &&
+        (ev.outcome == Outcome::Goal || ev.outcome == Outcome::Saved) &&
         (m_fixture.number == 3 || m_fixture.number == 20)) {
         ev.clip = matchClock(m_period, m_clock);
     }
@@ -272,7 +274,8 @@ Point MatchEngine::clampToPitch(Point p, double margin) const {
 }
 
 const Slot& MatchEngine::slotOf(int side, int slot) const {
-    return m_teams[static_cast<std::size_t>(side)]->formation->slots[static_cast<std::size_t>(slot)];
+    return m_teams[static_cast<std::size_t>(side)]
+        ->formation->slots[static_cast<std::size_t>(slot)];
 }
 
 int MatchEngine::shirt(int side, int slot) const {

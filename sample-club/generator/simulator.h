@@ -46,13 +46,17 @@ enum class Tag : std::uint32_t {
 constexpr std::uint32_t operator|(Tag a, Tag b) {
     return static_cast<std::uint32_t>(a) | static_cast<std::uint32_t>(b);
 }
-constexpr std::uint32_t operator|(std::uint32_t a, Tag b) { return a | static_cast<std::uint32_t>(b); }
-constexpr bool hasTag(std::uint32_t tags, Tag t) { return (tags & static_cast<std::uint32_t>(t)) != 0; }
+constexpr std::uint32_t operator|(std::uint32_t a, Tag b) {
+    return a | static_cast<std::uint32_t>(b);
+}
+constexpr bool hasTag(std::uint32_t tags, Tag t) {
+    return (tags & static_cast<std::uint32_t>(t)) != 0;
+}
 
 // One on-ball action, coordinates in the acting side's attacking direction (metres, unrounded).
 struct MatchEvent {
     int period = 1;
-    int tenths = 0;  // time since the start of the period in 0.1 s
+    int tenths = 0; // time since the start of the period in 0.1 s
     Side side = Side::Us;
     int shirt = 0;
     EventType type = EventType::Pass;
@@ -63,7 +67,7 @@ struct MatchEvent {
     double toX = 0.0;
     double toY = 0.0;
     std::uint32_t tags = 0;
-    std::string clip;  // optional extra field, written only when non-empty
+    std::string clip; // optional extra field, written only when non-empty
 };
 
 // Everything needed to write one match file.
@@ -72,9 +76,9 @@ struct MatchRecord {
     std::string opponentName;
     int pitchLength = 105;
     int pitchWidth = 68;
-    std::array<int, 2> score{};           // indexed by Side
-    std::array<int, 2> periodSeconds{};   // length of each period incl. added time
-    std::array<bool, 2> usAttackPlusX{};  // ground frame only: our direction per period
+    std::array<int, 2> score{};          // indexed by Side
+    std::array<int, 2> periodSeconds{};  // length of each period incl. added time
+    std::array<bool, 2> usAttackPlusX{}; // ground frame only: our direction per period
     std::vector<MatchEvent> events;
 };
 

@@ -8,7 +8,6 @@
 #include <boost/math/distributions/binomial.hpp>
 #include <boost/math/distributions/poisson.hpp>
 #include <catch2/catch.hpp>
-
 #include <cmath>
 #include <limits>
 #include <stdexcept>
@@ -68,8 +67,10 @@ TEST_CASE("Clopper-Pearson limits are where the binomial tails equal alpha/2", "
     // checked with Boost's binomial distribution rather than the Beta quantiles used inside.
     namespace bm = boost::math;
     const Interval ci = clopperPearson(7, 40, 0.9);
-    CHECK_THAT(bm::cdf(bm::complement(bm::binomial_distribution<double>(40, ci.low), 6.0)), WithinRel(0.05, 1e-10));
-    CHECK_THAT(bm::cdf(bm::binomial_distribution<double>(40, ci.high), 7.0), WithinRel(0.05, 1e-10));
+    CHECK_THAT(bm::cdf(bm::complement(bm::binomial_distribution<double>(40, ci.low), 6.0)),
+               WithinRel(0.05, 1e-10));
+    CHECK_THAT(bm::cdf(bm::binomial_distribution<double>(40, ci.high), 7.0),
+               WithinRel(0.05, 1e-10));
 }
 
 TEST_CASE("single-proportion intervals: edges", "[stats]") {
@@ -111,9 +112,11 @@ TEST_CASE("Garwood interval", "[stats]") {
         namespace bm = boost::math;
         const double exposure = 6.0;
         const Interval ci = garwood(17, exposure, 0.95);
-        CHECK_THAT(bm::cdf(bm::complement(bm::poisson_distribution<double>(ci.low * exposure), 16.0)),
+        CHECK_THAT(
+            bm::cdf(bm::complement(bm::poisson_distribution<double>(ci.low * exposure), 16.0)),
+            WithinRel(0.025, 1e-10));
+        CHECK_THAT(bm::cdf(bm::poisson_distribution<double>(ci.high * exposure), 17.0),
                    WithinRel(0.025, 1e-10));
-        CHECK_THAT(bm::cdf(bm::poisson_distribution<double>(ci.high * exposure), 17.0), WithinRel(0.025, 1e-10));
     }
     SECTION("edges") {
         // Exposure 0 and count 0: no information, documented as {0, +inf}.
@@ -123,7 +126,8 @@ TEST_CASE("Garwood interval", "[stats]") {
         CHECK_THROWS_AS(garwood(3, 0.0, 0.95), std::invalid_argument);
         CHECK_THROWS_AS(garwood(-1, 2.0, 0.95), std::invalid_argument);
         CHECK_THROWS_AS(garwood(1, -2.0, 0.95), std::invalid_argument);
-        CHECK_THROWS_AS(garwood(1, std::numeric_limits<double>::infinity(), 0.95), std::invalid_argument);
+        CHECK_THROWS_AS(garwood(1, std::numeric_limits<double>::infinity(), 0.95),
+                        std::invalid_argument);
     }
 }
 
@@ -180,8 +184,9 @@ TEST_CASE("EWMA chart matches the NIST/SEMATECH e-Handbook example", "[stats]") 
     // the factor sqrt(λ/(2 − λ)) to 0.4201); EWMA values printed to 2 decimals.
     const std::vector<double> data{52.0, 47.0, 53.0, 49.3, 50.1, 47.0, 51.0, 50.1, 51.2, 50.5,
                                    49.6, 47.6, 49.9, 51.3, 47.8, 51.2, 52.6, 52.4, 53.6, 52.1};
-    const std::vector<double> expected{50.60, 49.52, 50.56, 50.18, 50.16, 49.21, 49.75, 49.85, 50.26, 50.33,
-                                       50.11, 49.36, 49.52, 50.05, 49.38, 49.92, 50.73, 51.23, 51.94, 51.99};
+    const std::vector<double> expected{50.60, 49.52, 50.56, 50.18, 50.16, 49.21, 49.75,
+                                       49.85, 50.26, 50.33, 50.11, 49.36, 49.52, 50.05,
+                                       49.38, 49.92, 50.73, 51.23, 51.94, 51.99};
     const std::vector<EwmaPoint> chart = ewma(data, 0.3, 50.0, 2.0539, 3.0, false);
     REQUIRE(chart.size() == expected.size());
     for (std::size_t t = 0; t < chart.size(); ++t) {
@@ -283,6 +288,16 @@ TEST_CASE("Fisher's exact test", "[stats]") {
         // scipy.stats.fisher_exact docstring: [[8, 2], [1, 5]] → 0.034965034965034975 [published].
         CHECK_THAT(fisherExact(8, 2, 1, 5).pTwoSided, WithinRel(0.034965034965034975, 1e-12));
     }
+    SECTION("a large table") {
+        // Library reference, computed with Debian's scipy 1.10.1 (not a paper):
+        // fisher_exact([[20000, 30000], [25000, 26000]]) → 4.681588724752974e-183, 'less'
+        // → 2.4453823391790172e-183. Also guards the cost: the two-sided sum walks tails, not
+        // the 45 000 tables of the support.
+        const FisherResult r = fisherExact(20000, 30000, 25000, 26000);
+        CHECK_THAT(r.pTwoSided, WithinRel(4.681588724752974e-183, 1e-9));
+        CHECK_THAT(r.pLess, WithinRel(2.4453823391790172e-183, 1e-9));
+        CHECK(r.pGreater == 1.0);
+    }
     SECTION("the most probable table has p = 1") {
         // Hand-derived: [[2, 2], [2, 2]] is the mode, every table is no more probable.
         CHECK(fisherExact(2, 2, 2, 2).pTwoSided == 1.0);
@@ -309,6 +324,10 @@ TEST_CASE("exact conditional test of two Poisson rates", "[stats]") {
     CHECK_THAT(r.pTwoSided, WithinRel(1.0 / 8.0, 1e-12));
     // Hand-derived: exposures 1 and 3 → p = ¼; 3 vs 1 gives P(K >= 3) = 4·(¼)³(¾) + (¼)⁴ = 13/256.
     CHECK_THAT(poissonConditionalTest(3, 1.0, 1, 3.0).pGreater, WithinRel(13.0 / 256.0, 1e-12));
+    // Library reference, computed with Debian's scipy 1.10.1 (not a paper):
+    // binomtest(30000, 62000, 0.5).pvalue → 9.838084128935592e-16.
+    CHECK_THAT(poissonConditionalTest(30000, 50.0, 32000, 50.0).pTwoSided,
+               WithinRel(9.838084128935592e-16, 1e-9));
     // Edges documented in stats.h.
     const PoissonTwoSample none = poissonConditionalTest(0, 2.0, 0, 5.0);
     CHECK(none.pLess == 1.0);
@@ -356,8 +375,8 @@ TEST_CASE("p-chart matches the NIST/SEMATECH e-Handbook example", "[stats]") {
     // Quality Control, 2nd ed.): 30 samples of 50. From memory, unconfirmed, though consistent
     // with the handbook's p̄ = 0.2313: the data, UCL 0.4102, LCL 0.0524, samples 15 and 23
     // above the UCL. Limits printed to 4 decimals.
-    const std::vector<long> defectives{12, 15, 8,  10, 4,  7,  16, 9,  14, 10, 5,  6,  17, 12, 22,
-                                       8,  10, 5,  13, 11, 20, 18, 24, 15, 9,  12, 7,  13, 9,  6};
+    const std::vector<long> defectives{12, 15, 8, 10, 4,  7,  16, 9,  14, 10, 5,  6, 17, 12, 22,
+                                       8,  10, 5, 13, 11, 20, 18, 24, 15, 9,  12, 7, 13, 9,  6};
     const std::vector<long> sizes(defectives.size(), 50);
     const std::vector<PChartPoint> chart = pChart(defectives, sizes, defectives.size());
     REQUIRE(chart.size() == 30);

@@ -93,10 +93,11 @@ class Cases:
     """Requests to send, each with a function that checks the reply."""
 
     def __init__(self):
-        self.items = []  # (fn, args, checker); checker(result) -> list of problems
+        # (fn, label, args, checker): label names the report line; checker(result) -> problems
+        self.items = []
 
-    def add(self, fn, args, checker):
-        self.items.append((fn, args, checker))
+    def add(self, fn, args, checker, label=None):
+        self.items.append((fn, label or fn, args, checker))
 
 
 def pick_n(rng):
@@ -145,7 +146,8 @@ def value_checker(ref, what, atol=ATOL, rtol=RTOL):
 
 def fields_checker(refs, what):
     def check(result):
-        return [f"{k} {result[k]} vs {what} {v!r}" for k, v in refs.items() if not close(result[k], v)]
+        return [f"{k} {result[k]} vs {what} {v!r}" for k, v in refs.items()
+                if not close(result[k], v)]
     return check
 
 
@@ -153,7 +155,8 @@ def single_proportion(cases, rng):
     for _ in range(60):
         n = pick_n(rng)
         x, level = pick_x(rng, n), pick_level(rng)
-        for fn, method in (("wilson", "wilson"), ("wilsonCC", "wilsoncc"), ("clopperPearson", "exact")):
+        for fn, method in (("wilson", "wilson"), ("wilsonCC", "wilsoncc"),
+                           ("clopperPearson", "exact")):
             ci = stats.binomtest(x, n).proportion_ci(confidence_level=level, method=method)
             cases.add(fn, [x, n, level],
                       interval_checker(ci.low, ci.high, f"scipy proportion_ci('{method}')"))
@@ -272,7 +275,8 @@ def poisson_conditional(cases, rng):
         refs = {"pLess": stats.binomtest(c1, total, p, alternative="less").pvalue,
                 "pGreater": stats.binomtest(c1, total, p, alternative="greater").pvalue,
                 "pTwoSided": stats.binomtest(c1, total, p, alternative="two-sided").pvalue}
-        cases.add("poissonConditionalTest", [c1, e1, c2, e2], fields_checker(refs, "scipy binomtest"))
+        cases.add("poissonConditionalTest", [c1, e1, c2, e2],
+                  fields_checker(refs, "scipy binomtest"))
 
 
 def benjamini_hochberg(cases, rng):
@@ -298,8 +302,10 @@ def benjamini_hochberg(cases, rng):
         reject = [bool(v) for v in reject]
 
         def check_adjusted(result, adjusted=adjusted):
-            return [f"[{k}] {o} vs statsmodels {r!r}" for k, (o, r) in enumerate(zip(result, adjusted))
-                    if not close(o, r)] or ([] if len(result) == len(adjusted) else ["length differs"])
+            if len(result) != len(adjusted):
+                return ["length differs"]
+            return [f"[{k}] {o} vs statsmodels {r!r}"
+                    for k, (o, r) in enumerate(zip(result, adjusted)) if not close(o, r)]
 
         def check_reject(result, reject=reject):
             return [] if result == reject else [f"{result} vs statsmodels {reject}"]
@@ -346,8 +352,10 @@ def improved(cases, rng):
         tail = stats.gamma.cdf if higher else stats.gamma.sf
         levels = [1e-9, 1e-6, 1e-3, 0.01, 0.1, 0.25, 0.5, 0.75, 0.9, 0.99, 0.999, 1 - 1e-6]
         points = sorted(set(float(v) for v in np.concatenate(
-            [stats.gamma.ppf(levels, s1, scale=1 / e1), stats.gamma.ppf(levels, s2, scale=1 / e2)])))
-        upper = max(stats.gamma.isf(1e-18, s1, scale=1 / e1), stats.gamma.isf(1e-18, s2, scale=1 / e2))
+            [stats.gamma.ppf(levels, s1, scale=1 / e1),
+             stats.gamma.ppf(levels, s2, scale=1 / e2)])))
+        upper = max(stats.gamma.isf(1e-18, s1, scale=1 / e1),
+                    stats.gamma.isf(1e-18, s2, scale=1 / e2))
         ref, _ = integrate.quad(
             lambda t: stats.gamma.pdf(t, s2, scale=1 / e2) * tail(t, s1, scale=1 / e1), 0, upper,
             points=[p for p in points if 0 < p < upper], limit=500, epsabs=1e-13, epsrel=1e-12)
@@ -364,24 +372,28 @@ def ewma(cases, rng):
         ref = [float(v) for v in ref]
 
         def check(result, ref=ref):
-            return [f"[{k}] {o} vs pandas {r!r}" for k, (o, r) in enumerate(zip(result, ref))
-                    if not close(o, r)] or ([] if len(result) == len(ref) else ["length differs"])
+            if len(result) != len(ref):
+                return ["length differs"]
+            return [f"[{k}] {o} vs pandas {r!r}"
+                    for k, (o, r) in enumerate(zip(result, ref)) if not close(o, r)]
         cases.add("ewmaSeries", [x, lam, start], check)
 
 
 def validation(cases):
+    """Bad arguments must be refused: the check passes only on an error reply."""
     def must_fail(result):
         return [f"expected an error, got {result}"]
-    for fn, args in (("wilson", [5, 4, 0.95]), ("jeffreys", [-1, 4, 0.95]), ("clopperPearson", [1, 4, 1.0]),
+    for fn, args in (("wilson", [5, 4, 0.95]), ("jeffreys", [-1, 4, 0.95]),
+                     ("clopperPearson", [1, 4, 1.0]),
                      ("garwood", [3, 0.0, 0.95]), ("fisherExact", [1, -2, 3, 4]),
                      ("benjaminiHochberg", [[0.2, 1.5]]), ("probRateImproved", [3, 2, 1, 2, True]),
                      ("pChart", [[1, 2], [5, 5], 0, 3])):
-        cases.add(fn + " (bad arguments)", args, must_fail)
+        cases.add(fn, args, must_fail, label="argument validation")
 
 
 def run_driver(driver, cases):
-    requests = "".join(json.dumps({"fn": fn.split(" ")[0], "args": args}) + "\n"
-                       for fn, args, _ in cases.items)
+    requests = "".join(json.dumps({"fn": fn, "args": args}) + "\n"
+                       for fn, _, args, _ in cases.items)
     try:
         done = subprocess.run([driver], input=requests, capture_output=True, text=True, timeout=600)
     except (OSError, subprocess.TimeoutExpired) as e:
@@ -389,8 +401,8 @@ def run_driver(driver, cases):
         sys.exit(2)
     replies = [json.loads(line) for line in done.stdout.splitlines() if line.strip()]
     if done.returncode != 0 or len(replies) != len(cases.items):
-        print(f"driver failed (exit {done.returncode}, {len(replies)} replies to {len(cases.items)} "
-              f"requests): {done.stderr.strip()}")
+        print(f"driver failed (exit {done.returncode}, {len(replies)} replies to "
+              f"{len(cases.items)} requests): {done.stderr.strip()}")
         sys.exit(2)
     return replies
 
@@ -415,24 +427,24 @@ def main():
 
     replies = run_driver(args.driver, cases)
     tally = {}  # function -> [passed, failed, largest difference / tolerance]
-    for (fn, fn_args, checker), reply in zip(cases.items, replies):
+    for (fn, label, fn_args, checker), reply in zip(cases.items, replies):
         MARGINS.clear()
-        if fn.endswith("(bad arguments)"):
+        if label == "argument validation":
             problems = [] if "error" in reply else checker(reply.get("result"))
         elif "error" in reply:
             problems = [f"error: {reply['error']}"]
         else:
             problems = checker(reply["result"])
-        counts = tally.setdefault(fn, [0, 0, 0.0])
+        counts = tally.setdefault(label, [0, 0, 0.0])
         counts[0 if not problems else 1] += 1
         counts[2] = max([counts[2]] + MARGINS)
         if problems:
             print(f"FAIL {fn}{json.dumps(fn_args)}: " + "; ".join(problems))
     for note in notes:
         print(note)
-    for fn, (ok, bad, margin) in tally.items():
+    for label, (ok, bad, margin) in tally.items():
         detail = f" (largest difference {margin:.2g} of the tolerance)" if margin else ""
-        print(f"{fn}: {ok} passed, {bad} failed{detail}")
+        print(f"{label}: {ok} passed, {bad} failed{detail}")
     total_ok = sum(v[0] for v in tally.values())
     total_bad = sum(v[1] for v in tally.values())
     print(f"{total_ok} passed, {total_bad} failed")
