@@ -54,13 +54,14 @@ void requireLevel(double level) {
     if (!(level > 0.0 && level < 1.0)) fail("level must lie strictly between 0 and 1");
 }
 
-void requireCounts(long x, long n) {
+void requireCounts(double x, double n) {
+    if (!std::isfinite(x) || !std::isfinite(n)) fail("counts must be finite");
     if (n < 0 || x < 0) fail("counts must be non-negative");
     if (x > n) fail("successes exceed trials");
 }
 
-void requireExposure(long count, double exposure) {
-    if (count < 0) fail("count must be non-negative");
+void requireExposure(double count, double exposure) {
+    if (!std::isfinite(count) || count < 0) fail("count must be finite and non-negative");
     if (!std::isfinite(exposure) || exposure < 0.0)
         fail("exposure must be finite and non-negative");
     if (exposure == 0.0 && count > 0) fail("a positive count needs a positive exposure");
@@ -147,13 +148,13 @@ template <class Law> double twoSidedNoMoreProbable(const Law& law, long observed
 
 // Wilson score interval: Newcombe (1998) "Two-sided confidence intervals for the single
 // proportion", method 3: (2x + z² ± z·sqrt(z² + 4x(n − x)/n)) / (2(n + z²)).
-Interval wilson(long x, long n, double level) {
+Interval wilson(double x, double n, double level) {
     requireCounts(x, n);
     requireLevel(level);
     if (n == 0) return {0.0, 1.0};
     const double z = twoSidedZ(level);
-    const double xd = static_cast<double>(x);
-    const double nd = static_cast<double>(n);
+    const double xd = x;
+    const double nd = n;
     const double denom = 2.0 * (nd + z * z);
     const double centre = (2.0 * xd + z * z) / denom;
     const double half = z * std::sqrt(z * z + 4.0 * xd * (nd - xd) / nd) / denom;
@@ -188,10 +189,10 @@ Interval wilsonCC(long x, long n, double level) {
 
 // Jeffreys interval with the boundary modification of Brown, Cai & DasGupta (2001),
 // Statistical Science 16:101–133: equal-tailed Beta(x + ½, n − x + ½) quantiles.
-Interval jeffreys(long x, long n, double level) {
+Interval jeffreys(double x, double n, double level) {
     requireCounts(x, n);
     requireLevel(level);
-    const Interval ci = betaInterval(x + 0.5, static_cast<double>(n - x) + 0.5, level);
+    const Interval ci = betaInterval(x + 0.5, n - x + 0.5, level);
     return {x == 0 ? 0.0 : ci.low, x == n ? 1.0 : ci.high};
 }
 
@@ -214,12 +215,12 @@ Interval clopperPearson(long x, long n, double level) {
 
 // Garwood (1936), Biometrika 28:437–442: for a count k, low = χ²_{2k}(α/2)/2 and
 // high = χ²_{2k+2}(1 − α/2)/2 bound the mean; divided by the exposure for a rate.
-Interval garwood(long count, double exposure, double level) {
+Interval garwood(double count, double exposure, double level) {
     requireExposure(count, exposure);
     requireLevel(level);
     if (exposure == 0.0) return {0.0, kInf};
     const double tail = (1.0 - level) / 2.0;
-    const double k = static_cast<double>(count);
+    const double k = count;
     double low = 0.0;
     if (count > 0) low = bm::quantile(ChiSquared(2.0 * k), tail) / 2.0;
     const double high = bm::quantile(bm::complement(ChiSquared(2.0 * k + 2.0), tail)) / 2.0;
@@ -229,26 +230,26 @@ Interval garwood(long count, double exposure, double level) {
 // ---- Posterior evidence ------------------------------------------------------------------
 
 // Jeffreys prior Beta(½, ½) + binomial likelihood → Beta(x + ½, n − x + ½) (conjugacy).
-double probRateBelow(long x, long n, double target) {
+double probRateBelow(double x, double n, double target) {
     requireCounts(x, n);
     requireTarget(target);
     if (target <= 0.0) return 0.0;
     if (target >= 1.0) return 1.0;
-    return bm::cdf(Beta(x + 0.5, static_cast<double>(n - x) + 0.5), target);
+    return bm::cdf(Beta(x + 0.5, n - x + 0.5), target);
 }
 
 // Upper tail of the same posterior.
-double probRateAbove(long x, long n, double target) {
+double probRateAbove(double x, double n, double target) {
     requireCounts(x, n);
     requireTarget(target);
     if (target <= 0.0) return 1.0;
     if (target >= 1.0) return 0.0;
-    return betaUpperTail(Beta(x + 0.5, static_cast<double>(n - x) + 0.5), target);
+    return betaUpperTail(Beta(x + 0.5, n - x + 0.5), target);
 }
 
 // Jeffreys prior for a Poisson mean (∝ λ^−½) + Poisson likelihood over `exposure` →
 // Gamma(shape count + ½, rate exposure); Boost takes the scale 1/exposure.
-double probPoissonRateBelow(long count, double exposure, double target) {
+double probPoissonRateBelow(double count, double exposure, double target) {
     requireExposure(count, exposure);
     requireTarget(target);
     if (exposure == 0.0) return kNaN;
@@ -258,7 +259,7 @@ double probPoissonRateBelow(long count, double exposure, double target) {
 }
 
 // Upper tail of the same posterior.
-double probPoissonRateAbove(long count, double exposure, double target) {
+double probPoissonRateAbove(double count, double exposure, double target) {
     requireExposure(count, exposure);
     requireTarget(target);
     if (exposure == 0.0) return kNaN;

@@ -6,7 +6,9 @@
 //
 // Conventions shared by every function:
 // - `level` is a two-sided confidence (or credible) level in (0, 1), e.g. 0.95.
-// - Counts are `long` and must be >= 0, with x <= n; exposures are finite and >= 0.
+// - Counts must be >= 0, with x <= n; exposures are finite and >= 0. Intervals and posterior
+//   tails for one sample take real counts, so the weighted sums of an EWMA window (effective
+//   counts) use the same formulas; exact tests and the p-chart take whole counts (`long`).
 // - Bad arguments throw std::invalid_argument; documented edge cases return values.
 
 #include <cstddef>
@@ -24,7 +26,7 @@ struct Interval {
 
 /// Wilson score interval (Wilson 1927; Newcombe 1998 method 3). n == 0 → {0, 1};
 /// x == 0 → low exactly 0; x == n → high exactly 1.
-Interval wilson(long x, long n, double level);
+Interval wilson(double x, double n, double level);
 
 /// Wilson score interval with continuity correction (Newcombe 1998 method 4).
 /// Same edge cases as `wilson`.
@@ -32,7 +34,7 @@ Interval wilsonCC(long x, long n, double level);
 
 /// Jeffreys interval: equal-tailed quantiles of Beta(x + ½, n − x + ½), with low 0 when
 /// x == 0 and high 1 when x == n (Brown, Cai & DasGupta 2001). n == 0 → {0, 1}.
-Interval jeffreys(long x, long n, double level);
+Interval jeffreys(double x, double n, double level);
 
 /// Clopper–Pearson "exact" interval from Beta quantiles. n == 0 → {0, 1}.
 Interval clopperPearson(long x, long n, double level);
@@ -42,23 +44,23 @@ Interval clopperPearson(long x, long n, double level);
 /// Exact (Garwood 1936) interval for a Poisson rate count/exposure, from chi-square
 /// quantiles. count == 0 → low 0. exposure == 0 with count == 0 → {0, +inf} (no information);
 /// a positive count with zero exposure throws.
-Interval garwood(long count, double exposure, double level);
+Interval garwood(double count, double exposure, double level);
 
 // ---- Posterior evidence about a target -----------------------------------------------------
 
 /// P(p < target | x of n) under the Jeffreys prior Beta(½, ½), i.e. the posterior
 /// Beta(x + ½, n − x + ½) cdf at target. n == 0 gives the prior's probability.
 /// target <= 0 → 0; target >= 1 → 1.
-double probRateBelow(long x, long n, double target);
+double probRateBelow(double x, double n, double target);
 /// P(p > target | x of n) = 1 − probRateBelow, computed as an upper tail (no cancellation).
-double probRateAbove(long x, long n, double target);
+double probRateAbove(double x, double n, double target);
 
 /// P(λ < target | count in exposure) under the Jeffreys prior for a Poisson rate
 /// (density ∝ λ^−½): posterior Gamma(shape count + ½, rate exposure). target <= 0 → 0.
 /// exposure == 0 (count must be 0) → NaN: the prior is improper, so there is no posterior.
-double probPoissonRateBelow(long count, double exposure, double target);
+double probPoissonRateBelow(double count, double exposure, double target);
 /// P(λ > target | count in exposure), the upper tail of the same posterior; NaN as above.
-double probPoissonRateAbove(long count, double exposure, double target);
+double probPoissonRateAbove(double count, double exposure, double target);
 
 /// Mean, standard deviation and equal-tailed interval of a Beta(a, b) distribution.
 struct BetaSummary {

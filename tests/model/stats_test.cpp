@@ -8,6 +8,8 @@
 #include <boost/math/distributions/binomial.hpp>
 #include <boost/math/distributions/poisson.hpp>
 #include <catch2/catch.hpp>
+
+#include <functional>
 #include <cmath>
 #include <limits>
 #include <stdexcept>
@@ -74,7 +76,11 @@ TEST_CASE("Clopper-Pearson limits are where the binomial tails equal alpha/2", "
 }
 
 TEST_CASE("single-proportion intervals: edges", "[stats]") {
-    for (auto interval : {wilson, wilsonCC, jeffreys, clopperPearson}) {
+    using Method = std::function<Interval(long, long, double)>;
+    const std::vector<Method> methods{
+        [](long x, long n, double level) { return wilson(x, n, level); }, wilsonCC,
+        [](long x, long n, double level) { return jeffreys(x, n, level); }, clopperPearson};
+    for (const auto& interval : methods) {
         // n = 0: no information, the whole range (documented in stats.h).
         requireInterval(interval(0, 0, 0.95), 0.0, 1.0, 0.0);
         // x = 0 → low exactly 0; x = n → high exactly 1 (stats.h).
@@ -412,4 +418,15 @@ TEST_CASE("p-chart: baseline, varying sizes and edges", "[stats]") {
     CHECK_THROWS_AS(pChart({1, 2}, {5, 5}, 0), std::invalid_argument);
     CHECK_THROWS_AS(pChart({1, 2}, {5, 5}, 3), std::invalid_argument);
     CHECK_THROWS_AS(pChart({6, 2}, {5, 5}, 1), std::invalid_argument);
+}
+
+TEST_CASE("posterior tails accept the effective (weighted) counts of an EWMA window", "[stats]") {
+    // Values from Debian's scipy 1.10.1: beta.cdf(0.5, 1.2, 2.1) for x = 0.7 of n = 2.3
+    // (posterior Beta(0.7 + ½, 1.6 + ½)), and gamma.sf(1.5, 4.2, scale=1/2.4) for a count of
+    // 3.7 over an exposure of 2.4 (posterior Gamma(3.7 + ½, rate 2.4)).
+    CHECK_THAT(probRateBelow(0.7, 2.3, 0.5), Catch::Matchers::WithinRel(0.7150886778051285, 1e-9));
+    CHECK_THAT(probPoissonRateAbove(3.7, 2.4, 1.5),
+               Catch::Matchers::WithinRel(0.5566828476480068, 1e-9));
+    // Whole counts give the same as before: the real-valued form is the same formula.
+    CHECK(wilson(3.0, 12.0, 0.9).low == wilson(3L, 12L, 0.9).low);
 }
