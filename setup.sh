@@ -44,6 +44,7 @@ prepare_demo() {
   # Idempotent: an identical match file is a no-op, so the demo club is never rebuilt over
   # edits made in it.
   "$build_dir"/app/cli/pitchloop --db sample-club/club.sqlite ingest sample-club/matches/*.json
+  "$build_dir"/app/cli/pitchloop --db sample-club/club.sqlite targets import sample-club/targets.json
 }
 
 case "$mode" in

@@ -98,6 +98,25 @@ CREATE TABLE setting(
   value TEXT NOT NULL) WITHOUT ROWID;
 INSERT INTO setting(key, value) VALUES ('tally_grid', 'equal:6x5');
 )sql",
+    // 3: season targets as an effective-dated history (never overwritten).
+    R"sql(
+CREATE TABLE target(
+  id INTEGER PRIMARY KEY,
+  season_id INTEGER NOT NULL REFERENCES season(id) ON DELETE CASCADE,
+  metric_id TEXT NOT NULL,
+  band INTEGER NOT NULL,
+  lane INTEGER NOT NULL,
+  direction TEXT NOT NULL CHECK(direction IN ('at_least', 'at_most')),
+  value REAL NOT NULL,
+  watch_margin REAL NOT NULL,
+  min_sample INTEGER NOT NULL,
+  author TEXT NOT NULL,
+  rationale TEXT NOT NULL DEFAULT '',
+  effective_from TEXT NOT NULL,
+  recorded_at TEXT NOT NULL,
+  retired INTEGER NOT NULL DEFAULT 0);
+CREATE INDEX target_by_key ON target(season_id, metric_id, band, lane, effective_from);
+)sql",
 };
 
 static_assert(std::size(kMigrations) == ClubRepository::kSchemaVersion);
@@ -404,10 +423,15 @@ void ClubRepository::storeMatch(const Match& match, const SourceFile& source,
         }
         // Club, squad and season are found or made on the fly.
         {
+            // A club row made before any match (targets set before the season) has no name
+            // yet: the first match names it.
             SQLite::Statement q(*m_db, "INSERT OR IGNORE INTO club(name) SELECT ? WHERE NOT "
                                        "EXISTS (SELECT 1 FROM club)");
             q.bind(1, info.us);
             q.exec();
+            SQLite::Statement name(*m_db, "UPDATE club SET name = ? WHERE name = ''");
+            name.bind(1, info.us);
+            name.exec();
         }
         const std::int64_t clubId = m_db->execAndGet("SELECT min(id) FROM club").getInt64();
         {
@@ -615,6 +639,254 @@ void ClubRepository::recomputeTallies(const std::optional<std::string>& metricId
         SQLite::Statement q(*m_db, "SELECT id, code FROM match");
         while (q.executeStep()) rows.emplace_back(q.getColumn(0).getInt64(), q.getColumn(1).getString());
         for (const auto& [row, code] : rows) writeTallies(row, *loadMatch(code), specs);
+        tx.commit();
+        return 0;
+    });
+}
+
+std::optional<std::pair<std::string, std::string>>
+ClubRepository::seasonOfMatch(const std::string& matchId) const {
+    return guarded("cannot read match", [&]() -> std::optional<std::pair<std::string, std::string>> {
+        SQLite::Statement q(*m_db, "SELECT sq.name, se.name FROM match m JOIN season se ON "
+                                   "se.id = m.season_id JOIN squad sq ON sq.id = se.squad_id "
+                                   "WHERE m.code = ?");
+        q.bind(1, matchId);
+        if (!q.executeStep()) return std::nullopt;
+        return std::pair{q.getColumn(0).getString(), q.getColumn(1).getString()};
+    });
+}
+
+std::vector<std::string> ClubRepository::seasons(const std::string& squad) const {
+    return guarded("cannot read seasons", [&] {
+        std::vector<std::string> out;
+        SQLite::Statement q(*m_db, "SELECT se.name FROM season se JOIN squad sq ON sq.id = "
+                                   "se.squad_id WHERE sq.name = ? ORDER BY se.starts");
+        q.bind(1, squad);
+        while (q.executeStep()) out.push_back(q.getColumn(0).getString());
+        return out;
+    });
+}
+
+namespace {
+
+std::int64_t findOrMakeSeason(SQLite::Database& db, const std::string& squad,
+                              const std::string& season) {
+    // A club row may exist before any match names it (targets are set before the season).
+    db.exec("INSERT INTO club(name) SELECT '' WHERE NOT EXISTS (SELECT 1 FROM club)");
+    const std::int64_t clubId = db.execAndGet("SELECT min(id) FROM club").getInt64();
+    SQLite::Statement sq(db, "INSERT OR IGNORE INTO squad(club_id, name) VALUES (?, ?)");
+    sq.bind(1, clubId);
+    sq.bind(2, squad);
+    sq.exec();
+    SQLite::Statement find(db, "SELECT se.id FROM season se JOIN squad sq ON sq.id = se.squad_id "
+                               "WHERE sq.name = ? AND se.name = ?");
+    find.bind(1, squad);
+    find.bind(2, season);
+    if (find.executeStep()) return find.getColumn(0).getInt64();
+    int first = 0;
+    try {
+        first = std::stoi(season.substr(0, 4));
+    } catch (const std::exception&) {
+        first = 0;
+    }
+    if (season.size() != 7 || season[4] != '-' || first < 1900 ||
+        seasonOf(std::to_string(first) + "-08-01") != season)
+        throw StorageError("'" + season + "' is not a season name such as 2026-27");
+    SQLite::Statement ins(db, "INSERT INTO season(squad_id, name, starts, ends) SELECT id, ?, ?, ? "
+                              "FROM squad WHERE club_id = ? AND name = ?");
+    ins.bind(1, season);
+    ins.bind(2, std::to_string(first) + "-07-01");
+    ins.bind(3, std::to_string(first + 1) + "-06-30");
+    ins.bind(4, clubId);
+    ins.bind(5, squad);
+    ins.exec();
+    return db.getLastInsertRowid();
+}
+
+Target readTarget(SQLite::Statement& q) {
+    Target t;
+    t.version = q.getColumn(0).getInt64();
+    t.key.squad = q.getColumn(1).getString();
+    t.key.season = q.getColumn(2).getString();
+    t.key.metric = q.getColumn(3).getString();
+    t.key.band = q.getColumn(4).getInt();
+    t.key.lane = q.getColumn(5).getInt();
+    t.direction = directionFromString(q.getColumn(6).getString()).value_or(Direction::AtLeast);
+    t.value = q.getColumn(7).getDouble();
+    t.watchMargin = q.getColumn(8).getDouble();
+    t.minSample = static_cast<long>(q.getColumn(9).getInt64());
+    t.author = q.getColumn(10).getString();
+    t.rationale = q.getColumn(11).getString();
+    t.effectiveFrom = q.getColumn(12).getString();
+    t.recordedAt = q.getColumn(13).getString();
+    t.retired = q.getColumn(14).getInt() != 0;
+    return t;
+}
+
+const char* kTargetSelect =
+    "SELECT t.id, sq.name, se.name, t.metric_id, t.band, t.lane, t.direction, t.value, "
+    "t.watch_margin, t.min_sample, t.author, t.rationale, t.effective_from, t.recorded_at, "
+    "t.retired FROM target t JOIN season se ON se.id = t.season_id JOIN squad sq ON "
+    "sq.id = se.squad_id ";
+
+} // namespace
+
+void ClubRepository::ensureSeason(const std::string& squad, const std::string& season) {
+    guarded("cannot make season", [&] {
+        SQLite::Transaction tx(*m_db);
+        findOrMakeSeason(*m_db, squad, season);
+        tx.commit();
+        return 0;
+    });
+}
+
+std::vector<Target> ClubRepository::targets(const std::string& squad,
+                                            const std::string& season) const {
+    return guarded("cannot read targets", [&] {
+        std::vector<Target> out;
+        SQLite::Statement q(*m_db, std::string(kTargetSelect) +
+                                       "WHERE sq.name = ? AND se.name = ? ORDER BY t.id");
+        q.bind(1, squad);
+        q.bind(2, season);
+        while (q.executeStep()) out.push_back(readTarget(q));
+        return out;
+    });
+}
+
+std::vector<Target> ClubRepository::allTargets() const {
+    return guarded("cannot read targets", [&] {
+        std::vector<Target> out;
+        SQLite::Statement q(*m_db, std::string(kTargetSelect) + "ORDER BY t.id");
+        while (q.executeStep()) out.push_back(readTarget(q));
+        return out;
+    });
+}
+
+std::vector<std::int64_t> ClubRepository::addTargets(const std::vector<Target>& versions,
+                                                     const std::string& now) {
+    return guarded("cannot save targets", [&] {
+        std::vector<std::int64_t> ids;
+        SQLite::Transaction tx(*m_db);
+        SQLite::Statement ins(*m_db,
+                              "INSERT INTO target(season_id, metric_id, band, lane, direction, "
+                              "value, watch_margin, min_sample, author, rationale, "
+                              "effective_from, recorded_at, retired) "
+                              "VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)");
+        for (const Target& t : versions) {
+            const std::int64_t season = findOrMakeSeason(*m_db, t.key.squad, t.key.season);
+            ins.reset();
+            ins.bind(1, season);
+            ins.bind(2, t.key.metric);
+            ins.bind(3, t.key.band);
+            ins.bind(4, t.key.lane);
+            ins.bind(5, std::string(toString(t.direction)));
+            ins.bind(6, t.value);
+            ins.bind(7, t.watchMargin);
+            ins.bind(8, static_cast<std::int64_t>(t.minSample));
+            ins.bind(9, t.author);
+            ins.bind(10, t.rationale);
+            ins.bind(11, t.effectiveFrom);
+            ins.bind(12, t.recordedAt.empty() ? now : t.recordedAt);
+            ins.bind(13, t.retired ? 1 : 0);
+            ins.exec();
+            ids.push_back(m_db->getLastInsertRowid());
+        }
+        tx.commit();
+        return ids;
+    });
+}
+
+SeasonTallies ClubRepository::seasonTallies(const std::string& squad,
+                                            const std::string& season) const {
+    const ZoneGrid grid = tallyGrid();
+    const auto specs = metrics();
+    return guarded("cannot read season tallies", [&] {
+        SeasonTallies out;
+        std::map<std::int64_t, std::size_t> position;
+        SQLite::Statement q(*m_db, "SELECT m.id, m.code, m.date FROM match m JOIN season se ON "
+                                   "se.id = m.season_id JOIN squad sq ON sq.id = se.squad_id "
+                                   "WHERE sq.name = ? AND se.name = ? ORDER BY m.date, m.code");
+        q.bind(1, squad);
+        q.bind(2, season);
+        while (q.executeStep()) {
+            position[q.getColumn(0).getInt64()] = out.matchIds.size();
+            out.matchIds.push_back(q.getColumn(1).getString());
+            out.dates.push_back(q.getColumn(2).getString());
+        }
+        for (const auto& spec : specs)
+            out.byMetric[spec.id].assign(out.matchIds.size(),
+                                         MatchTally(static_cast<std::size_t>(grid.zoneCount())));
+        SQLite::Statement t(*m_db, "SELECT t.match_id, t.metric_id, t.band, t.lane, t.num, t.den "
+                                   "FROM tally t JOIN match m ON m.id = t.match_id JOIN season se "
+                                   "ON se.id = m.season_id JOIN squad sq ON sq.id = se.squad_id "
+                                   "WHERE sq.name = ? AND se.name = ?");
+        t.bind(1, squad);
+        t.bind(2, season);
+        while (t.executeStep()) {
+            auto metric = out.byMetric.find(t.getColumn(1).getString());
+            const Zone z{t.getColumn(2).getInt(), t.getColumn(3).getInt()};
+            if (metric == out.byMetric.end() || z.band < 1 || z.band > grid.bands() ||
+                z.lane < 1 || z.lane > grid.lanes())
+                continue;
+            auto& zone = metric->second[position[t.getColumn(0).getInt64()]]
+                                       [static_cast<std::size_t>(grid.indexOf(z))];
+            zone.num = static_cast<long>(t.getColumn(4).getInt64());
+            zone.den = static_cast<long>(t.getColumn(5).getInt64());
+        }
+        return out;
+    });
+}
+
+FlagSettings ClubRepository::flagSettings() const {
+    return guarded("cannot read settings", [&] {
+        FlagSettings f;
+        SQLite::Statement q(*m_db, "SELECT key, value FROM setting WHERE key LIKE 'flags.%'");
+        while (q.executeStep()) {
+            const std::string key = q.getColumn(0).getString();
+            const std::string value = q.getColumn(1).getString();
+            try {
+                if (key == "flags.level") f.level = std::stod(value);
+                else if (key == "flags.off_threshold") f.offThreshold = std::stod(value);
+                else if (key == "flags.watch_threshold") f.watchThreshold = std::stod(value);
+                else if (key == "flags.fdr") f.fdr = value == "on";
+                else if (key == "flags.fdr_q") f.fdrQ = std::stod(value);
+                else if (key == "flags.interval")
+                    f.rateInterval = value == "jeffreys" ? IntervalMethod::Jeffreys
+                                                         : IntervalMethod::Wilson;
+                else if (key == "flags.window") {
+                    if (auto w = Window::parse(value)) f.window = *w;
+                }
+            } catch (const std::exception&) {
+                // A damaged value keeps its default; `settings` shows what is in force.
+            }
+        }
+        return f;
+    });
+}
+
+void ClubRepository::saveFlagSettings(const FlagSettings& f) {
+    guarded("cannot save settings", [&] {
+        SQLite::Transaction tx(*m_db);
+        SQLite::Statement q(*m_db, "INSERT INTO setting(key, value) VALUES (?, ?) "
+                                   "ON CONFLICT(key) DO UPDATE SET value = excluded.value");
+        auto put = [&](const char* key, const std::string& value) {
+            q.reset();
+            q.bind(1, key);
+            q.bind(2, value);
+            q.exec();
+        };
+        auto num = [](double v) {
+            char buf[32];
+            std::snprintf(buf, sizeof buf, "%.10g", v);
+            return std::string(buf);
+        };
+        put("flags.level", num(f.level));
+        put("flags.off_threshold", num(f.offThreshold));
+        put("flags.watch_threshold", num(f.watchThreshold));
+        put("flags.fdr", f.fdr ? "on" : "off");
+        put("flags.fdr_q", num(f.fdrQ));
+        put("flags.interval", f.rateInterval == IntervalMethod::Jeffreys ? "jeffreys" : "wilson");
+        put("flags.window", f.window.name());
         tx.commit();
         return 0;
     });

@@ -4,6 +4,8 @@
 
 #include "metricengine.h"
 #include "metricspec.h"
+#include "status.h"
+#include "targets.h"
 #include "types.h"
 #include "zones.h"
 
@@ -54,7 +56,7 @@ struct TallyRow {
 /// Owns the SQLite connection; returns domain structs. Throws StorageError on faults.
 class ClubRepository {
 public:
-    static constexpr int kSchemaVersion = 2;
+    static constexpr int kSchemaVersion = 3;
 
     /// Opens (creating when missing) and migrates the club file. ":memory:" works for tests.
     explicit ClubRepository(const std::string& file);
@@ -97,6 +99,30 @@ public:
     MatchTally matchTally(const std::string& matchId, const std::string& metricId) const;
     /// Recomputes stored tallies from stored events (all metrics, or one).
     void recomputeTallies(const std::optional<std::string>& metricId = std::nullopt);
+
+    // Seasons and targets --------------------------------------------------------------
+    /// (squad, season) of a stored match.
+    std::optional<std::pair<std::string, std::string>> seasonOfMatch(const std::string& matchId) const;
+    /// Seasons of a squad, oldest first.
+    std::vector<std::string> seasons(const std::string& squad) const;
+    /// Makes the squad and season when missing (season names like "2026-27").
+    void ensureSeason(const std::string& squad, const std::string& season);
+    /// Every stored target version of a season (all metrics and zones), oldest first.
+    std::vector<Target> targets(const std::string& squad, const std::string& season) const;
+    /// Every stored target version in the club file.
+    std::vector<Target> allTargets() const;
+    /// Records new target versions in one transaction; never changes an existing version.
+    /// `recordedAt` is filled with `now` when empty. Returns their version ids.
+    std::vector<std::int64_t> addTargets(const std::vector<Target>& versions,
+                                         const std::string& now);
+
+    /// The season of a match up to its last stored match: match ids and dates in date order,
+    /// and dense tallies per metric; `focal` is set to the match's index.
+    SeasonTallies seasonTallies(const std::string& squad, const std::string& season) const;
+
+    /// Flag settings stored in the club file (defaults where unset).
+    FlagSettings flagSettings() const;
+    void saveFlagSettings(const FlagSettings& settings);
 
     /// Online backup of the whole club file to `target`.
     void backupTo(const std::string& target) const;

@@ -184,15 +184,30 @@ WindowSum windowSum(const std::vector<ZoneTally>& series, std::size_t focal, con
         for (std::size_t t = 0; t <= focal; ++t) meanDen += static_cast<double>(series[t].den);
         meanDen /= static_cast<double>(focal + 1);
         double weight = w.lambda;
+        double sumWeightedDen = 0, sumSquaredWeightDen = 0;
         for (std::size_t t = focal + 1; t-- > 0;) {
+            const double d = static_cast<double>(series[t].den);
             s.num += weight * static_cast<double>(series[t].num);
-            s.den += weight * static_cast<double>(series[t].den);
+            s.den += weight * d;
+            sumWeightedDen += weight * d;
+            sumSquaredWeightDen += weight * weight * d;
             weight *= 1 - w.lambda;
         }
         // `weight` is now λ(1 − λ)^(focal+1); the seed's weight is (1 − λ)^(focal+1).
         const double seedWeight = weight / w.lambda;
         s.num += seedWeight * seed * meanDen;
         s.den += seedWeight * meanDen;
+        sumWeightedDen += seedWeight * meanDen;
+        sumSquaredWeightDen += seedWeight * seedWeight * meanDen;
+        // Weighted sums are not counts: Σw·x has variance Σw²·(count variance), so scale both
+        // by Σw·d / Σw²·d to get effective counts whose Poisson/binomial spread matches (the
+        // Kish effective sample size). For a per-match count this is (2 − λ)/λ matches in the
+        // long run — the EWMA's own variance factor λ/(2 − λ), NIST §6.3.2.4.
+        if (sumSquaredWeightDen > 0) {
+            const double scale = sumWeightedDen / sumSquaredWeightDen;
+            s.num *= scale;
+            s.den *= scale;
+        }
         s.matches = static_cast<int>(focal + 1);
         return s;
     }

@@ -40,7 +40,9 @@ struct WindowSum {
 /// at the target (`seed`, the value the EWMA starts from) whose denominator is the mean
 /// denominator of the matches so far, weight (1 − λ)^(focal + 1). For per-match counts
 /// (den 1 a match) this is exactly z_t = λ x_t + (1 − λ) z_{t−1} with z_0 = seed, the
-/// convention of the NIST/SEMATECH e-Handbook §6.3.2.4.
+/// convention of the NIST/SEMATECH e-Handbook §6.3.2.4. The EWMA's weighted sums are then
+/// scaled to effective counts (Kish), so intervals and posteriors reflect how much data the
+/// weights really carry; the value num/den is unchanged by the scaling.
 WindowSum windowSum(const std::vector<ZoneTally>& series, std::size_t focal, const Window& w,
                     double seed);
 

@@ -57,6 +57,26 @@ bool misses(const Target& t, double value) {
     return t.direction == Direction::AtLeast ? value < t.value : value > t.value;
 }
 
+std::vector<Target> newVersionsOnly(const std::vector<Target>& stored,
+                                    const std::vector<Target>& incoming) {
+    auto same = [](const Target& a, const Target& b) {
+        return a.key == b.key && a.direction == b.direction && a.value == b.value &&
+               a.watchMargin == b.watchMargin && a.minSample == b.minSample &&
+               a.author == b.author && a.rationale == b.rationale &&
+               a.effectiveFrom == b.effectiveFrom && a.retired == b.retired &&
+               (a.recordedAt.empty() || b.recordedAt.empty() || a.recordedAt == b.recordedAt);
+    };
+    std::vector<Target> out;
+    for (const auto& t : incoming) {
+        const bool known = std::any_of(stored.begin(), stored.end(),
+                                       [&](const Target& s) { return same(s, t); }) ||
+                           std::any_of(out.begin(), out.end(),
+                                       [&](const Target& s) { return same(s, t); });
+        if (!known) out.push_back(t);
+    }
+    return out;
+}
+
 namespace {
 
 bool isIsoDate(const std::string& s) {

@@ -58,6 +58,11 @@ std::optional<Target> inForce(const std::vector<Target>& versions, const std::st
 /// Whether `value` is on the wrong side of a target.
 bool misses(const Target& t, double value);
 
+/// The versions of `incoming` not already stored (same key, rule, author, dates and
+/// rationale): importing the same file twice adds nothing.
+std::vector<Target> newVersionsOnly(const std::vector<Target>& stored,
+                                    const std::vector<Target>& incoming);
+
 /// Targets file (docs/targets.md): {"format": "pitchloop-targets", "version": 1,
 /// "targets": [...]}. Metric ids are checked against `metrics`; zones against the grid size.
 struct TargetFileResult {

@@ -1,5 +1,8 @@
 #include "commands.h"
 
+#include "common.h"
+#include "verbs.h"
+
 #include "format.h"
 #include "ingest.h"
 #include "metricspec.h"
@@ -19,31 +22,6 @@ using namespace pitchloop::model;
 namespace fs = std::filesystem;
 
 namespace {
-
-/// The club file when --db is not given: $PITCHLOOP_DB, else the user's data folder.
-std::string defaultClubFile() {
-    if (const char* env = std::getenv("PITCHLOOP_DB"); env && *env) return env;
-    fs::path base;
-    if (const char* xdg = std::getenv("XDG_DATA_HOME"); xdg && *xdg) base = xdg;
-    else if (const char* home = std::getenv("HOME"); home && *home)
-        base = fs::path(home) / ".local" / "share";
-    else
-        base = fs::current_path();
-    return (base / "pitchloop" / "club.sqlite").string();
-}
-
-struct Globals {
-    std::string db;
-};
-
-std::unique_ptr<ClubRepository> openClub(const Globals& g) {
-    const fs::path path(g.db);
-    if (path.has_parent_path()) {
-        std::error_code ec;
-        fs::create_directories(path.parent_path(), ec);
-    }
-    return std::make_unique<ClubRepository>(g.db);
-}
 
 int cmdIngest(const Globals& g, const std::vector<std::string>& files, const IngestOptions& opts,
               std::ostream& err) {
@@ -144,42 +122,6 @@ int cmdTallies(const Globals& g, const std::string& format, const std::string& m
     return kExitOk;
 }
 
-int cmdDebrief(const Globals& g, const std::string& match, const std::vector<std::string>& only,
-               const std::string& gridText, std::ostream& out, std::ostream& err) {
-    auto repo = openClub(g);
-    const auto summary = repo->matchSummary(match);
-    if (!summary) {
-        err << "error: no match '" << match << "' in " << g.db
-            << " (see: pitchloop matches)\n";
-        return kExitBadInput;
-    }
-    const auto chosen = chooseGrid(*repo, gridText, err);
-    if (!chosen) return kExitBadInput;
-    const ZoneGrid grid = *chosen;
-    out << summary->id << "  " << summary->date << "  " << repo->clubName() << " v "
-        << summary->opponent << " (" << summary->venue << ")  " << scoreLine(*summary) << "\n"
-        << "pitch " << summary->pitch.lengthM << " × " << summary->pitch.widthM << " m, "
-        << summary->eventCount << " events, grid " << grid.name() << "; values are this match's "
-        << "tallies (numerator/denominator)\n\n";
-    std::vector<MetricSpec> specs;
-    if (only.empty()) {
-        specs = builtinMetrics();
-    } else {
-        for (const auto& id : only) {
-            auto spec = repo->metric(id);
-            if (!spec) {
-                err << "error: no metric '" << id << "' (see: pitchloop metrics list)\n";
-                return kExitBadInput;
-            }
-            specs.push_back(*spec);
-        }
-    }
-    const auto loaded = repo->loadMatch(match);
-    const MatchFacts facts(*loaded);
-    for (const auto& spec : specs) printZoneTable(out, spec, grid, computeTally(facts, spec, grid));
-    return kExitOk;
-}
-
 int cmdMetricsList(const Globals& g, std::ostream& out) {
     auto repo = openClub(g);
     for (const auto& m : repo->metrics()) {
@@ -277,13 +219,8 @@ int run(int argc, char** argv, std::ostream& out, std::ostream& err) {
     tallies->add_option("--grid", talliesGrid,
                         "Another grid, computed from stored events: equal:6x5, markings:6");
 
-    auto* debrief = app.add_subcommand("debrief", "Per-zone values of one match, as tables");
-    std::string debriefMatch;
-    std::vector<std::string> debriefMetrics;
-    debrief->add_option("match", debriefMatch, "Match id (see: pitchloop matches)")->required();
-    debrief->add_option("--metric", debriefMetrics, "Only these metrics (default: built-in)");
-    std::string debriefGrid;
-    debrief->add_option("--grid", debriefGrid, "Zone grid: equal:6x5 (default), markings:6");
+    TargetVerbs targetVerbs(app);
+    StatusVerbs statusVerbs(app);
 
     auto* metrics = app.add_subcommand("metrics", "List, show and add metric definitions");
     metrics->require_subcommand(1);
@@ -331,7 +268,8 @@ int run(int argc, char** argv, std::ostream& out, std::ostream& err) {
         }
         if (*matches) return cmdMatches(g, matchesFormat, out);
         if (*tallies) return cmdTallies(g, talliesFormat, talliesMatch, talliesMetric, talliesGrid, out, err);
-        if (*debrief) return cmdDebrief(g, debriefMatch, debriefMetrics, debriefGrid, out, err);
+        if (targetVerbs.chosen()) return targetVerbs.run(g, out, err);
+        if (statusVerbs.chosen()) return statusVerbs.run(g, out, err);
         if (*metricsList) return cmdMetricsList(g, out);
         if (*metricsShow) return cmdMetricsShow(g, showId, out, err);
         if (*metricsAdd) return cmdMetricsAdd(g, addFile, addReplace, err);

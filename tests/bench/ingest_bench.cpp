@@ -90,6 +90,22 @@ int main(int argc, char** argv) {
                     (*biggest)["events"].size(), bytes / 1024.0, runs, median(times),
                     *std::min_element(times.begin(), times.end()),
                     *std::max_element(times.begin(), times.end()));
+        // The parts: reading the file alone, and deriving facts plus all tallies alone.
+        const std::string text = withId(*biggest, "PARTS");
+        std::vector<double> parse, tally;
+        const auto specs = builtinMetrics();
+        for (int i = 0; i < runs; ++i) {
+            auto start = Clock::now();
+            const ReadResult read = parseMatch(text, "bench.json");
+            parse.push_back(ms(Clock::now() - start));
+            start = Clock::now();
+            const MatchFacts facts(*read.match);
+            for (const auto& spec : specs) (void)computeTally(facts, spec, ZoneGrid{});
+            tally.push_back(ms(Clock::now() - start));
+        }
+        std::printf("  of which: reading and validating the JSON %.2f ms, deriving and tallying "
+                    "7 metrics %.2f ms (medians)\n",
+                    median(parse), median(tally));
     }
     {
         // A league season: 20 teams play 380 matches; we clone our files round-robin. Texts

@@ -149,7 +149,7 @@ TEST_CASE("memory and file club files open at the current schema with built-in m
     const std::string file = GENERATE(as<std::string>{}, ":memory:", "file");
     ClubRepository repo(file == "file" ? club.file : file);
     CHECK(repo.schemaVersion() == ClubRepository::kSchemaVersion);
-    CHECK(repo.schemaVersion() == 2);
+    CHECK(repo.schemaVersion() == ClubRepository::kSchemaVersion);
     CHECK(repo.clubName().empty());
     CHECK(repo.matches().empty());
     CHECK(repo.tallyGrid() == ZoneGrid{});
@@ -300,7 +300,7 @@ INSERT INTO tally(match_id, metric_id, band, lane, num, den) VALUES (1, 'kb_cros
     }
 
     ClubRepository repo(club.file);
-    CHECK(repo.schemaVersion() == 2);
+    CHECK(repo.schemaVersion() == ClubRepository::kSchemaVersion);
     CHECK(repo.clubName() == "Kestrel Bay");
     // The setting table came with version 2, with the default grid.
     CHECK(repo.tallyGrid() == ZoneGrid::equal(6, 5));
@@ -349,7 +349,7 @@ INSERT INTO tally(match_id, metric_id, band, lane, num, den) VALUES (1, 'kb_cros
     const std::string snapshot = dataSnapshot(club.file);
     {
         ClubRepository again(club.file);
-        CHECK(again.schemaVersion() == 2);
+        CHECK(again.schemaVersion() == ClubRepository::kSchemaVersion);
     }
     CHECK(dataSnapshot(club.file) == snapshot);
 }

@@ -1,0 +1,109 @@
+#include "common.h"
+
+#include <chrono>
+#include <cmath>
+#include <cstdio>
+#include <cstdlib>
+#include <ctime>
+#include <filesystem>
+
+namespace pitchloop::cli {
+
+namespace fs = std::filesystem;
+using namespace pitchloop::model;
+
+std::string defaultClubFile() {
+    if (const char* env = std::getenv("PITCHLOOP_DB"); env && *env) return env;
+    fs::path base;
+    if (const char* xdg = std::getenv("XDG_DATA_HOME"); xdg && *xdg) base = xdg;
+    else if (const char* home = std::getenv("HOME"); home && *home)
+        base = fs::path(home) / ".local" / "share";
+    else
+        base = fs::current_path();
+    return (base / "pitchloop" / "club.sqlite").string();
+}
+
+std::unique_ptr<ClubRepository> openClub(const Globals& g) {
+    const fs::path path(g.db);
+    if (path.has_parent_path()) {
+        std::error_code ec;
+        fs::create_directories(path.parent_path(), ec);
+    }
+    return std::make_unique<ClubRepository>(g.db);
+}
+
+namespace {
+std::string formatUtc(const char* pattern) {
+    const std::time_t tt = std::chrono::system_clock::to_time_t(std::chrono::system_clock::now());
+    std::tm tm{};
+    gmtime_r(&tt, &tm);
+    char buf[40];
+    std::strftime(buf, sizeof buf, pattern, &tm);
+    return buf;
+}
+} // namespace
+
+std::string today() {
+    if (const char* env = std::getenv("PITCHLOOP_TODAY"); env && isIsoDate(env)) return env;
+    return formatUtc("%Y-%m-%d");
+}
+
+std::string nowUtc() {
+    if (const char* env = std::getenv("PITCHLOOP_TODAY"); env && isIsoDate(env))
+        return std::string(env) + "T12:00:00Z";
+    return formatUtc("%Y-%m-%dT%H:%M:%SZ");
+}
+
+std::optional<double> parseNumber(const std::string& text) {
+    if (text.empty()) return std::nullopt;
+    std::string s = text;
+    bool percent = false;
+    if (s.back() == '%') {
+        percent = true;
+        s.pop_back();
+    }
+    try {
+        std::size_t used = 0;
+        const double v = std::stod(s, &used);
+        if (used != s.size() || !std::isfinite(v)) return std::nullopt;
+        return percent ? v / 100 : v;
+    } catch (const std::exception&) {
+        return std::nullopt;
+    }
+}
+
+std::optional<Zone> parseZone(const std::string& text) {
+    const auto comma = text.find(',');
+    if (comma == std::string::npos) return std::nullopt;
+    try {
+        std::size_t a = 0, b = 0;
+        const int band = std::stoi(text.substr(0, comma), &a);
+        const int lane = std::stoi(text.substr(comma + 1), &b);
+        if (a != comma || b != text.size() - comma - 1 || band < 1 || lane < 1) return std::nullopt;
+        return Zone{band, lane};
+    } catch (const std::exception&) {
+        return std::nullopt;
+    }
+}
+
+std::string zoneName(int band, int lane) {
+    if (band == 0 && lane == 0) return "whole pitch";
+    return "band " + std::to_string(band) + " lane " + std::to_string(lane);
+}
+
+std::string formatValue(MetricKind kind, double value) {
+    if (std::isnan(value)) return "-";
+    char buf[32];
+    if (kind == MetricKind::Rate) std::snprintf(buf, sizeof buf, "%.1f%%", 100 * value);
+    else std::snprintf(buf, sizeof buf, "%.2f", value);
+    return buf;
+}
+
+bool isIsoDate(const std::string& s) {
+    if (s.size() != 10 || s[4] != '-' || s[7] != '-') return false;
+    for (std::size_t i : {0u, 1u, 2u, 3u, 5u, 6u, 8u, 9u})
+        if (s[i] < '0' || s[i] > '9') return false;
+    return true;
+}
+
+} // namespace pitchloop::cli

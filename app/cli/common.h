@@ -1,0 +1,43 @@
+#pragma once
+// What every verb of the command line shares: the club file, "today", number parsing.
+
+#include "repository.h"
+
+#include <memory>
+#include <optional>
+#include <ostream>
+#include <string>
+
+namespace pitchloop::cli {
+
+struct Globals {
+    std::string db;
+};
+
+/// The club file when --db is not given: $PITCHLOOP_DB, else the user's data folder.
+std::string defaultClubFile();
+
+/// Opens (creating folders and file when missing) the club file.
+std::unique_ptr<model::ClubRepository> openClub(const Globals& g);
+
+/// Today's date (ISO). $PITCHLOOP_TODAY overrides the clock, so scripts and tests can replay
+/// a season; the model never reads the clock itself.
+std::string today();
+/// Now as an ISO 8601 UTC date-time (for "recorded at").
+std::string nowUtc();
+
+/// Reads "0.45", "45%" (→ 0.45) or "2.5"; nullopt when it is not a number.
+std::optional<double> parseNumber(const std::string& text);
+
+/// Reads "B,L" into a zone; nullopt when malformed.
+std::optional<model::Zone> parseZone(const std::string& text);
+
+/// "band 2 lane 5" or "whole pitch".
+std::string zoneName(int band, int lane);
+
+/// A value in its metric's unit for people: "45.2%" for rates, "2.40" otherwise.
+std::string formatValue(model::MetricKind kind, double value);
+
+bool isIsoDate(const std::string& s);
+
+} // namespace pitchloop::cli

@@ -1,0 +1,388 @@
+#include "commands.h"
+#include "debrief.h"
+#include "format.h"
+#include "verbs.h"
+
+#include <nlohmann/json.hpp>
+
+#include <algorithm>
+#include <cmath>
+#include <cstdio>
+#include <map>
+#include <set>
+
+namespace pitchloop::cli {
+
+using namespace pitchloop::model;
+
+namespace {
+
+/// The season of a match, loaded, with the match's position in it.
+struct MatchContext {
+    std::string squad;
+    std::string season;
+    SeasonTallies tallies;
+    std::size_t focal = 0;
+    MatchSummary summary;
+};
+
+std::optional<MatchContext> loadContext(ClubRepository& repo, const std::string& match,
+                                        const std::string& dbName, std::ostream& err) {
+    auto summary = repo.matchSummary(match);
+    auto where = repo.seasonOfMatch(match);
+    if (!summary || !where) {
+        err << "error: no match '" << match << "' in " << dbName << " (see: pitchloop matches)\n";
+        return std::nullopt;
+    }
+    MatchContext c;
+    c.squad = where->first;
+    c.season = where->second;
+    c.tallies = repo.seasonTallies(c.squad, c.season);
+    c.summary = *summary;
+    for (std::size_t i = 0; i < c.tallies.matchIds.size(); ++i)
+        if (c.tallies.matchIds[i] == match) c.focal = i;
+    return c;
+}
+
+std::string num(double v) {
+    if (std::isnan(v)) return "";
+    char buf[32];
+    std::snprintf(buf, sizeof buf, "%.6g", v);
+    return buf;
+}
+
+std::string targetText(MetricKind kind, const std::optional<Target>& t) {
+    if (!t) return "-";
+    return std::string(t->direction == Direction::AtLeast ? "≥ " : "≤ ") + formatValue(kind, t->value);
+}
+
+std::string pad(const std::string& s, std::size_t width) {
+    std::size_t shown = 0;
+    for (unsigned char c : s) shown += (c & 0xC0) != 0x80;
+    return shown >= width ? s + " " : s + std::string(width - shown, ' ');
+}
+
+nlohmann::json statusJson(const ZoneStatus& s) {
+    nlohmann::json j{{"metric", s.metric},        {"band", s.band},
+                     {"lane", s.lane},            {"window", s.window.name()},
+                     {"num", s.sum.num},          {"den", s.sum.den},
+                     {"matches", s.sum.matches},  {"level", s.level},
+                     {"state", toString(s.state)}};
+    auto put = [&](const char* key, double v) {
+        j[key] = std::isnan(v) || std::isinf(v) ? nlohmann::json() : nlohmann::json(v);
+    };
+    put("value", s.value);
+    put("low", s.interval.low);
+    put("high", s.interval.high);
+    put("p_miss", s.pMiss);
+    put("p_value", s.pValue);
+    if (s.target) {
+        j["target"] = {{"direction", toString(s.target->direction)},
+                       {"value", s.target->value},
+                       {"watch_margin", s.target->watchMargin},
+                       {"min_sample", s.target->minSample},
+                       {"author", s.target->author},
+                       {"effective_from", s.target->effectiveFrom}};
+        j["chance_off"] = s.chanceOff;
+        j["bh_rejected"] = s.bhRejected;
+    } else {
+        j["target"] = nullptr;
+    }
+    return j;
+}
+
+} // namespace
+
+StatusVerbs::StatusVerbs(CLI::App& app) {
+    m_status = app.add_subcommand("status", "Every zone × metric at a match: values over windows, "
+                                            "intervals, targets and flags");
+    m_status->add_option("match", m_match, "Match id")->required();
+    m_status->add_option("--window", m_windows,
+                         "Windows: match, lastN (e.g. last5), season, ewma or ewma0.2 "
+                         "(default: match, the judged window, season, ewma)");
+    m_status->add_option("--metric", m_metrics, "Only these metrics");
+    m_status->add_flag("--all-zones", m_allZones,
+                       "Table: every zone (default: zones with targets and the whole pitch)");
+    m_status->add_option("--format", m_format, "table, csv or json")
+        ->check(CLI::IsMember({"table", "csv", "json"}));
+
+    m_debrief = app.add_subcommand("debrief", "A match judged against the season's targets: what "
+                                              "slipped, what is new, what recovered");
+    m_debrief->add_option("match", m_match, "Match id (see: pitchloop matches)")->required();
+    m_debrief->add_flag("--tables", m_tables, "Also print each metric's per-zone table");
+    m_debrief->add_option("--metric", m_metrics, "Tables: only these metrics");
+    m_debrief->add_option("--grid", m_grid, "Tables: zone grid, e.g. markings:6");
+
+    m_settings = app.add_subcommand("settings", "Flag settings of the club file");
+    m_settings->require_subcommand(1);
+    m_settingsShow = m_settings->add_subcommand("show", "Print the settings in force");
+    m_settingsSet = m_settings->add_subcommand("set", "Change one setting");
+    m_settingsSet->add_option("key", m_key,
+                              "level | off_threshold | watch_threshold | window | interval | "
+                              "fdr | fdr_q")
+        ->required();
+    m_settingsSet->add_option("value", m_value)->required();
+}
+
+bool StatusVerbs::chosen() const {
+    return m_status->parsed() || m_debrief->parsed() || m_settings->parsed();
+}
+
+int StatusVerbs::run(const Globals& g, std::ostream& out, std::ostream& err) {
+    auto repo = openClub(g);
+    if (m_status->parsed()) return runStatus(*repo, out, err);
+    if (m_debrief->parsed()) return runDebrief(*repo, out, err);
+    return runSettings(*repo, out, err);
+}
+
+int StatusVerbs::runStatus(ClubRepository& repo, std::ostream& out, std::ostream& err) {
+    auto c = loadContext(repo, m_match, "the club file", err);
+    if (!c) return kExitBadInput;
+    const FlagSettings settings = repo.flagSettings();
+    std::vector<Window> windows;
+    if (m_windows.empty()) {
+        windows = {Window{Window::Kind::Match, 1, 0.3}, settings.window,
+                   Window{Window::Kind::Season, 0, 0.3},
+                   Window{Window::Kind::Ewma, 0, 0.3}};
+        std::vector<Window> unique;
+        for (const auto& w : windows)
+            if (std::find(unique.begin(), unique.end(), w) == unique.end()) unique.push_back(w);
+        windows = unique;
+    }
+    for (const auto& text : m_windows) {
+        auto w = Window::parse(text);
+        if (!w) {
+            err << "error: --window " << text << ": expected match, lastN, season or ewma[λ]\n";
+            return kExitBadInput;
+        }
+        windows.push_back(*w);
+    }
+    auto metrics = repo.metrics();
+    if (!m_metrics.empty()) {
+        for (const auto& id : m_metrics)
+            if (std::none_of(metrics.begin(), metrics.end(), [&](auto& m) { return m.id == id; })) {
+                err << "error: --metric: no metric '" << id << "'\n";
+                return kExitBadInput;
+            }
+        std::erase_if(metrics, [&](const MetricSpec& m) {
+            return std::find(m_metrics.begin(), m_metrics.end(), m.id) == m_metrics.end();
+        });
+    }
+    const ZoneGrid grid = repo.tallyGrid();
+    const auto targets = repo.targets(c->squad, c->season);
+    const auto statuses =
+        computeStatus(c->tallies, c->focal, metrics, targets, grid, windows, settings);
+
+    if (m_format == "csv") {
+        out << "match_id,metric,band,lane,window,num,den,value,low,high,level,target,state,p_miss,"
+               "direction,matches,p_value,chance_off,bh_rejected\n";
+        for (const auto& s : statuses)
+            out << csvField(m_match) << ',' << s.metric << ',' << s.band << ',' << s.lane << ','
+                << s.window.name() << ',' << num(s.sum.num) << ',' << num(s.sum.den) << ','
+                << num(s.value) << ',' << num(s.interval.low) << ',' << num(s.interval.high) << ','
+                << num(s.level) << ',' << (s.target ? num(s.target->value) : "") << ','
+                << toString(s.state) << ',' << num(s.pMiss) << ','
+                << (s.target ? std::string(toString(s.target->direction)) : "") << ','
+                << s.sum.matches << ',' << num(s.pValue) << ','
+                << (s.target ? num(s.chanceOff) : "") << ','
+                << (s.target ? (s.bhRejected ? "1" : "0") : "") << "\n";
+        return kExitOk;
+    }
+    if (m_format == "json") {
+        nlohmann::json j;
+        j["match_id"] = m_match;
+        j["date"] = c->summary.date;
+        j["squad"] = c->squad;
+        j["season"] = c->season;
+        j["grid"] = grid.name();
+        j["settings"] = {{"level", settings.level},
+                         {"off_threshold", settings.offThreshold},
+                         {"watch_threshold", settings.watchThreshold},
+                         {"window", settings.window.name()},
+                         {"fdr", settings.fdr},
+                         {"fdr_q", settings.fdrQ}};
+        nlohmann::json chance = nlohmann::json::object();
+        for (const auto& w : windows) {
+            std::vector<ZoneStatus> inWindow;
+            for (const auto& s : statuses)
+                if (s.window == w) inWindow.push_back(s);
+            chance[w.name()] = expectedChanceFlags(inWindow);
+        }
+        j["chance_off_flags"] = chance;
+        j["zones"] = nlohmann::json::array();
+        for (const auto& s : statuses) j["zones"].push_back(statusJson(s));
+        out << j.dump(2) << "\n";
+        return kExitOk;
+    }
+    std::map<std::string, MetricKind> kinds;
+    for (const auto& m : metrics) kinds[m.id] = m.kind();
+    out << m_match << "  " << c->summary.date << "  v " << c->summary.opponent << "  — "
+        << c->squad << " " << c->season << ", match " << c->focal + 1 << " of "
+        << c->tallies.matchIds.size() << " stored; intervals at " << num(100 * settings.level)
+        << " %\n\n";
+    out << pad("metric", 25) << pad("zone", 18) << pad("window", 8) << pad("num/den", 13)
+        << pad("value", 8) << pad("interval", 16) << pad("target", 10) << pad("state", 16)
+        << "P(miss)\n";
+    std::set<std::pair<std::string, std::pair<int, int>>> withTarget;
+    for (const auto& s : statuses)
+        if (s.target) withTarget.insert({s.metric, {s.band, s.lane}});
+    for (const auto& s : statuses) {
+        const bool shown = m_allZones || (s.band == 0 && s.lane == 0) ||
+                           withTarget.count({s.metric, {s.band, s.lane}});
+        if (!shown) continue;
+        const MetricKind kind = kinds[s.metric];
+        char nd[32];
+        std::snprintf(nd, sizeof nd, s.window.kind == Window::Kind::Ewma ? "%.1f/%.1f" : "%.0f/%.0f",
+                      s.sum.num, s.sum.den);
+        out << pad(s.metric, 25) << pad(zoneName(s.band, s.lane), 18) << pad(s.window.name(), 8)
+            << pad(nd, 13) << pad(formatValue(kind, s.value), 8)
+            << pad(formatValue(kind, s.interval.low) + "–" + formatValue(kind, s.interval.high), 16)
+            << pad(targetText(kind, s.target), 10) << pad(std::string(toString(s.state)), 16)
+            << (std::isnan(s.pMiss) ? "" : num(std::round(s.pMiss * 1000) / 1000)) << "\n";
+    }
+    return kExitOk;
+}
+
+int StatusVerbs::runDebrief(ClubRepository& repo, std::ostream& out, std::ostream& err) {
+    auto c = loadContext(repo, m_match, "the club file", err);
+    if (!c) return kExitBadInput;
+    const FlagSettings settings = repo.flagSettings();
+    const auto metrics = repo.metrics();
+    const ZoneGrid grid = repo.tallyGrid();
+    const auto targets = repo.targets(c->squad, c->season);
+    std::map<std::string, MetricSpec> byId;
+    for (const auto& m : metrics) byId[m.id] = m;
+
+    const MatchSummary& m = c->summary;
+    out << m.id << "  " << m.date << "  " << repo.clubName() << " v " << m.opponent << " ("
+        << m.venue << ")  " << scoreLine(m) << "\n";
+    if (targets.empty()) {
+        out << "No targets set for " << c->squad << " " << c->season
+            << " yet (pitchloop targets set --help); per-zone values of the match follow.\n\n";
+    } else {
+        const Debrief d = buildDebrief(c->tallies, c->focal, metrics, targets, grid, settings);
+        const std::size_t first =
+            settings.window.kind == Window::Kind::LastN && c->focal + 1 > static_cast<std::size_t>(settings.window.n)
+                ? c->focal + 1 - static_cast<std::size_t>(settings.window.n)
+                : 0;
+        out << "Judged over " << settings.window.name() << " (" << c->tallies.matchIds[first]
+            << " … " << m.id << "), off target when P(miss) ≥ " << num(settings.offThreshold)
+            << (settings.fdr ? ", with Benjamini–Hochberg at q = " + num(settings.fdrQ) : "")
+            << "; intervals at " << num(100 * settings.level) << " %.\n\n";
+        auto line = [&](const DebriefItem& item, bool markNew) {
+            const ZoneStatus& s = item.now;
+            const MetricKind kind = byId[s.metric].kind();
+            std::string unit = kind == MetricKind::Count ? " a match" : "";
+            char buf[400];
+            std::snprintf(buf, sizeof buf,
+                          "  %-24s %-18s %8s%s [%s–%s] n=%s  target %s  P(miss) %.3f%s%s\n",
+                          s.metric.c_str(), zoneName(s.band, s.lane).c_str(),
+                          formatValue(kind, s.value).c_str(), unit.c_str(),
+                          formatValue(kind, s.interval.low).c_str(),
+                          formatValue(kind, s.interval.high).c_str(),
+                          kind == MetricKind::Count ? (std::to_string(s.sum.matches) + " matches").c_str()
+                                                    : num(s.sum.den).c_str(),
+                          targetText(kind, s.target).c_str(), s.pMiss,
+                          markNew && item.before != FlagState::OffTarget && !d.previousMatchId.empty()
+                              ? "  NEW"
+                              : "",
+                          item.before ? ("  (was " + std::string(toString(*item.before)) + ")").c_str()
+                                      : "");
+            out << buf;
+        };
+        auto section = [&](const std::string& title, const std::vector<DebriefItem>& items,
+                           bool markNew) {
+            out << title << " (" << items.size() << ")\n";
+            if (items.empty()) out << "  none\n";
+            for (const auto& item : items) line(item, markNew);
+            out << "\n";
+        };
+        section("Off target over " + settings.window.name(), d.slippedInWindow, true);
+        section("Off target in this match alone", d.slippedInMatch, false);
+        if (!d.previousMatchId.empty())
+            section("Recovered since " + d.previousMatchId, d.recovered, false);
+        section("Watch", d.watched, false);
+        char chance[200];
+        std::snprintf(chance, sizeof chance,
+                      "%d zones with targets judged over %s (%d more have too little data). If "
+                      "every true value sat exactly on its target, chance alone would flag about "
+                      "%.1f of them off target.\n",
+                      d.judged, settings.window.name().c_str(), d.tooLittleData, d.chanceFlags);
+        out << chance;
+        out << "Slips are evidence for the staff to weigh, not verdicts; see docs/statistics.md.\n";
+    }
+    if (!targets.empty() && !m_tables) return kExitOk;
+
+    ZoneGrid tableGrid = grid;
+    if (!m_grid.empty()) {
+        auto parsed = ZoneGrid::parse(m_grid);
+        if (!parsed) {
+            err << "error: --grid " << m_grid << ": expected equal:BANDSxLANES (e.g. equal:6x5) or "
+                << "markings:BANDS (lanes cut at the penalty- and goal-area lines)\n";
+            return kExitBadInput;
+        }
+        tableGrid = *parsed;
+    }
+    std::vector<MetricSpec> specs;
+    if (m_metrics.empty()) {
+        specs = builtinMetrics();
+    } else {
+        for (const auto& id : m_metrics) {
+            if (!byId.count(id)) {
+                err << "error: no metric '" << id << "' (see: pitchloop metrics list)\n";
+                return kExitBadInput;
+            }
+            specs.push_back(byId[id]);
+        }
+    }
+    out << "\nPer-zone tallies of this match (grid " << tableGrid.name() << ", pitch "
+        << m.pitch.lengthM << " × " << m.pitch.widthM << " m, " << m.eventCount << " events)\n\n";
+    const auto loaded = repo.loadMatch(m.id);
+    const MatchFacts facts(*loaded);
+    for (const auto& spec : specs) printZoneTable(out, spec, tableGrid, computeTally(facts, spec, tableGrid));
+    return kExitOk;
+}
+
+int StatusVerbs::runSettings(ClubRepository& repo, std::ostream& out, std::ostream& err) {
+    FlagSettings f = repo.flagSettings();
+    if (m_settingsSet->parsed()) {
+        auto number = parseNumber(m_value);
+        auto bad = [&](const std::string& why) {
+            err << "error: settings set " << m_key << " " << m_value << ": " << why << "\n";
+            return kExitBadInput;
+        };
+        if (m_key == "level" || m_key == "off_threshold" || m_key == "watch_threshold" ||
+            m_key == "fdr_q") {
+            if (!number || *number <= 0 || *number >= 1) return bad("expected a number between 0 and 1");
+            (m_key == "level" ? f.level
+             : m_key == "off_threshold" ? f.offThreshold
+             : m_key == "watch_threshold" ? f.watchThreshold
+                                          : f.fdrQ) = *number;
+        } else if (m_key == "window") {
+            auto w = Window::parse(m_value);
+            if (!w) return bad("expected match, lastN (e.g. last5), season or ewma[λ]");
+            f.window = *w;
+        } else if (m_key == "interval") {
+            if (m_value != "wilson" && m_value != "jeffreys") return bad("expected wilson or jeffreys");
+            f.rateInterval = m_value == "jeffreys" ? IntervalMethod::Jeffreys : IntervalMethod::Wilson;
+        } else if (m_key == "fdr") {
+            if (m_value != "on" && m_value != "off") return bad("expected on or off");
+            f.fdr = m_value == "on";
+        } else {
+            return bad("unknown setting (level, off_threshold, watch_threshold, window, interval, "
+                       "fdr, fdr_q)");
+        }
+        repo.saveFlagSettings(f);
+    }
+    out << "level            " << num(f.level) << "   (confidence of intervals)\n"
+        << "interval         " << (f.rateInterval == IntervalMethod::Jeffreys ? "jeffreys" : "wilson")
+        << "   (for rates; counts use the exact Poisson interval)\n"
+        << "window           " << f.window.name() << "   (the window a debrief judges)\n"
+        << "off_threshold    " << num(f.offThreshold) << "   (P(miss) for off target)\n"
+        << "watch_threshold  " << num(f.watchThreshold) << "   (P(wrong side of the watch line))\n"
+        << "fdr              " << (f.fdr ? "on" : "off") << "   (Benjamini–Hochberg on off-target flags)\n"
+        << "fdr_q            " << num(f.fdrQ) << "\n";
+    return kExitOk;
+}
+
+} // namespace pitchloop::cli

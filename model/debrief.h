@@ -1,0 +1,39 @@
+#pragma once
+// A match judged against the season's targets: what slipped in the match and over the window,
+// what is new since the previous match and what recovered.
+
+#include "status.h"
+
+#include <optional>
+#include <string>
+#include <vector>
+
+namespace pitchloop::model {
+
+struct DebriefItem {
+    ZoneStatus now;
+    std::optional<FlagState> before; ///< state in the same window after the previous match
+    double gap = 0; ///< how far the value is on the wrong side of the target (metric units)
+};
+
+struct Debrief {
+    std::string matchId;
+    std::string previousMatchId; ///< empty for a season's first match
+    Window window;               ///< the judged window
+    std::vector<DebriefItem> slippedInMatch;  ///< off target on this match alone
+    std::vector<DebriefItem> slippedInWindow; ///< off target over the window
+    std::vector<DebriefItem> newSlips;        ///< off target over the window, not before
+    std::vector<DebriefItem> recovered;       ///< off target or watched before, on target now
+    std::vector<DebriefItem> watched;         ///< watch over the window
+    int judged = 0;         ///< zones with a target and enough data in the window
+    int tooLittleData = 0;  ///< zones with a target but too little data in the window
+    double chanceFlags = 0; ///< off-target flags chance alone would give among the judged
+};
+
+/// Judges match `focal` of a season. Lists are ordered by how sure (pMiss, highest first),
+/// then by how large (gap).
+Debrief buildDebrief(const SeasonTallies& season, std::size_t focal,
+                     const std::vector<MetricSpec>& metrics, const std::vector<Target>& targets,
+                     const ZoneGrid& grid, const FlagSettings& settings);
+
+} // namespace pitchloop::model
