@@ -53,7 +53,7 @@ struct FlagSettings {
     double level = 0.90;                 ///< confidence of the intervals shown
     IntervalMethod rateInterval = IntervalMethod::Wilson;
     Window window{Window::Kind::LastN, 5, 0.3}; ///< the window a debrief judges
-    double offThreshold = 0.95;          ///< P(wrong side of target) for "off target"
+    double offThreshold = 0.999;         ///< P(wrong side of target) for "off target"
     double watchThreshold = 0.50;        ///< P(wrong side of the watch line) for "watch"
     bool fdr = false;                    ///< also require Benjamini–Hochberg rejection
     double fdrQ = 0.10;                  ///< false discovery rate for that

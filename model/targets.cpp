@@ -24,7 +24,7 @@ double defaultWatchMargin(MetricKind kind) {
 
 long defaultMinSample(MetricKind kind) {
     switch (kind) {
-    case MetricKind::Rate: return 20;     // items in the window
+    case MetricKind::Rate: return 30;     // items in the window
     case MetricKind::Count: return 3;     // matches in the window
     case MetricKind::Exposure: return 30; // exposure events in the window
     }

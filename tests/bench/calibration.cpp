@@ -447,6 +447,72 @@ int main(int argc, char** argv) {
     table("Prototype: off target only after two consecutive off-target matches",
           defaultMinSample(MetricKind::Rate), 2, allWindows, kThresholds);
 
+    // Summaries at the default minimum sample.
+    {
+        const long ms = defaultMinSample(MetricKind::Rate);
+        const std::size_t mi = idx(kMinSamples, ms);
+        struct Rule {
+            std::size_t window;
+            int persist;
+        };
+        std::vector<Rule> rules;
+        for (std::size_t w = 0; w < nWin; ++w) rules.push_back({w, 1});
+        for (std::size_t w = 0; w < windows.size(); ++w) rules.push_back({w, 2});
+        auto ruleName = [&](const Rule& r) {
+            return windowNames[r.window] + (r.persist > 1 ? " x2" : "");
+        };
+        if (mi < kMinSamples.size()) {
+            std::printf("Summary A: false-flag seasons %%, lowest-highest over the sample sizes "
+                        "(minSample %ld; x2 = two consecutive off-target matches, prototype)\n",
+                        ms);
+            std::printf("%-16s", "rule");
+            for (double th : kThresholds) std::printf(" | %-11g", th);
+            std::printf("\n");
+            for (const Rule& r : rules) {
+                std::printf("%-16s", ruleName(r).c_str());
+                for (std::size_t ti = 0; ti < kThresholds.size(); ++ti) {
+                    double lo = 1, hi = 0;
+                    for (std::size_t si = 0; si < kSizes.size(); ++si) {
+                        const double f = results[si][r.window][ti][mi][static_cast<std::size_t>(r.persist - 1)].falseFlag;
+                        lo = std::min(lo, f);
+                        hi = std::max(hi, f);
+                    }
+                    std::printf(" | %-11s", (pct(lo) + "-" + pct(hi)).c_str());
+                }
+                std::printf("\n");
+            }
+            std::printf("\nSummary B: each rule at its lowest threshold with false flags <= 5 %% at "
+                        "every sample size; cells: detected within 6 %% / median delay\n");
+            std::printf("%-16s %-6s %-7s", "rule", "thresh", "max FF");
+            for (double sz : kSizes) std::printf(" | %-11s", (std::to_string(static_cast<int>(sz)) + " a match").c_str());
+            std::printf("\n");
+            for (const Rule& r : rules) {
+                for (std::size_t ti = 0; ti < kThresholds.size(); ++ti) {
+                    double hi = 0;
+                    for (std::size_t si = 0; si < kSizes.size(); ++si)
+                        hi = std::max(hi, results[si][r.window][ti][mi][static_cast<std::size_t>(r.persist - 1)].falseFlag);
+                    if (hi > 0.05) continue;
+                    std::printf("%-16s %-6g %-7s", ruleName(r).c_str(), kThresholds[ti], pct(hi).c_str());
+                    for (std::size_t si = 0; si < kSizes.size(); ++si) {
+                        const Outcome& o = results[si][r.window][ti][mi][static_cast<std::size_t>(r.persist - 1)];
+                        std::printf(" | %-11s", (pct(o.detected) + " / " + delayText(o.medianDelay)).c_str());
+                    }
+                    std::printf("\n");
+                    break;
+                }
+            }
+            std::printf("\n");
+        }
+        std::printf("90 %% Wilson interval at an observed 45 %% (what a window of N chances can "
+                    "tell):\n");
+        for (double n : {10.0, 20.0, 30.0, 40.0, 60.0, 100.0}) {
+            const auto iv = stats::wilson(0.45 * n, n, 0.90);
+            std::printf("  N %-4g %.3f-%.3f (half-width %.3f)\n", n, iv.low, iv.high,
+                        (iv.high - iv.low) / 2);
+        }
+        std::printf("\n");
+    }
+
     // The defaults straight from computeStatus().
     std::printf("Defaults as judged by computeStatus() (window %s, offThreshold %g, watchThreshold "
                 "%g, minSample %ld)\n",
