@@ -816,10 +816,11 @@ SeasonTallies ClubRepository::seasonTallies(const std::string& squad,
         for (const auto& spec : specs)
             out.byMetric[spec.id].assign(out.matchIds.size(),
                                          MatchTally(static_cast<std::size_t>(grid.zoneCount())));
+        // One lookup per match along the tally key (match_id, ...), not a scan of every tally.
         SQLite::Statement t(*m_db, "SELECT t.match_id, t.metric_id, t.band, t.lane, t.num, t.den "
-                                   "FROM tally t JOIN match m ON m.id = t.match_id JOIN season se "
-                                   "ON se.id = m.season_id JOIN squad sq ON sq.id = se.squad_id "
-                                   "WHERE sq.name = ? AND se.name = ?");
+                                   "FROM tally t WHERE t.match_id IN (SELECT m.id FROM match m "
+                                   "JOIN season se ON se.id = m.season_id JOIN squad sq ON "
+                                   "sq.id = se.squad_id WHERE sq.name = ? AND se.name = ?)");
         t.bind(1, squad);
         t.bind(2, season);
         while (t.executeStep()) {

@@ -7,8 +7,8 @@
 // minimum sample set to 0, and the sweep over thresholds and minimum samples reads its pMiss
 // and window sample (a zone is off target exactly when sample >= minSample and
 // pMiss >= offThreshold, which the program checks against computeStatus() run with the
-// default settings). Two rule changes that are not in the model are prototyped here, marked
-// "prototype": a persistence rule and an EWMA judged on its effective sample size.
+// default settings). One rule change that is not in the model is prototyped here, marked
+// "prototype": a persistence rule (off target only after two consecutive off-target matches).
 //
 // Randomness: std::mt19937_64 seeded per (sample size, scenario, season) from kSeed, with the
 // standard library's poisson and binomial distributions (libstdc++ on Debian 12; another
@@ -92,37 +92,6 @@ struct Track {
     std::array<double, kMatches> den{};
     std::array<double, kMatches> pMiss{};
 };
-
-/// Prototype: the EWMA judged on its effective sample size. Same weights and seed as
-/// windowSum(); the Kish effective size (Σ w n)² / Σ w² n replaces the weighted sum of items.
-Track ewmaEffective(const std::vector<MatchTally>& t, double lambda) {
-    Track tr;
-    for (int focal = 0; focal < kMatches; ++focal) {
-        double meanDen = 0;
-        for (int k = 0; k <= focal; ++k) meanDen += static_cast<double>(t[k][0].den);
-        meanDen /= focal + 1;
-        double wx = 0, wn = 0, w2n = 0, w = lambda;
-        for (int k = focal; k >= 0; --k) {
-            wx += w * static_cast<double>(t[k][0].num);
-            wn += w * static_cast<double>(t[k][0].den);
-            w2n += w * w * static_cast<double>(t[k][0].den);
-            w *= 1 - lambda;
-        }
-        const double seedW = w / lambda;
-        wx += seedW * kTarget * meanDen;
-        wn += seedW * meanDen;
-        w2n += seedW * seedW * meanDen;
-        if (wn <= 0) {
-            tr.den[focal] = 0;
-            tr.pMiss[focal] = std::numeric_limits<double>::quiet_NaN();
-            continue;
-        }
-        const double ess = wn * wn / w2n;
-        tr.den[focal] = ess;
-        tr.pMiss[focal] = stats::probRateBelow(wx / wn * ess, ess, kTarget);
-    }
-    return tr;
-}
 
 struct Outcome {
     double falseFlag = 0;  // null: share of seasons ever off target
@@ -239,8 +208,6 @@ int main(int argc, char** argv) {
 
     std::vector<std::string> windowNames;
     for (const auto& w : windows) windowNames.push_back(w.name());
-    windowNames.push_back("ewma0.2-ess");
-    windowNames.push_back("ewma0.3-ess");
     const std::size_t nWin = windowNames.size();
 
     std::printf("Pitchloop calibration: seed %llu, %d seasons per scenario and sample size, %d "
@@ -312,7 +279,6 @@ int main(int argc, char** argv) {
                                   static_cast<std::uint32_t>(season)};
                 std::mt19937_64 rng(seq);
                 const SeasonTallies st = simulate(spec->id, kSizes[si], scenario, rng);
-                const auto& series = st.byMetric.at(spec->id);
                 auto& counts = defaultCounts[si][static_cast<std::size_t>(scenario)];
                 for (auto& c : counts) ++c.seasons;
                 std::vector<char> everOff(kWatchThresholds.size(), 0), detected(kWatchThresholds.size(), 0);
@@ -360,13 +326,6 @@ int main(int argc, char** argv) {
                 for (std::size_t wi = 0; wi < kWatchThresholds.size(); ++wi) {
                     if (everOff[wi]) ++counts[wi].everOff;
                     if (detected[wi]) ++counts[wi].detected;
-                }
-                if (scenario != Comfort) {
-                    const auto& t = series;
-                    tracks[static_cast<std::size_t>(scenario)][nWin - 2][static_cast<std::size_t>(season)] =
-                        ewmaEffective(t, 0.2);
-                    tracks[static_cast<std::size_t>(scenario)][nWin - 1][static_cast<std::size_t>(season)] =
-                        ewmaEffective(t, 0.3);
                 }
             }
         }
@@ -441,9 +400,7 @@ int main(int argc, char** argv) {
         }
     }
 
-    // Prototypes.
-    table("Prototype: EWMA judged on its effective sample size", defaultMinSample(MetricKind::Rate), 1,
-          {nWin - 2, nWin - 1}, kThresholds);
+    // Prototype.
     table("Prototype: off target only after two consecutive off-target matches",
           defaultMinSample(MetricKind::Rate), 2, allWindows, kThresholds);
 
@@ -457,7 +414,7 @@ int main(int argc, char** argv) {
         };
         std::vector<Rule> rules;
         for (std::size_t w = 0; w < nWin; ++w) rules.push_back({w, 1});
-        for (std::size_t w = 0; w < windows.size(); ++w) rules.push_back({w, 2});
+        for (std::size_t w = 0; w < nWin; ++w) rules.push_back({w, 2});
         auto ruleName = [&](const Rule& r) {
             return windowNames[r.window] + (r.persist > 1 ? " x2" : "");
         };
