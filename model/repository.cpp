@@ -117,6 +117,51 @@ CREATE TABLE target(
   retired INTEGER NOT NULL DEFAULT 0);
 CREATE INDEX target_by_key ON target(season_id, metric_id, band, lane, effective_from);
 )sql",
+    // 4: the coaches' drill book (versioned, reversible deletes), focuses and their reviews.
+    R"sql(
+CREATE TABLE drill(
+  id INTEGER PRIMARY KEY,
+  created_at TEXT NOT NULL,
+  deleted_at TEXT);
+CREATE TABLE drill_version(
+  id INTEGER PRIMARY KEY,
+  drill_id INTEGER NOT NULL REFERENCES drill(id) ON DELETE CASCADE,
+  body TEXT NOT NULL,
+  title TEXT NOT NULL,
+  search_text TEXT NOT NULL,
+  edited_by TEXT NOT NULL,
+  edited_at TEXT NOT NULL);
+CREATE INDEX drill_version_by_drill ON drill_version(drill_id, id);
+CREATE TABLE focus(
+  id INTEGER PRIMARY KEY,
+  season_id INTEGER NOT NULL REFERENCES season(id),
+  metric_id TEXT NOT NULL,
+  zones TEXT NOT NULL,
+  opened_after_match TEXT NOT NULL,
+  start_date TEXT NOT NULL,
+  review_after_matches INTEGER,
+  review_on TEXT,
+  evidence TEXT NOT NULL,
+  note TEXT NOT NULL DEFAULT '',
+  opened_by TEXT NOT NULL,
+  opened_at TEXT NOT NULL,
+  closed_at TEXT,
+  verdict TEXT,
+  verdict_note TEXT);
+CREATE TABLE focus_drill(
+  focus_id INTEGER NOT NULL REFERENCES focus(id) ON DELETE CASCADE,
+  drill_id INTEGER NOT NULL REFERENCES drill(id),
+  linked_at TEXT NOT NULL,
+  PRIMARY KEY(focus_id, drill_id)) WITHOUT ROWID;
+CREATE TABLE review(
+  id INTEGER PRIMARY KEY,
+  focus_id INTEGER NOT NULL REFERENCES focus(id) ON DELETE CASCADE,
+  computed_at TEXT NOT NULL,
+  numbers TEXT NOT NULL,
+  verdict TEXT,
+  note TEXT NOT NULL DEFAULT '',
+  recorded_by TEXT NOT NULL DEFAULT '');
+)sql",
 };
 
 static_assert(std::size(kMigrations) == ClubRepository::kSchemaVersion);

@@ -56,7 +56,7 @@ struct TallyRow {
 /// Owns the SQLite connection; returns domain structs. Throws StorageError on faults.
 class ClubRepository {
 public:
-    static constexpr int kSchemaVersion = 3;
+    static constexpr int kSchemaVersion = 4;
 
     /// Opens (creating when missing) and migrates the club file. ":memory:" works for tests.
     explicit ClubRepository(const std::string& file);
@@ -126,6 +126,10 @@ public:
 
     /// Online backup of the whole club file to `target`.
     void backupTo(const std::string& target) const;
+
+    /// The connection, for the stores that share this club file (drill book, focuses). They
+    /// run their own statements and transactions on it; nothing else should.
+    SQLite::Database& database() { return *m_db; }
 
     /// Applies migrations 1..`version` to a database (tests use it to build old files).
     static void migrate(SQLite::Database& db, int version);
