@@ -179,6 +179,10 @@ int main(int argc, char** argv) {
             return 2;
         }
     }
+    if (seasons < 1) {
+        std::cerr << "--seasons needs a whole number of at least 1\n";
+        return 2;
+    }
     const auto start = std::chrono::steady_clock::now();
 
     const MetricSpec* spec = nullptr;
