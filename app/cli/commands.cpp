@@ -1,6 +1,7 @@
 #include "commands.h"
 
 #include "common.h"
+#include "focus_verbs.h"
 #include "verbs.h"
 
 #include "format.h"
@@ -221,6 +222,7 @@ int run(int argc, char** argv, std::ostream& out, std::ostream& err) {
 
     TargetVerbs targetVerbs(app);
     StatusVerbs statusVerbs(app);
+    FocusVerbs focusVerbs(app);
 
     auto* metrics = app.add_subcommand("metrics", "List, show and add metric definitions");
     metrics->require_subcommand(1);
@@ -270,6 +272,7 @@ int run(int argc, char** argv, std::ostream& out, std::ostream& err) {
         if (*tallies) return cmdTallies(g, talliesFormat, talliesMatch, talliesMetric, talliesGrid, out, err);
         if (targetVerbs.chosen()) return targetVerbs.run(g, out, err);
         if (statusVerbs.chosen()) return statusVerbs.run(g, out, err);
+        if (focusVerbs.chosen()) return focusVerbs.run(g, out, err);
         if (*metricsList) return cmdMetricsList(g, out);
         if (*metricsShow) return cmdMetricsShow(g, showId, out, err);
         if (*metricsAdd) return cmdMetricsAdd(g, addFile, addReplace, err);

@@ -1,5 +1,7 @@
 #include "common.h"
 
+#include <nlohmann/json.hpp>
+
 #include <chrono>
 #include <cmath>
 #include <cstdio>
@@ -105,5 +107,35 @@ bool isIsoDate(const std::string& s) {
         if (s[i] < '0' || s[i] > '9') return false;
     return true;
 }
+
+nlohmann::json statusJson(const ZoneStatus& s) {
+    nlohmann::json j{{"metric", s.metric},        {"band", s.band},
+                     {"lane", s.lane},            {"window", s.window.name()},
+                     {"num", s.sum.num},          {"den", s.sum.den},
+                     {"matches", s.sum.matches},  {"level", s.level},
+                     {"state", toString(s.state)}};
+    auto put = [&](const char* key, double v) {
+        j[key] = std::isnan(v) || std::isinf(v) ? nlohmann::json() : nlohmann::json(v);
+    };
+    put("value", s.value);
+    put("low", s.interval.low);
+    put("high", s.interval.high);
+    put("p_miss", s.pMiss);
+    put("p_value", s.pValue);
+    if (s.target) {
+        j["target"] = {{"direction", toString(s.target->direction)},
+                       {"value", s.target->value},
+                       {"watch_margin", s.target->watchMargin},
+                       {"min_sample", s.target->minSample},
+                       {"author", s.target->author},
+                       {"effective_from", s.target->effectiveFrom}};
+        j["chance_off"] = s.chanceOff;
+        j["bh_rejected"] = s.bhRejected;
+    } else {
+        j["target"] = nullptr;
+    }
+    return j;
+}
+
 
 } // namespace pitchloop::cli

@@ -3,6 +3,8 @@
 
 #include "repository.h"
 
+#include <nlohmann/json_fwd.hpp>
+
 #include <memory>
 #include <optional>
 #include <ostream>
@@ -39,5 +41,8 @@ std::string zoneName(int band, int lane);
 std::string formatValue(model::MetricKind kind, double value);
 
 bool isIsoDate(const std::string& s);
+
+/// One zone's status as JSON (status --format json, a focus's frozen evidence).
+nlohmann::json statusJson(const model::ZoneStatus& s);
 
 } // namespace pitchloop::cli

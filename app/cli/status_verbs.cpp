@@ -62,35 +62,6 @@ std::string pad(const std::string& s, std::size_t width) {
     return shown >= width ? s + " " : s + std::string(width - shown, ' ');
 }
 
-nlohmann::json statusJson(const ZoneStatus& s) {
-    nlohmann::json j{{"metric", s.metric},        {"band", s.band},
-                     {"lane", s.lane},            {"window", s.window.name()},
-                     {"num", s.sum.num},          {"den", s.sum.den},
-                     {"matches", s.sum.matches},  {"level", s.level},
-                     {"state", toString(s.state)}};
-    auto put = [&](const char* key, double v) {
-        j[key] = std::isnan(v) || std::isinf(v) ? nlohmann::json() : nlohmann::json(v);
-    };
-    put("value", s.value);
-    put("low", s.interval.low);
-    put("high", s.interval.high);
-    put("p_miss", s.pMiss);
-    put("p_value", s.pValue);
-    if (s.target) {
-        j["target"] = {{"direction", toString(s.target->direction)},
-                       {"value", s.target->value},
-                       {"watch_margin", s.target->watchMargin},
-                       {"min_sample", s.target->minSample},
-                       {"author", s.target->author},
-                       {"effective_from", s.target->effectiveFrom}};
-        j["chance_off"] = s.chanceOff;
-        j["bh_rejected"] = s.bhRejected;
-    } else {
-        j["target"] = nullptr;
-    }
-    return j;
-}
-
 } // namespace
 
 StatusVerbs::StatusVerbs(CLI::App& app) {
