@@ -1,0 +1,153 @@
+// `focus` and `review` on the command line, on the first matches of the demo season (the
+// planted story: opponents' pre-shot passes through our band 2, lane 5 in matches 1–8).
+
+#include "commands.h"
+#include "testutil.h"
+
+#include <catch2/catch.hpp>
+#include <nlohmann/json.hpp>
+
+#include <cstdlib>
+#include <filesystem>
+#include <sstream>
+#include <string>
+#include <vector>
+
+namespace fs = std::filesystem;
+using pitchloop::testutil::dataSnapshot;
+using pitchloop::testutil::freshTempDir;
+using pitchloop::testutil::sourcePath;
+
+namespace {
+
+struct Run {
+    int code = -1;
+    std::string out;
+    std::string err;
+};
+
+Run cli(std::vector<std::string> args) {
+    args.insert(args.begin(), "pitchloop");
+    std::vector<char*> argv;
+    for (auto& a : args) argv.push_back(a.data());
+    argv.push_back(nullptr);
+    std::ostringstream out, err;
+    Run r;
+    r.code = pitchloop::cli::run(static_cast<int>(args.size()), argv.data(), out, err);
+    r.out = out.str();
+    r.err = err.str();
+    return r;
+}
+
+bool has(const std::string& text, const std::string& part) {
+    return text.find(part) != std::string::npos;
+}
+
+/// A club file with the first `n` demo matches and the demo targets.
+struct DemoClub {
+    fs::path dir = freshTempDir("focus");
+    std::string db = (dir / "club.sqlite").string();
+    explicit DemoClub(int n) {
+        ::setenv("PITCHLOOP_TODAY", "2026-12-01", 1);
+        std::vector<std::string> args{"--db", db, "ingest"};
+        for (int i = 1; i <= n; ++i) {
+            char name[32];
+            std::snprintf(name, sizeof name, "KB-2026-%02d.json", i);
+            args.push_back(sourcePath(std::string("sample-club/matches/") + name).string());
+        }
+        REQUIRE(cli(args).code == 0);
+        REQUIRE(cli({"--db", db, "targets", "import",
+                     sourcePath("sample-club/targets.json").string()})
+                    .code == 0);
+    }
+    ~DemoClub() {
+        std::error_code ec;
+        fs::remove_all(dir, ec);
+    }
+};
+
+} // namespace
+
+TEST_CASE("a focus opened from the planted slip and reviewed after five matches", "[cli]") {
+    DemoClub club(13);
+    const auto open = cli({"--db", club.db, "focus", "open", "--match", "KB-2026-08", "--metric",
+                           "pre_shot_passes_against", "--zone", "2,5", "--by", "D. Arkwright",
+                           "--note", "rechts überladen — ⚽"});
+    REQUIRE(open.code == 0);
+    CHECK(open.out == "1\n");
+    // The zone was off target at that match, so no "opened anyway" note.
+    CHECK_FALSE(has(open.err, "opened anyway"));
+
+    const auto show = cli({"--db", club.db, "focus", "show", "1"});
+    REQUIRE(show.code == 0);
+    CHECK(has(show.out, "off_target"));       // the frozen evidence
+    CHECK(has(show.out, "rechts überladen — ⚽")); // the note, byte for byte
+
+    const auto list = cli({"--db", club.db, "focus", "list", "--format", "json"});
+    const auto focuses = nlohmann::json::parse(list.out);
+    REQUIRE(focuses.size() == 1);
+    // Matches 9–13 are on or after 2026-09-27: five, so the review point is reached.
+    CHECK(focuses[0]["matches_since_start"] == 5);
+    CHECK(focuses[0]["state"] == "due_for_review");
+
+    const auto review = cli({"--db", club.db, "review", "1", "--format", "json"});
+    REQUIRE(review.code == 0);
+    const auto r = nlohmann::json::parse(review.out);
+    CHECK(r["before"]["matches"].size() == 5);
+    CHECK(r["before"]["matches"][0]["match_id"] == "KB-2026-04");
+    CHECK(r["after"]["matches"][4]["match_id"] == "KB-2026-13");
+    CHECK(r["test"] == "exact conditional test for two Poisson rates");
+    // The story eases from match 9 on: fewer passes after, with a clear improvement.
+    CHECK(r["after"]["num"].get<long>() < r["before"]["num"].get<long>());
+    CHECK(r["prob_improved"].get<double>() > 0.99);
+    CHECK(r["chart"]["points"].size() == 10);
+    CHECK(r["training_minutes"].is_null());
+
+    // Recording the verdict stores these numbers; the review then shows them as stored.
+    const auto verdict = cli({"--db", club.db, "review", "1", "--verdict", "worked", "--by",
+                              "D. Arkwright", "--note", "left side holds"});
+    REQUIRE(verdict.code == 0);
+    const auto stored = cli({"--db", club.db, "review", "1", "--format", "json"});
+    CHECK(nlohmann::json::parse(stored.out) == r);
+    const auto again = cli({"--db", club.db, "review", "1", "--verdict", "partly", "--by", "X"});
+    CHECK(again.code == 2);
+    CHECK(has(again.err, "was closed"));
+}
+
+TEST_CASE("focus and review refuse bad input and change nothing", "[cli]") {
+    DemoClub club(10);
+    const std::string before = dataSnapshot(club.db);
+    auto refused = [&](std::vector<std::string> args, const std::string& message) {
+        args.insert(args.begin(), {"--db", club.db});
+        const auto r = cli(args);
+        CHECK(r.code == 2);
+        CHECK(has(r.err, message));
+    };
+    refused({"review", "9"}, "no focus 9");
+    refused({"focus", "show", "9"}, "no focus 9");
+    refused({"focus", "open", "--match", "KB-2026-99", "--metric", "losses", "--zone", "2,5",
+             "--by", "X"},
+            "no match 'KB-2026-99'");
+    refused({"focus", "open", "--match", "KB-2026-08", "--metric", "losses", "--zone", "9,9",
+             "--by", "X"},
+            "--zone 9,9");
+    refused({"focus", "open", "--match", "KB-2026-08", "--metric", "losses", "--zone", "2,5",
+             "--drill", "42", "--by", "X"},
+            "no drill 42");
+    refused({"focus", "open", "--match", "KB-2026-08", "--metric", "losses", "--zone", "2,5",
+             "--start", "2026-09-01", "--by", "X"},
+            "starts after the match");
+    CHECK(dataSnapshot(club.db) == before);
+
+    // With 10 matches stored only two follow the start (2026-09-27): the review says how many
+    // are missing, and nothing is recorded.
+    REQUIRE(cli({"--db", club.db, "focus", "open", "--match", "KB-2026-08", "--metric",
+                 "pre_shot_passes_against", "--zone", "2,5", "--by", "X"})
+                .code == 0);
+    const std::string opened = dataSnapshot(club.db);
+    const auto early = cli({"--db", club.db, "review", "1", "--verdict", "worked", "--by", "X"});
+    CHECK(early.code == 2);
+    CHECK(has(early.err, "2 have been played (3 missing)"));
+    CHECK(dataSnapshot(club.db) == opened);
+    refused({"review", "1", "--after", "2", "--before", "9"}, "(1 missing)");
+}
