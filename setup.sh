@@ -1,6 +1,6 @@
 #!/usr/bin/env bash
 # One script for a fresh Debian 12 machine: installs what is missing, builds, and then
-#   ./setup.sh run    prepares the demo club and shows its debrief
+#   ./setup.sh run    prepares the demo club, shows its debrief, and opens the desktop app on it
 #   ./setup.sh test   runs every test
 set -euo pipefail
 cd "$(dirname "$0")"
@@ -45,6 +45,7 @@ prepare_demo() {
   # edits made in it.
   "$build_dir"/app/cli/pitchloop --db sample-club/club.sqlite ingest sample-club/matches/*.json
   "$build_dir"/app/cli/pitchloop --db sample-club/club.sqlite targets import sample-club/targets.json
+  "$build_dir"/app/cli/pitchloop --db sample-club/club.sqlite drills import sample-club/drills.json
 }
 
 case "$mode" in
@@ -55,6 +56,15 @@ case "$mode" in
     "$build_dir"/app/cli/pitchloop --db sample-club/club.sqlite matches
     echo
     "$build_dir"/app/cli/pitchloop --db sample-club/club.sqlite debrief KB-2026-08
+    echo
+    # The desktop app opens only once its QML self-test passes on the demo club (offscreen).
+    "$build_dir"/app/desktop/pitchloop-app --self-test --db sample-club/club.sqlite
+    if [ -z "${DISPLAY:-}" ] && [ -z "${WAYLAND_DISPLAY:-}" ]; then
+      echo "setup: no display, so the app is not opened; on a desktop run:" >&2
+      echo "  $build_dir/app/desktop/pitchloop-app --db sample-club/club.sqlite" >&2
+      exit 0
+    fi
+    exec "$build_dir"/app/desktop/pitchloop-app --db sample-club/club.sqlite
     ;;
   test)
     install_missing

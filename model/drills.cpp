@@ -5,12 +5,11 @@
 #include <SQLiteCpp/Database.h>
 #include <SQLiteCpp/Statement.h>
 #include <SQLiteCpp/Transaction.h>
-#include <nlohmann/json.hpp>
-
 #include <algorithm>
 #include <cmath>
 #include <cstdio>
 #include <limits>
+#include <nlohmann/json.hpp>
 #include <set>
 
 namespace pitchloop::model {
@@ -29,23 +28,20 @@ bool Drill::sameContent(const Drill& o) const {
     return title == o.title && purpose == o.purpose && organisation == o.organisation &&
            coachingPoints == o.coachingPoints && durationMin == o.durationMin &&
            intensity == o.intensity && playersMin == o.playersMin && playersMax == o.playersMax &&
-           areaLengthM == o.areaLengthM && areaWidthM == o.areaWidthM &&
-           equipment == o.equipment && metrics == o.metrics && zones == o.zones &&
-           tags == o.tags && author == o.author;
+           areaLengthM == o.areaLengthM && areaWidthM == o.areaWidthM && equipment == o.equipment &&
+           metrics == o.metrics && zones == o.zones && tags == o.tags && author == o.author;
 }
 
 namespace {
 
 /// Whole metres as integers (40, not 40.0), anything else as it is.
-template <typename J>
-J metres(double v) {
+template <typename J> J metres(double v) {
     if (std::floor(v) == v && std::abs(v) < 1e9) return J(static_cast<std::int64_t>(v));
     return J(v);
 }
 
 /// The content of a drill in file order (ordered_json) or key order (json).
-template <typename J>
-J contentJson(const Drill& d) {
+template <typename J> J contentJson(const Drill& d) {
     J j = J::object();
     j["title"] = d.title;
     j["purpose"] = d.purpose;
@@ -66,7 +62,8 @@ J contentJson(const Drill& d) {
     j["equipment"] = d.equipment;
     j["metrics"] = d.metrics;
     J zones = J::array();
-    for (const Zone& z : d.zones) zones.push_back(J::array({z.band, z.lane}));
+    for (const Zone& z : d.zones)
+        zones.push_back(J::array({z.band, z.lane}));
     j["zones"] = zones;
     j["tags"] = d.tags;
     j["author"] = d.author;
@@ -131,11 +128,15 @@ std::string numberText(double v) {
     return buf;
 }
 
-std::string rangeText(int lo, int hi) { return std::to_string(lo) + "–" + std::to_string(hi); }
+std::string rangeText(int lo, int hi) {
+    return std::to_string(lo) + "–" + std::to_string(hi);
+}
 
 } // namespace
 
-void to_json(json& j, const Drill& d) { j = contentJson<json>(d); }
+void to_json(json& j, const Drill& d) {
+    j = contentJson<json>(d);
+}
 
 void from_json(const json& j, Drill& d) {
     d.title = j.at("title").get<std::string>();
@@ -156,20 +157,23 @@ void from_json(const json& j, Drill& d) {
     d.metrics = j.value("metrics", std::vector<std::string>());
     d.zones.clear();
     if (auto it = j.find("zones"); it != j.end())
-        for (const auto& z : *it) d.zones.push_back({z.at(0).get<int>(), z.at(1).get<int>()});
+        for (const auto& z : *it)
+            d.zones.push_back({z.at(0).get<int>(), z.at(1).get<int>()});
     d.tags = j.value("tags", std::vector<std::string>());
     d.author = j.at("author").get<std::string>();
 }
 
-Problems validateDrill(const Drill& d, const std::vector<MetricSpec>& metrics,
-                       const ZoneGrid& grid, const std::string& source) {
+Problems validateDrill(const Drill& d, const std::vector<MetricSpec>& metrics, const ZoneGrid& grid,
+                       const std::string& source) {
     Problems out;
     auto problem = [&](const std::string& field, const std::string& message) {
         out.push_back({source, "", field, message});
     };
     auto text = [&](const std::string& field, const std::string& v, bool required, bool lines) {
-        if (!validUtf8(v)) problem(field, "not valid UTF-8 text");
-        else if (required && isBlank(v)) problem(field, "required");
+        if (!validUtf8(v))
+            problem(field, "not valid UTF-8 text");
+        else if (required && isBlank(v))
+            problem(field, "required");
         else if (hasControl(v, lines))
             problem(field, lines ? "control characters other than line breaks and tabs"
                                  : "expected one line without control characters");
@@ -208,8 +212,9 @@ Problems validateDrill(const Drill& d, const std::vector<MetricSpec>& metrics,
         problem("players", "min " + std::to_string(d.playersMin) + " is more than max " +
                                std::to_string(d.playersMax));
     if (d.hasArea()) {
-        for (auto [field, v, hi] : {std::tuple{"area_m.length", d.areaLengthM, kDrillAreaLengthMaxM},
-                                    std::tuple{"area_m.width", d.areaWidthM, kDrillAreaWidthMaxM}})
+        for (auto [field, v, hi] :
+             {std::tuple{"area_m.length", d.areaLengthM, kDrillAreaLengthMaxM},
+              std::tuple{"area_m.width", d.areaWidthM, kDrillAreaWidthMaxM}})
             if (!std::isfinite(v) || v < 1 || v > hi)
                 problem(field, "expected 1–" + numberText(hi) + " m, found " + numberText(v));
     }
@@ -220,8 +225,10 @@ Problems validateDrill(const Drill& d, const std::vector<MetricSpec>& metrics,
         const std::string& id = d.metrics[i];
         const bool known = std::any_of(metrics.begin(), metrics.end(),
                                        [&](const MetricSpec& m) { return m.id == id; });
-        if (!known) problem(field, "unknown metric '" + id + "'");
-        else if (!seenMetrics.insert(id).second) problem(field, "'" + id + "' is listed twice");
+        if (!known)
+            problem(field, "unknown metric '" + id + "'");
+        else if (!seenMetrics.insert(id).second)
+            problem(field, "'" + id + "' is listed twice");
     }
     for (std::size_t i = 0; i < d.zones.size(); ++i) {
         const std::string field = "zones[" + std::to_string(i) + "]";
@@ -248,7 +255,8 @@ std::string asciiLower(std::string_view text) {
 
 std::string drillSearchText(const Drill& d) {
     std::string out = d.title + "\n" + d.purpose + "\n" + d.organisation;
-    for (const auto& p : d.coachingPoints) out += "\n" + p;
+    for (const auto& p : d.coachingPoints)
+        out += "\n" + p;
     for (const auto& t : d.tags) {
         out += "\n" + t;
         if (t.find('_') != std::string::npos) {
@@ -267,7 +275,7 @@ namespace {
 /// Reads one drill object onto a drill, reporting shape problems (wrong types, unknown or
 /// missing keys); the ranges are left to validateDrill.
 class DrillReader {
-public:
+  public:
     DrillReader(const std::string& source, std::string place, Problems& errors)
         : m_source(source), m_place(std::move(place)), m_errors(errors) {}
 
@@ -294,10 +302,12 @@ public:
                 for (auto k = it->begin(); k != it->end(); ++k)
                     if (k.key() != "min" && k.key() != "max")
                         error("players." + k.key(), "unknown key");
-                for (auto [key, out] : {std::pair{"min", &d.playersMin},
-                                        std::pair{"max", &d.playersMax}}) {
-                    if (!it->contains(key)) error(std::string("players.") + key, "missing");
-                    else whole(*it, key, *out, "players.");
+                for (auto [key, out] :
+                     {std::pair{"min", &d.playersMin}, std::pair{"max", &d.playersMax}}) {
+                    if (!it->contains(key))
+                        error(std::string("players.") + key, "missing");
+                    else
+                        whole(*it, key, *out, "players.");
                 }
             }
         }
@@ -308,10 +318,11 @@ public:
                 for (auto k = it->begin(); k != it->end(); ++k)
                     if (k.key() != "length" && k.key() != "width")
                         error("area_m." + k.key(), "unknown key");
-                for (auto [key, out] : {std::pair{"length", &d.areaLengthM},
-                                        std::pair{"width", &d.areaWidthM}}) {
+                for (auto [key, out] :
+                     {std::pair{"length", &d.areaLengthM}, std::pair{"width", &d.areaWidthM}}) {
                     auto f = it->find(key);
-                    if (f == it->end()) error(std::string("area_m.") + key, "missing");
+                    if (f == it->end())
+                        error(std::string("area_m.") + key, "missing");
                     else if (!f->is_number())
                         error(std::string("area_m.") + key, "expected metres, found " + shown(*f));
                     else
@@ -344,7 +355,7 @@ public:
     /// Fields (their first key) that already have a problem.
     const std::set<std::string>& failed() const { return m_failed; }
 
-private:
+  private:
     static std::string shown(const json& v) {
         std::string s = v.dump();
         if (s.size() > 40) s = s.substr(0, 37) + "...";
@@ -363,8 +374,10 @@ private:
     void text(const json& v, const char* key, std::string& out) {
         auto it = v.find(key);
         if (it == v.end()) return;
-        if (!it->is_string()) error(key, "expected text, found " + shown(*it));
-        else out = it->get<std::string>();
+        if (!it->is_string())
+            error(key, "expected text, found " + shown(*it));
+        else
+            out = it->get<std::string>();
     }
     void textList(const json& v, const char* key, std::vector<std::string>& out) {
         auto it = v.find(key);
@@ -385,8 +398,10 @@ private:
     void whole(const json& v, const char* key, int& out, const std::string& prefix = "") {
         auto it = v.find(key);
         if (it == v.end()) return;
-        if (!isWhole(*it)) error(prefix + key, "expected a whole number, found " + shown(*it));
-        else out = it->get<int>();
+        if (!isWhole(*it))
+            error(prefix + key, "expected a whole number, found " + shown(*it));
+        else
+            out = it->get<int>();
     }
 
     const std::string& m_source;
@@ -401,8 +416,8 @@ Drill readDrill(const json& v, const Drill& base, bool complete, const std::stri
                 const ZoneGrid& grid, Problems& errors) {
     Drill d = base;
     if (!v.is_object()) {
-        errors.push_back({source, place, "", "expected a drill object, found " +
-                                                 v.dump().substr(0, 40)});
+        errors.push_back(
+            {source, place, "", "expected a drill object, found " + v.dump().substr(0, 40)});
         return d;
     }
     DrillReader reader(source, place, errors);
@@ -431,8 +446,8 @@ bool isDrillsFile(const json& root) {
 bool checkHeader(const json& root, const std::string& source, Problems& errors) {
     if (!root.is_object() || root.value("format", json()) != "pitchloop-drills" ||
         root.value("version", json()) != 1) {
-        errors.push_back({source, "", "format",
-                          "expected \"format\": \"pitchloop-drills\" and \"version\": 1"});
+        errors.push_back(
+            {source, "", "format", "expected \"format\": \"pitchloop-drills\" and \"version\": 1"});
         return false;
     }
     for (auto it = root.begin(); it != root.end(); ++it)
@@ -455,8 +470,7 @@ DrillFileResult parseDrillFile(std::string_view jsonText, const std::string& sou
     const json& list = (*root)["drills"];
     for (std::size_t i = 0; i < list.size(); ++i)
         r.drills.push_back(readDrill(list[i], Drill{}, true, source,
-                                     "drills[" + std::to_string(i) + "]", metrics, grid,
-                                     r.errors));
+                                     "drills[" + std::to_string(i) + "]", metrics, grid, r.errors));
     if (!r.errors.empty()) r.drills.clear();
     return r;
 }
@@ -484,22 +498,69 @@ DrillObjectResult parseDrillObject(std::string_view jsonText, const std::string&
     return r;
 }
 
+namespace {
+
+/// Numbers, and lists or objects of nothing but numbers, fit on one line.
+bool numbersOnly(const ordered_json& v) {
+    if (v.is_number()) return true;
+    if (!v.is_structured()) return false;
+    return std::all_of(v.begin(), v.end(), [](const ordered_json& c) { return numbersOnly(c); });
+}
+
+/// A short list of short texts (tags, metrics, equipment) fits on one line.
+bool shortTexts(const ordered_json& v) {
+    if (!v.is_array()) return false;
+    std::size_t length = 0;
+    for (const auto& c : v) {
+        if (!c.is_string()) return false;
+        length += c.get_ref<const std::string&>().size() + 4;
+    }
+    return length <= 64;
+}
+
+/// Like dump(2), but zones ([[2, 5], [3, 5]]), players, area and short lists of texts stay on
+/// one line so the file reads as people write it.
+void writePretty(const ordered_json& v, int indent, std::string& out) {
+    const bool oneLine = numbersOnly(v) || shortTexts(v) || v.empty() || !v.is_structured();
+    if (!v.is_structured() || (oneLine && v.empty())) {
+        out += v.dump();
+        return;
+    }
+    const bool object = v.is_object();
+    const std::string inner(static_cast<std::size_t>(indent + 2), ' ');
+    out += object ? '{' : '[';
+    bool first = true;
+    for (auto it = v.begin(); it != v.end(); ++it) {
+        out += first ? "" : ",";
+        out += oneLine ? (first ? "" : " ") : "\n" + inner;
+        first = false;
+        if (object) out += ordered_json(it.key()).dump() + ": ";
+        writePretty(*it, indent + 2, out);
+    }
+    if (!oneLine) out += "\n" + std::string(static_cast<std::size_t>(indent), ' ');
+    out += object ? '}' : ']';
+}
+
+} // namespace
+
 std::string writeDrillFile(const std::vector<Drill>& drills) {
     ordered_json list = ordered_json::array();
-    for (const auto& d : drills) list.push_back(contentJson<ordered_json>(d));
+    for (const auto& d : drills)
+        list.push_back(contentJson<ordered_json>(d));
     ordered_json root = ordered_json::object();
     root["format"] = "pitchloop-drills";
     root["version"] = 1;
     root["drills"] = list;
-    return root.dump(2) + "\n";
+    std::string out;
+    writePretty(root, 0, out);
+    return out + "\n";
 }
 
 // The drill book ---------------------------------------------------------------------------
 
 namespace {
 
-template <typename F>
-auto guarded(const char* what, F&& f) -> decltype(f()) {
+template <typename F> auto guarded(const char* what, F&& f) -> decltype(f()) {
     try {
         return f();
     } catch (const SQLite::Exception& e) {
@@ -507,7 +568,9 @@ auto guarded(const char* what, F&& f) -> decltype(f()) {
     }
 }
 
-Problem noDrill(std::int64_t id) { return {"", "", "", "no drill " + std::to_string(id)}; }
+Problem noDrill(std::int64_t id) {
+    return {"", "", "", "no drill " + std::to_string(id)};
+}
 
 /// deleted_at of a drill: nullopt when there is no such drill, "" when it is live.
 std::optional<std::string> deletedAt(SQLite::Database& db, std::int64_t id) {
@@ -521,8 +584,8 @@ Drill readBody(const std::string& body, std::int64_t id) {
     try {
         return json::parse(body).get<Drill>();
     } catch (const json::exception& e) {
-        throw StorageError("drill " + std::to_string(id) + ": a stored version is damaged: " +
-                           e.what());
+        throw StorageError("drill " + std::to_string(id) +
+                           ": a stored version is damaged: " + e.what());
     }
 }
 
@@ -530,12 +593,15 @@ Drill readBody(const std::string& body, std::int64_t id) {
 
 DrillBook::DrillBook(ClubRepository& repo) : m_repo(repo) {}
 
-std::vector<MetricSpec> DrillBook::metrics() const { return m_repo.metrics(); }
+std::vector<MetricSpec> DrillBook::metrics() const {
+    return m_repo.metrics();
+}
 
-ZoneGrid DrillBook::grid() const { return m_repo.tallyGrid(); }
+ZoneGrid DrillBook::grid() const {
+    return m_repo.tallyGrid();
+}
 
-std::int64_t DrillBook::insert(const Drill& drill, const std::string& who,
-                               const std::string& now) {
+std::int64_t DrillBook::insert(const Drill& drill, const std::string& who, const std::string& now) {
     SQLite::Database& db = m_repo.database();
     SQLite::Statement ins(db, "INSERT INTO drill(created_at) VALUES (?)");
     ins.bind(1, now);
@@ -578,21 +644,21 @@ DrillChange DrillBook::edit(std::int64_t id, const Drill& drill, const std::stri
                             const std::string& now, const std::string& source) {
     DrillChange r;
     r.id = id;
-    const auto current = get(id);
-    if (!current) {
-        r.problems.push_back(noDrill(id));
-        return r;
-    }
-    if (current->deleted) {
-        r.problems.push_back({"", "", "", "drill " + std::to_string(id) +
-                                              " is deleted; restore it first"});
-        return r;
-    }
     r.problems = validateDrill(drill, metrics(), grid(), source);
     if (isBlank(who)) r.problems.push_back({source, "", "edited_by", "say who edits it"});
-    if (!r.ok() || current->sameContent(drill)) return r;
     return guarded("cannot save drill", [&] {
+        // The drill is looked at inside the transaction that adds the version, so a delete
+        // made meanwhile by another program cannot slip in between.
         SQLite::Transaction tx(m_repo.database());
+        const auto current = get(id);
+        if (!current || current->deleted) {
+            r.problems.assign(1, current ? Problem{"", "", "",
+                                                   "drill " + std::to_string(id) +
+                                                       " is deleted; restore it first"}
+                                         : noDrill(id));
+            return r;
+        }
+        if (!r.ok() || current->sameContent(drill)) return r;
         addVersion(id, drill, who, now);
         tx.commit();
         r.changed = true;
@@ -600,8 +666,7 @@ DrillChange DrillBook::edit(std::int64_t id, const Drill& drill, const std::stri
     });
 }
 
-std::vector<Drill> DrillBook::query(const std::string& where,
-                                    const std::vector<std::string>& words,
+std::vector<Drill> DrillBook::query(const std::string& where, const std::vector<std::string>& words,
                                     std::optional<std::int64_t> id) const {
     return guarded("cannot read drills", [&] {
         std::string sql =
@@ -611,12 +676,14 @@ std::vector<Drill> DrillBook::query(const std::string& where,
             "(SELECT max(l.id) FROM drill_version l WHERE l.drill_id = d.id) WHERE 1 " +
             where;
         if (id) sql += " AND d.id = ?";
-        for (std::size_t i = 0; i < words.size(); ++i) sql += " AND instr(v.search_text, ?) > 0";
+        for (std::size_t i = 0; i < words.size(); ++i)
+            sql += " AND instr(v.search_text, ?) > 0";
         sql += " ORDER BY d.id";
         SQLite::Statement q(m_repo.database(), sql);
         int n = 0;
         if (id) q.bind(++n, *id);
-        for (const auto& w : words) q.bind(++n, w);
+        for (const auto& w : words)
+            q.bind(++n, w);
         std::vector<Drill> out;
         while (q.executeStep()) {
             const std::int64_t drillId = q.getColumn(0).getInt64();
@@ -699,10 +766,12 @@ DrillChange DrillBook::remove(std::int64_t id, const std::string& now) {
         r.id = id;
         SQLite::Transaction tx(m_repo.database());
         const auto deleted = deletedAt(m_repo.database(), id);
-        if (!deleted) r.problems.push_back(noDrill(id));
+        if (!deleted)
+            r.problems.push_back(noDrill(id));
         else if (!deleted->empty())
-            r.problems.push_back({"", "", "", "drill " + std::to_string(id) +
-                                                  " is already deleted (since " + *deleted + ")"});
+            r.problems.push_back(
+                {"", "", "",
+                 "drill " + std::to_string(id) + " is already deleted (since " + *deleted + ")"});
         if (!r.ok()) return r;
         SQLite::Statement u(m_repo.database(), "UPDATE drill SET deleted_at = ? WHERE id = ?");
         u.bind(1, now);
@@ -720,7 +789,8 @@ DrillChange DrillBook::restore(std::int64_t id) {
         r.id = id;
         SQLite::Transaction tx(m_repo.database());
         const auto deleted = deletedAt(m_repo.database(), id);
-        if (!deleted) r.problems.push_back(noDrill(id));
+        if (!deleted)
+            r.problems.push_back(noDrill(id));
         else if (deleted->empty())
             r.problems.push_back({"", "", "", "drill " + std::to_string(id) + " is not deleted"});
         if (!r.ok()) return r;

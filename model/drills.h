@@ -7,9 +7,8 @@
 #include "problem.h"
 #include "zones.h"
 
-#include <nlohmann/json_fwd.hpp>
-
 #include <cstdint>
+#include <nlohmann/json_fwd.hpp>
 #include <optional>
 #include <string>
 #include <string_view>
@@ -53,12 +52,12 @@ struct Drill {
     std::vector<std::string> tags;
     std::string author;
 
-    std::int64_t id = 0;     ///< 0 before it is stored
-    std::string createdAt;   ///< when the drill was first added (ISO 8601 UTC)
-    std::string editedAt;    ///< when this version was written
-    std::string editedBy;    ///< who wrote this version
-    int versionCount = 0;    ///< versions so far (in a history: up to and including this one)
-    bool deleted = false;    ///< removed from the book (restorable)
+    std::int64_t id = 0;   ///< 0 before it is stored
+    std::string createdAt; ///< when the drill was first added (ISO 8601 UTC)
+    std::string editedAt;  ///< when this version was written
+    std::string editedBy;  ///< who wrote this version
+    int versionCount = 0;  ///< versions so far (in a history: up to and including this one)
+    bool deleted = false;  ///< removed from the book (restorable)
 
     bool hasArea() const { return areaLengthM != 0 || areaWidthM != 0; }
     /// Same content (every field a coach writes); the book-keeping fields are not compared.
@@ -121,10 +120,10 @@ struct DrillChange {
 
 /// Filters of a search; empty ones match everything, given ones must all match.
 struct DrillQuery {
-    std::string text;            ///< every word appears (ASCII case ignored) in drillSearchText
-    std::string tag;             ///< one of the tags (ASCII case ignored)
-    std::string metric;          ///< one of the metric ids
-    std::optional<Zone> zone;    ///< one of the zones
+    std::string text;         ///< every word appears (ASCII case ignored) in drillSearchText
+    std::string tag;          ///< one of the tags (ASCII case ignored)
+    std::string metric;       ///< one of the metric ids
+    std::optional<Zone> zone; ///< one of the zones
     bool includeDeleted = false;
 };
 
@@ -137,7 +136,7 @@ struct DrillImport {
 /// The drill book stored in a club file (tables drill and drill_version). Every edit adds a
 /// version; deletes set a date and can be undone. Storage faults throw StorageError.
 class DrillBook {
-public:
+  public:
     explicit DrillBook(ClubRepository& repo);
 
     /// Stores a new drill; `who` wrote it, `now` is an ISO 8601 UTC time. Validated against
@@ -168,7 +167,7 @@ public:
     std::vector<MetricSpec> metrics() const;
     ZoneGrid grid() const;
 
-private:
+  private:
     std::vector<Drill> query(const std::string& where, const std::vector<std::string>& words,
                              std::optional<std::int64_t> id) const;
     std::int64_t insert(const Drill& drill, const std::string& who, const std::string& now);

@@ -162,6 +162,48 @@ CREATE TABLE review(
   note TEXT NOT NULL DEFAULT '',
   recorded_by TEXT NOT NULL DEFAULT '');
 )sql",
+    // 5: fixtures (a squad's season schedule) and planned training sessions with their blocks
+    // and the minutes each gave to each focus.
+    R"sql(
+CREATE TABLE fixture(
+  id INTEGER PRIMARY KEY,
+  season_id INTEGER NOT NULL REFERENCES season(id) ON DELETE CASCADE,
+  date TEXT NOT NULL,
+  kickoff TEXT NOT NULL DEFAULT '',
+  opponent TEXT NOT NULL,
+  venue TEXT NOT NULL CHECK(venue IN ('home', 'away', 'neutral')),
+  competition TEXT NOT NULL DEFAULT '',
+  match_id INTEGER REFERENCES match(id) ON DELETE SET NULL,
+  UNIQUE(season_id, date));
+CREATE TABLE session(
+  id INTEGER PRIMARY KEY,
+  season_id INTEGER NOT NULL REFERENCES season(id) ON DELETE CASCADE,
+  date TEXT NOT NULL,
+  minutes INTEGER NOT NULL,
+  players INTEGER NOT NULL,
+  day_label TEXT NOT NULL,
+  intensity_cap INTEGER NOT NULL,
+  objective INTEGER NOT NULL,
+  saved_by TEXT NOT NULL,
+  saved_at TEXT NOT NULL,
+  UNIQUE(season_id, date));
+CREATE TABLE session_block(
+  session_id INTEGER NOT NULL REFERENCES session(id) ON DELETE CASCADE,
+  position INTEGER NOT NULL,
+  role TEXT NOT NULL CHECK(role IN ('warm_up', 'main', 'cool_down')),
+  drill_id INTEGER NOT NULL REFERENCES drill(id),
+  minutes INTEGER NOT NULL,
+  focus_id INTEGER REFERENCES focus(id) ON DELETE SET NULL,
+  pinned INTEGER NOT NULL DEFAULT 0,
+  why TEXT NOT NULL,
+  PRIMARY KEY(session_id, position)) WITHOUT ROWID;
+CREATE INDEX session_block_by_drill ON session_block(drill_id);
+CREATE TABLE session_focus(
+  session_id INTEGER NOT NULL REFERENCES session(id) ON DELETE CASCADE,
+  focus_id INTEGER NOT NULL REFERENCES focus(id) ON DELETE CASCADE,
+  minutes INTEGER NOT NULL,
+  PRIMARY KEY(session_id, focus_id)) WITHOUT ROWID;
+)sql",
 };
 
 static_assert(std::size(kMigrations) == ClubRepository::kSchemaVersion);

@@ -83,10 +83,21 @@ bool isIsoDate(const std::string& s) {
     if (s.size() != 10 || s[4] != '-' || s[7] != '-') return false;
     for (std::size_t i : {0u, 1u, 2u, 3u, 5u, 6u, 8u, 9u})
         if (s[i] < '0' || s[i] > '9') return false;
-    return true;
+    // Same range check as the match reader's dates.
+    const int month = std::stoi(s.substr(5, 2));
+    const int day = std::stoi(s.substr(8, 2));
+    return month >= 1 && month <= 12 && day >= 1 && day <= 31;
 }
 
 } // namespace
+
+bool isSeasonName(const std::string& s) {
+    if (s.size() != 7 || s[4] != '-') return false;
+    for (std::size_t i : {0u, 1u, 2u, 3u, 5u, 6u})
+        if (s[i] < '0' || s[i] > '9') return false;
+    const int first = std::stoi(s.substr(0, 4));
+    return first >= 1900 && std::stoi(s.substr(5, 2)) == (first + 1) % 100;
+}
 
 TargetFileResult parseTargetFile(std::string_view jsonText, const std::string& source,
                                  const std::vector<MetricSpec>& metrics, int bands, int lanes) {
@@ -142,6 +153,8 @@ TargetFileResult parseTargetFile(std::string_view jsonText, const std::string& s
         text("rationale", t.rationale, false);
         text("effective_from", t.effectiveFrom, true);
         text("recorded_at", t.recordedAt, false);
+        if (!t.key.season.empty() && !isSeasonName(t.key.season))
+            error("season", "expected a season such as 2026-27");
         if (!t.effectiveFrom.empty() && !isIsoDate(t.effectiveFrom))
             error("effective_from", "expected a date YYYY-MM-DD");
         const MetricSpec* metric = nullptr;

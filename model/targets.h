@@ -48,6 +48,9 @@ Direction defaultDirection(const MetricSpec& metric);
 double defaultWatchMargin(MetricKind kind);
 long defaultMinSample(MetricKind kind);
 
+/// Whether `s` names a season under the July–June convention, e.g. "2026-27".
+bool isSeasonName(const std::string& s);
+
 std::string_view toString(Direction d);
 std::optional<Direction> directionFromString(std::string_view s);
 

@@ -1,7 +1,9 @@
 #include "commands.h"
 
 #include "common.h"
+#include "drills_verbs.h"
 #include "focus_verbs.h"
+#include "plan_verbs.h"
 #include "verbs.h"
 
 #include "format.h"
@@ -222,7 +224,9 @@ int run(int argc, char** argv, std::ostream& out, std::ostream& err) {
 
     TargetVerbs targetVerbs(app);
     StatusVerbs statusVerbs(app);
+    DrillVerbs drillVerbs(app);
     FocusVerbs focusVerbs(app);
+    PlanVerbs planVerbs(app);
 
     auto* metrics = app.add_subcommand("metrics", "List, show and add metric definitions");
     metrics->require_subcommand(1);
@@ -272,7 +276,9 @@ int run(int argc, char** argv, std::ostream& out, std::ostream& err) {
         if (*tallies) return cmdTallies(g, talliesFormat, talliesMatch, talliesMetric, talliesGrid, out, err);
         if (targetVerbs.chosen()) return targetVerbs.run(g, out, err);
         if (statusVerbs.chosen()) return statusVerbs.run(g, out, err);
+        if (drillVerbs.chosen()) return drillVerbs.run(g, out, err);
         if (focusVerbs.chosen()) return focusVerbs.run(g, out, err);
+        if (planVerbs.chosen()) return planVerbs.run(g, out, err);
         if (*metricsList) return cmdMetricsList(g, out);
         if (*metricsShow) return cmdMetricsShow(g, showId, out, err);
         if (*metricsAdd) return cmdMetricsAdd(g, addFile, addReplace, err);

@@ -3,6 +3,7 @@
 #include "commands.h"
 #include "focus.h"
 #include "format.h"
+#include "sessions.h"
 
 #include <SQLiteCpp/Column.h>
 #include <SQLiteCpp/Statement.h>
@@ -335,7 +336,13 @@ int FocusVerbs::runReview(ClubRepository& repo, std::ostream& out, std::ostream&
         err << "error: focus " << f->id << ": " << result.problem << "\n";
         return kExitBadInput;
     }
-    const Review& r = *result.review;
+    Review r = *result.review;
+    // Training time between the windows: the focus's drills in saved sessions from the start
+    // to the last match of the after window.
+    r.trainingMinutes = SessionStore(repo).minutesOnDrills(f->squad, f->startDate,
+                                                           r.after.dates.back(), f->drills);
+    r.trainingNote = "minutes of this focus's drills in saved training sessions from " +
+                     f->startDate + " to " + r.after.dates.back();
     const std::string json = reviewToJson(r);
     if (!m_verdict.empty()) {
         if (m_by.empty()) {
@@ -391,7 +398,8 @@ int FocusVerbs::runReview(ClubRepository& repo, std::ostream& out, std::ostream&
                       p.above ? "   above the upper limit" : p.below ? "   below the lower limit" : "");
         out << line;
     }
-    out << "\nTraining time: " << r.trainingNote << ".\n";
+    out << "\nTraining time: " << (r.trainingMinutes ? std::to_string(static_cast<int>(*r.trainingMinutes)) : std::string("-"))
+        << " minutes (" << r.trainingNote << ").\n";
     if (m_verdict.empty())
         out << "Record the staff's verdict with: pitchloop review " << f->id
             << " --verdict worked|partly|no_change|cant_tell --by NAME --note \"...\"\n";

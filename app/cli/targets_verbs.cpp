@@ -73,6 +73,10 @@ TargetVerbs::TargetVerbs(CLI::App& app) {
 int TargetVerbs::run(const Globals& g, std::ostream& out, std::ostream& err) {
     auto repo = openClub(g);
     if (m_season.empty()) m_season = seasonOf(today());
+    if (!isSeasonName(m_season)) {
+        err << "error: --season " << m_season << ": expected a season such as 2026-27\n";
+        return kExitBadInput;
+    }
     if (m_set->parsed()) return runSet(*repo, false, err);
     if (m_retire->parsed()) return runSet(*repo, true, err);
     if (m_list->parsed()) return runList(*repo, false, out, err);
@@ -142,6 +146,10 @@ int TargetVerbs::runSet(ClubRepository& repo, bool retire, std::ostream& err) {
                 return kExitBadInput;
             }
             base.watchMargin = *margin;
+        }
+        if (m_set->count("--min-sample") > 0 && m_minSample < 0) {
+            err << "error: --min-sample " << m_minSample << ": expected a whole number ≥ 0\n";
+            return kExitBadInput;
         }
         if (m_minSample >= 0) base.minSample = m_minSample;
     } else {
@@ -222,7 +230,7 @@ int TargetVerbs::runCopy(ClubRepository& repo, std::ostream& out, std::ostream& 
         err << "error: no targets in " << m_squad << " " << m_fromSeason << " to copy\n";
         return kExitBadInput;
     }
-    if (seasonOf(m_toSeason.substr(0, 4) + "-08-01") != m_toSeason) {
+    if (!isSeasonName(m_toSeason)) {
         err << "error: --to-season " << m_toSeason << ": expected a season such as 2027-28\n";
         return kExitBadInput;
     }

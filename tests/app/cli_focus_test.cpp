@@ -101,7 +101,7 @@ TEST_CASE("a focus opened from the planted slip and reviewed after five matches"
     CHECK(r["after"]["num"].get<long>() < r["before"]["num"].get<long>());
     CHECK(r["prob_improved"].get<double>() > 0.99);
     CHECK(r["chart"]["points"].size() == 10);
-    CHECK(r["training_minutes"].is_null());
+    CHECK(r["training_minutes"] == 0); // no training session saved in this club file
 
     // Recording the verdict stores these numbers; the review then shows them as stored.
     const auto verdict = cli({"--db", club.db, "review", "1", "--verdict", "worked", "--by",

@@ -1,0 +1,417 @@
+#include "plan_verbs.h"
+
+#include "commands.h"
+#include "drills.h"
+#include "fixtures.h"
+#include "focus.h"
+#include "matchreader.h"
+#include "planner.h"
+#include "sessions.h"
+#include "status.h"
+
+#include <algorithm>
+#include <cstdio>
+#include <nlohmann/json.hpp>
+#include <stdexcept>
+
+namespace pitchloop::cli {
+
+using namespace pitchloop::model;
+
+namespace {
+
+int reportProblems(const Problems& problems, std::ostream& err) {
+    for (const auto& p : problems)
+        err << "error: " << p.describe() << "\n";
+    return kExitBadInput;
+}
+
+std::string fixtureLine(const Fixture& f) {
+    char buf[300];
+    std::snprintf(buf, sizeof buf, "%s %-5s %-7s %-28s %-16s%s", f.date.c_str(),
+                  f.kickoff.empty() ? "--:--" : f.kickoff.c_str(), f.venue.c_str(),
+                  f.opponent.c_str(), f.competition.c_str(),
+                  f.matchId.empty() ? "" : ("  match " + f.matchId).c_str());
+    std::string line = buf;
+    line.erase(line.find_last_not_of(' ') + 1);
+    return line + "\n";
+}
+
+nlohmann::json fixtureJson(const Fixture& f) {
+    return {{"date", f.date},
+            {"kickoff", f.kickoff},
+            {"opponent", f.opponent},
+            {"venue", f.venue},
+            {"competition", f.competition},
+            {"match_id", f.matchId.empty() ? nlohmann::json() : nlohmann::json(f.matchId)}};
+}
+
+/// The open focuses of a squad's season ranked as the planner sees them: flag numbers in the
+/// club's judged window at the last match before `date`. Notes go to `err`.
+std::vector<PlanFocus> openFocuses(ClubRepository& repo, const std::string& squad,
+                                   const std::string& season, const std::string& date,
+                                   std::ostream& err) {
+    std::vector<PlanFocus> out;
+    std::vector<Focus> open;
+    for (auto& f : FocusStore(repo).list())
+        if (f.squad == squad && f.season == season && f.closedAt.empty()) open.push_back(f);
+    if (open.empty()) return out;
+    const SeasonTallies tallies = repo.seasonTallies(squad, season);
+    std::optional<std::size_t> focal;
+    for (std::size_t i = 0; i < tallies.dates.size(); ++i)
+        if (tallies.dates[i] < date) focal = i;
+    if (!focal) {
+        err << "note: no match of " << season << " before " << date
+            << ": the open focuses cannot be ranked yet and are left out\n";
+        return out;
+    }
+    const FlagSettings settings = repo.flagSettings();
+    const ZoneGrid grid = repo.tallyGrid();
+    const auto targets = repo.targets(squad, season);
+    for (const Focus& f : open) {
+        const auto metric = repo.metric(f.metric);
+        if (!metric) {
+            err << "note: focus " << f.id << " works on metric '" << f.metric
+                << "', which is no longer defined; left out\n";
+            continue;
+        }
+        const auto statuses =
+            computeStatus(tallies, *focal, {*metric}, targets, grid, {settings.window}, settings);
+        auto p = planFocus(f, *metric, statuses, settings.window, grid);
+        if (!p) {
+            err << "note: focus " << f.id << " has no target in force in its zones; left out\n";
+            continue;
+        }
+        out.push_back(std::move(*p));
+    }
+    return out;
+}
+
+} // namespace
+
+PlanVerbs::PlanVerbs(CLI::App& app) {
+    m_fixtures = app.add_subcommand("fixtures", "The squad's season schedule and the microcycle");
+    m_fixtures->require_subcommand(1);
+    auto squad = [&](CLI::App* sub) {
+        sub->add_option("--squad", m_squad, "Squad")->capture_default_str();
+    };
+    m_import = m_fixtures->add_subcommand("import", "Import fixtures from a CSV or JSON file "
+                                                    "(docs/planner.md); a file with a problem "
+                                                    "imports nothing");
+    m_import->add_option("file", m_file)->required();
+    squad(m_import);
+
+    m_add = m_fixtures->add_subcommand("add", "Enter one fixture by hand (replaces the fixture "
+                                              "of that date)");
+    m_add->add_option("--date", m_date, "YYYY-MM-DD")->required();
+    m_add->add_option("--opponent", m_opponent)->required();
+    m_add->add_option("--venue", m_venue, "home, away or neutral")->required();
+    m_add->add_option("--kickoff", m_kickoff, "HH:MM (leave out while unknown)");
+    m_add->add_option("--competition", m_competition);
+    squad(m_add);
+
+    m_list = m_fixtures->add_subcommand("list", "The squad's fixtures");
+    m_list->add_option("--season", m_season, "Only this season, e.g. 2026-27");
+    m_list->add_option("--format", m_format, "table or json")
+        ->check(CLI::IsMember({"table", "json"}));
+    squad(m_list);
+
+    m_remove = m_fixtures->add_subcommand("remove", "Remove the fixture of a date");
+    m_remove->add_option("date", m_date)->required();
+    squad(m_remove);
+
+    m_next = m_fixtures->add_subcommand("next", "Previous and next match and the microcycle day "
+                                                "of a date (default today)");
+    m_next->add_option("--date", m_date, "YYYY-MM-DD");
+    m_next->add_option("--format", m_format, "table or json")
+        ->check(CLI::IsMember({"table", "json"}));
+    squad(m_next);
+
+    m_caps = m_fixtures->add_subcommand("caps", "Show or set the intensity cap of each "
+                                                "microcycle day (common practice, no published "
+                                                "source)");
+    m_caps->add_option("--set", m_setCaps,
+                       "JSON, e.g. '{\"md_minus\": [2, 3, 4, 4]}' (keys left out keep the "
+                       "defaults)");
+
+    m_plan = app.add_subcommand("plan", "Plan a training session: drills for the open focuses "
+                                        "within the day's cap, minutes and players");
+    m_plan->add_option("date", m_date, "The session's date, YYYY-MM-DD")->required();
+    m_plan->add_option("--minutes", m_minutes, "The session's length")->required();
+    m_plan->add_option("--players", m_players, "Players available")->required();
+    m_plan->add_option("--pin", m_pin, "Drill id that must be in the plan (repeatable)");
+    m_plan->add_option("--remove", m_removeDrills, "Drill id to leave out (repeatable)");
+    m_plan->add_option("--swap", m_swap,
+                       "OUT:IN — leave drill OUT out and pin drill IN "
+                       "(repeatable)");
+    m_plan->add_flag("--save", m_save, "Save the session (replaces that date's session)");
+    m_plan->add_option("--by", m_by, "Who saves it (with --save)");
+    m_plan->add_option("--format", m_format, "table or json")
+        ->check(CLI::IsMember({"table", "json"}));
+    squad(m_plan);
+}
+
+int PlanVerbs::run(const Globals& g, std::ostream& out, std::ostream& err) {
+    auto repo = openClub(g);
+    if (m_import->parsed()) return runImport(*repo, err);
+    if (m_add->parsed()) return runAdd(*repo, err);
+    if (m_list->parsed()) return runList(*repo, out, err);
+    if (m_remove->parsed()) return runRemove(*repo, err);
+    if (m_next->parsed()) return runNext(*repo, out, err);
+    if (m_caps->parsed()) return runCaps(*repo, out, err);
+    return runPlan(*repo, out, err);
+}
+
+int PlanVerbs::runImport(ClubRepository& repo, std::ostream& err) {
+    std::string text;
+    try {
+        text = readFileBytes(m_file);
+    } catch (const IoError&) {
+        err << "error: " << m_file << ": cannot be read\n";
+        return kExitBadInput;
+    }
+    const auto parsed = parseFixtureFile(text, m_file);
+    if (!parsed.errors.empty()) {
+        reportProblems(parsed.errors, err);
+        err << m_file << ": no fixture imported\n";
+        return kExitBadInput;
+    }
+    const FixtureImport r = FixtureStore(repo).importFixtures(m_squad, parsed.fixtures, m_file);
+    if (!r.errors.empty()) {
+        reportProblems(r.errors, err);
+        err << m_file << ": no fixture imported\n";
+        return kExitBadInput;
+    }
+    err << r.added << " added, " << r.updated << " updated, " << r.unchanged << " unchanged, "
+        << r.linked << " linked to stored matches\n";
+    return kExitOk;
+}
+
+int PlanVerbs::runAdd(ClubRepository& repo, std::ostream& err) {
+    const Fixture f{m_date, m_kickoff, m_opponent, m_venue, m_competition, ""};
+    const FixtureImport r = FixtureStore(repo).importFixtures(m_squad, {f}, "fixture");
+    if (!r.errors.empty()) return reportProblems(r.errors, err);
+    err << (r.added     ? "added"
+            : r.updated ? "updated"
+                        : "unchanged:")
+        << " fixture " << f.date << " against " << f.opponent
+        << (r.linked ? " (linked to its match)" : "") << "\n";
+    return kExitOk;
+}
+
+int PlanVerbs::runList(ClubRepository& repo, std::ostream& out, std::ostream& err) {
+    const auto fixtures = FixtureStore(repo).list(m_squad, m_season);
+    if (m_format == "json") {
+        nlohmann::json list = nlohmann::json::array();
+        for (const auto& f : fixtures)
+            list.push_back(fixtureJson(f));
+        out << nlohmann::json{{"format", "pitchloop-fixtures"}, {"version", 1}, {"fixtures", list}}
+                   .dump(2)
+            << "\n";
+        return kExitOk;
+    }
+    for (const auto& f : fixtures)
+        out << fixtureLine(f);
+    if (fixtures.empty()) err << "(no fixtures yet: pitchloop fixtures import FILE)\n";
+    return kExitOk;
+}
+
+int PlanVerbs::runRemove(ClubRepository& repo, std::ostream& err) {
+    if (!FixtureStore(repo).remove(m_squad, m_date)) {
+        err << "error: no fixture of " << m_squad << " on " << m_date << "\n";
+        return kExitBadInput;
+    }
+    err << "removed the fixture of " << m_date << "\n";
+    return kExitOk;
+}
+
+int PlanVerbs::runNext(ClubRepository& repo, std::ostream& out, std::ostream& err) {
+    const std::string date = m_date.empty() ? today() : m_date;
+    if (!dayNumber(date)) {
+        err << "error: --date " << date << ": expected a date YYYY-MM-DD\n";
+        return kExitBadInput;
+    }
+    FixtureStore store(repo);
+    const MicrocycleDay day = microcycle(date, store.list(m_squad, seasonOf(date)));
+    const auto cap = intensityCap(day, store.caps());
+    if (m_format == "json") {
+        out << nlohmann::json{{"date", date},
+                              {"label", day.label},
+                              {"congested", day.congested},
+                              {"cap", cap ? nlohmann::json(*cap) : nlohmann::json()},
+                              {"previous",
+                               day.previous ? fixtureJson(*day.previous) : nlohmann::json()},
+                              {"next", day.next ? fixtureJson(*day.next) : nlohmann::json()},
+                              {"days_after_previous", day.daysAfterPrevious
+                                                          ? nlohmann::json(*day.daysAfterPrevious)
+                                                          : nlohmann::json()},
+                              {"days_to_next",
+                               day.daysToNext ? nlohmann::json(*day.daysToNext) : nlohmann::json()}}
+                   .dump(2)
+            << "\n";
+        return kExitOk;
+    }
+    if (day.label.empty()) {
+        err << "error: " << m_squad << " has no fixtures in season " << seasonOf(date)
+            << " (pitchloop fixtures import FILE)\n";
+        return kExitBadInput;
+    }
+    out << date << ": " << day.label << (day.congested ? " (congested week)" : "")
+        << ", intensity cap " << *cap
+        << (*cap >= kIntensityMin ? " (" + std::string(intensityName(*cap)) + ")" : " (no session)")
+        << "\n";
+    if (day.previous)
+        out << "previous: " << *day.daysAfterPrevious << " days ago  "
+            << fixtureLine(*day.previous);
+    if (day.next)
+        out << "next:     "
+            << (*day.daysToNext == 0 ? "today       "
+                                     : "in " + std::to_string(*day.daysToNext) + " days   ")
+            << fixtureLine(*day.next);
+    return kExitOk;
+}
+
+int PlanVerbs::runCaps(ClubRepository& repo, std::ostream& out, std::ostream& err) {
+    FixtureStore store(repo);
+    if (!m_setCaps.empty()) {
+        const CapsResult r = parseCaps(m_setCaps, "--set");
+        if (!r.errors.empty()) return reportProblems(r.errors, err);
+        store.saveCaps(r.caps);
+        err << "saved the intensity caps\n";
+    }
+    const IntensityCaps caps = store.caps();
+    out << "Intensity cap per microcycle day (1 recovery … 5 maximal, 0 no session; common "
+           "practice, no published source)\n";
+    auto line = [&](const std::string& day, int cap) {
+        char buf[120];
+        std::snprintf(buf, sizeof buf, "  %-32s %d %s\n", day.c_str(), cap,
+                      cap >= kIntensityMin ? std::string(intensityName(cap)).c_str()
+                                           : "no session");
+        out << buf;
+    };
+    line("MD", caps.matchDay);
+    for (int n = 1; n <= kRecoveryDays; ++n)
+        line("MD+" + std::to_string(n), caps.after(n));
+    for (int n = 4; n >= 1; --n)
+        line("MD-" + std::to_string(n), caps.before(n));
+    line("other days", caps.otherDays);
+    out << "other days: MD-5 and earlier, and MD+3 and later after the last fixture; congested "
+           "weeks take the lower cap of their two days\n";
+    return kExitOk;
+}
+
+int PlanVerbs::runPlan(ClubRepository& repo, std::ostream& out, std::ostream& err) {
+    if (m_save && m_by.empty()) {
+        err << "error: --save needs --by NAME (who saves it)\n";
+        return kExitBadInput;
+    }
+    PlanRequest req;
+    req.date = m_date;
+    req.minutes = m_minutes;
+    req.playersAvailable = m_players;
+    req.pinned = m_pin;
+    req.removed = m_removeDrills;
+    const bool dated = dayNumber(m_date).has_value();
+    req.season = dated ? seasonOf(m_date) : "";
+    FixtureStore fixtures(repo);
+    SessionStore sessions(repo);
+    if (dated) {
+        req.fixtures = fixtures.list(m_squad, req.season);
+        req.yesterday = sessions.drillsOn(m_squad, addDays(m_date, -1));
+        req.focuses = openFocuses(repo, m_squad, req.season, m_date, err);
+    }
+    req.caps = fixtures.caps();
+    req.drills = DrillBook(repo).list();
+    for (const auto& s : m_swap) {
+        const auto colon = s.find(':');
+        try {
+            if (colon == std::string::npos) throw std::invalid_argument(s);
+            req = swapDrill(std::move(req), std::stoll(s.substr(0, colon)),
+                            std::stoll(s.substr(colon + 1)));
+        } catch (const std::exception&) {
+            err << "error: --swap " << s << ": expected OUT:IN, two drill ids\n";
+            return kExitBadInput;
+        }
+    }
+
+    const PlanResult result = planSession(req);
+    if (!result.plan) {
+        err << "error: " << result.problem << "\n";
+        err << "no session planned; nothing saved\n";
+        return kExitBadInput;
+    }
+    const Plan& p = *result.plan;
+    if (m_format == "json") {
+        nlohmann::json blocks = nlohmann::json::array();
+        for (const auto& b : p.blocks)
+            blocks.push_back({{"role", toString(b.role)},
+                              {"drill_id", b.drillId},
+                              {"title", b.title},
+                              {"minutes", b.minutes},
+                              {"intensity", b.intensity},
+                              {"pinned", b.pinned},
+                              {"focus_id", b.focus && req.focuses[*b.focus].id
+                                               ? nlohmann::json(req.focuses[*b.focus].id)
+                                               : nlohmann::json()},
+                              {"why", b.why}});
+        nlohmann::json focusMinutes = nlohmann::json::array();
+        for (const auto& fm : p.focusMinutes) {
+            const PlanFocus& f = req.focuses[fm.focus];
+            focusMinutes.push_back({{"focus_id", fm.focusId},
+                                    {"metric", f.metric},
+                                    {"severity", f.severity},
+                                    {"minutes", fm.minutes}});
+        }
+        out << nlohmann::json{{"date", p.date},
+                              {"squad", m_squad},
+                              {"day", p.day.label},
+                              {"cap", p.cap},
+                              {"minutes", p.sessionMinutes},
+                              {"minutes_used", p.minutesUsed},
+                              {"players", p.playersAvailable},
+                              {"blocks", blocks},
+                              {"focus_minutes", focusMinutes},
+                              {"objective", p.objective},
+                              {"caution", p.caution}}
+                   .dump(2)
+            << "\n";
+    } else {
+        out << "Session " << p.date << " for " << m_squad << ": " << p.day.label << ", cap "
+            << p.cap << " (" << intensityName(p.cap) << "), " << p.minutesUsed << " of "
+            << p.sessionMinutes << " minutes, " << p.playersAvailable << " players\n\n";
+        for (const auto& b : p.blocks) {
+            const char* role = b.role == BlockRole::WarmUp     ? "warm-up"
+                               : b.role == BlockRole::CoolDown ? "cool-down"
+                                                               : "main";
+            char line[400];
+            std::snprintf(line, sizeof line, "%3d min  %-9s drill %-4lld %s (intensity %d)\n",
+                          b.minutes, role, static_cast<long long>(b.drillId), b.title.c_str(),
+                          b.intensity);
+            out << line << "         " << b.why << "\n";
+        }
+        if (!p.focusMinutes.empty()) {
+            out << "\nMinutes per open focus (most severe first):\n";
+            std::vector<FocusMinutes> ranked = p.focusMinutes;
+            std::stable_sort(ranked.begin(), ranked.end(), [&](const auto& a, const auto& b) {
+                return req.focuses[a.focus].severity > req.focuses[b.focus].severity;
+            });
+            for (const auto& fm : ranked) {
+                const PlanFocus& f = req.focuses[fm.focus];
+                char line[200];
+                std::snprintf(line, sizeof line, "  focus %-4lld %-26s severity %.2f  %3d min\n",
+                              static_cast<long long>(fm.focusId), f.metric.c_str(), f.severity,
+                              fm.minutes);
+                out << line;
+            }
+        }
+        out << "\n" << p.caution << "\n";
+    }
+    if (m_save) {
+        const SessionSave s = sessions.save(m_squad, p, m_by, nowUtc());
+        err << (s.replaced ? "saved (replacing the earlier plan of " : "saved the session of ")
+            << p.date << (s.replaced ? ")" : "") << "\n";
+    }
+    return kExitOk;
+}
+
+} // namespace pitchloop::cli

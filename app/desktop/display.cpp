@@ -1,0 +1,215 @@
+#include "display.h"
+
+#include <QDate>
+#include <QLocale>
+
+#include <algorithm>
+#include <cmath>
+
+namespace pitchloop::desktop {
+
+using namespace pitchloop::model;
+
+namespace {
+
+QString number(double v, int decimals) { return QLocale().toString(v, 'f', decimals); }
+
+/// A tidy step for an axis spanning `span`: 1, 2 or 5 times a power of ten.
+double tidyStep(double span, int steps) {
+    const double raw = span / std::max(steps, 1);
+    const double magnitude = std::pow(10.0, std::floor(std::log10(raw)));
+    for (double m : {1.0, 2.0, 5.0, 10.0})
+        if (m * magnitude >= raw) return m * magnitude;
+    return 10 * magnitude;
+}
+
+} // namespace
+
+QString valueText(MetricKind kind, double value) {
+    if (std::isnan(value)) return QStringLiteral("–");
+    if (kind == MetricKind::Rate) return number(100 * value, 1) + QLatin1Char('%');
+    return number(value, 2);
+}
+
+QString intervalText(MetricKind kind, const stats::Interval& interval) {
+    if (std::isnan(interval.low) || std::isnan(interval.high) || std::isinf(interval.high))
+        return QStringLiteral("–");
+    if (kind == MetricKind::Rate)
+        return number(100 * interval.low, 1) + QStringLiteral("–") + number(100 * interval.high, 1) +
+               QLatin1Char('%');
+    return number(interval.low, 2) + QStringLiteral("–") + number(interval.high, 2);
+}
+
+QString levelText(double level) {
+    return QStringLiteral("%1% interval").arg(number(100 * level, std::fmod(100 * level, 1) == 0 ? 0 : 1));
+}
+
+QString sampleText(MetricKind kind, const WindowSum& sum, const Window& w) {
+    if (kind == MetricKind::Count) {
+        if (w.kind == Window::Kind::Ewma)
+            return QStringLiteral("%1 matches, weighted").arg(sum.matches);
+        return sum.matches == 1 ? QStringLiteral("1 match") : QStringLiteral("%1 matches").arg(sum.matches);
+    }
+    if (w.kind == Window::Kind::Ewma)
+        return QStringLiteral("n ≈ %1").arg(number(sum.den, 0));
+    return QStringLiteral("n = %1").arg(number(sum.den, 0));
+}
+
+QString targetText(MetricKind kind, const std::optional<Target>& target) {
+    if (!target) return {};
+    return (target->direction == Direction::AtLeast ? QStringLiteral("≥ ") : QStringLiteral("≤ ")) +
+           valueText(kind, target->value);
+}
+
+QString zoneText(int band, int lane) {
+    if (band == 0 && lane == 0) return QStringLiteral("Whole pitch");
+    return QStringLiteral("Band %1 · lane %2").arg(band).arg(lane);
+}
+
+QString stateText(FlagState state) {
+    switch (state) {
+    case FlagState::OnTarget: return QStringLiteral("On target");
+    case FlagState::Watch: return QStringLiteral("Watch");
+    case FlagState::OffTarget: return QStringLiteral("Slipped");
+    case FlagState::TooLittleData: return QStringLiteral("Too little data");
+    case FlagState::NoTarget: return QStringLiteral("No target");
+    }
+    return {};
+}
+
+QString certaintyText(double pMiss) {
+    if (std::isnan(pMiss)) return {};
+    return QStringLiteral("P(miss) %1").arg(number(pMiss, pMiss >= 0.99 ? 3 : 2));
+}
+
+QString windowText(const Window& w) {
+    switch (w.kind) {
+    case Window::Kind::Match: return QStringLiteral("This match");
+    case Window::Kind::LastN:
+        return w.n == 1 ? QStringLiteral("Last match") : QStringLiteral("Last %1 matches").arg(w.n);
+    case Window::Kind::Season: return QStringLiteral("Season so far");
+    case Window::Kind::Ewma: return QStringLiteral("EWMA, λ %1").arg(number(w.lambda, 2));
+    }
+    return {};
+}
+
+QString windowPhrase(const Window& w) {
+    switch (w.kind) {
+    case Window::Kind::Match: return QStringLiteral("this match");
+    case Window::Kind::LastN:
+        return w.n == 1 ? QStringLiteral("the last match") : QStringLiteral("the last %1 matches").arg(w.n);
+    case Window::Kind::Season: return QStringLiteral("the season so far");
+    case Window::Kind::Ewma: return QStringLiteral("the EWMA (λ %1)").arg(number(w.lambda, 2));
+    }
+    return {};
+}
+
+QString dateText(const std::string& isoDate) {
+    const QDate d = QDate::fromString(QString::fromStdString(isoDate), Qt::ISODate);
+    if (!d.isValid()) return QString::fromStdString(isoDate);
+    return QLocale().toString(d, QStringLiteral("ddd d MMM yyyy"));
+}
+
+QString compactDateText(const std::string& isoDate) {
+    const QDate d = QDate::fromString(QString::fromStdString(isoDate), Qt::ISODate);
+    if (!d.isValid()) return QString::fromStdString(isoDate);
+    return QLocale().toString(d, QStringLiteral("d MMM yyyy"));
+}
+
+QString shortDateText(const std::string& isoDate) {
+    const QDate d = QDate::fromString(QString::fromStdString(isoDate), Qt::ISODate);
+    if (!d.isValid()) return QString::fromStdString(isoDate);
+    return QLocale().toString(d, QStringLiteral("d MMM"));
+}
+
+QString venueText(const std::string& venue) {
+    if (venue == "home") return QStringLiteral("Home");
+    if (venue == "away") return QStringLiteral("Away");
+    if (venue == "neutral") return QStringLiteral("Neutral ground");
+    return QString::fromStdString(venue);
+}
+
+QString scoreText(const MatchSummary& m) {
+    if (!m.goalsUs || !m.goalsOpp) return {};
+    return QStringLiteral("%1–%2").arg(*m.goalsUs).arg(*m.goalsOpp);
+}
+
+QString outcomeText(const MatchSummary& m) {
+    if (!m.goalsUs || !m.goalsOpp) return {};
+    return *m.goalsUs > *m.goalsOpp ? QStringLiteral("W")
+           : *m.goalsUs < *m.goalsOpp ? QStringLiteral("L")
+                                      : QStringLiteral("D");
+}
+
+QString outcomeWord(const MatchSummary& m) {
+    const QString o = outcomeText(m);
+    if (o == QLatin1String("W")) return QStringLiteral("Won");
+    if (o == QLatin1String("L")) return QStringLiteral("Lost");
+    if (o == QLatin1String("D")) return QStringLiteral("Drawn");
+    return {};
+}
+
+QString kindText(MetricKind kind) {
+    switch (kind) {
+    case MetricKind::Rate: return QStringLiteral("share of items");
+    case MetricKind::Count: return QStringLiteral("count a match");
+    case MetricKind::Exposure: return QStringLiteral("per exposure event");
+    }
+    return {};
+}
+
+QString betterText(Better better) {
+    return better == Better::Higher ? QStringLiteral("Higher is better")
+                                    : QStringLiteral("Lower is better");
+}
+
+double ScaleDomain::position(double value) const {
+    if (std::isnan(value) || high <= low) return 0;
+    return std::clamp((value - low) / (high - low), 0.0, 1.0);
+}
+
+int ScaleDomain::steps() const {
+    return step > 0 ? static_cast<int>(std::lround((high - low) / step)) : 1;
+}
+
+ScaleDomain scaleDomain(MetricKind kind, const std::vector<double>& values) {
+    constexpr double eps = 1e-9;
+    double lo = INFINITY, hi = -INFINITY;
+    for (double v : values)
+        if (std::isfinite(v)) {
+            lo = std::min(lo, v);
+            hi = std::max(hi, v);
+        }
+    if (kind == MetricKind::Rate) {
+        if (lo > hi) return {0, 1, 0.2};
+        const double span = std::ceil(hi * 10 - eps) / 10 - std::floor(lo * 10 + eps) / 10;
+        ScaleDomain d;
+        d.step = span <= 0.3 + eps ? 0.05 : span <= 0.6 + eps ? 0.1 : 0.2;
+        d.low = std::max(0.0, std::floor(lo / d.step + eps) * d.step);
+        d.high = std::min(1.0, std::ceil(hi / d.step - eps) * d.step);
+        if (d.high <= d.low + eps) {
+            if (d.high + d.step <= 1 + eps) d.high += d.step;
+            else d.low -= d.step;
+        }
+        return d;
+    }
+    if (lo > hi || hi <= 0) return {0, 1, 0.25};
+    ScaleDomain d;
+    d.step = tidyStep(hi, 4);
+    d.low = 0;
+    d.high = std::max(1.0, std::ceil(hi / d.step - eps)) * d.step;
+    return d;
+}
+
+QStringList scaleLabels(MetricKind kind, const ScaleDomain& domain) {
+    QStringList out;
+    const int decimals = kind == MetricKind::Rate ? 0 : domain.step >= 1 - 1e-9 ? 0 : domain.step >= 0.1 - 1e-9 ? 1 : 2;
+    for (int i = 0; i <= domain.steps(); ++i) {
+        const double v = domain.low + domain.step * i;
+        out << (kind == MetricKind::Rate ? number(100 * v, decimals) + QLatin1Char('%')
+                                         : number(v, decimals));
+    }
+    return out;
+}
+
+} // namespace pitchloop::desktop

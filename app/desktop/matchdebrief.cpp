@@ -1,0 +1,195 @@
+#include "matchdebrief.h"
+
+#include "clubsession.h"
+#include "debrieflistmodel.h"
+#include "display.h"
+#include "matchlistmodel.h"
+#include "metriclistmodel.h"
+#include "pitchgeometry.h"
+#include "zonemapmodel.h"
+#include "zonestate.h"
+
+#include <QLocale>
+
+#include <algorithm>
+
+namespace pitchloop::desktop {
+
+using namespace pitchloop::model;
+
+namespace {
+
+/// The metric to show first: that of the most certain slip over the window, then in the
+/// match, then on watch; else the first metric.
+std::string defaultMetric(const Debrief& d, const std::vector<MetricSpec>& metrics) {
+    for (const auto* list : {&d.slippedInWindow, &d.slippedInMatch, &d.watched})
+        if (!list->empty()) return list->front().now.metric;
+    return metrics.empty() ? std::string() : metrics.front().id;
+}
+
+} // namespace
+
+MatchDebrief::MatchDebrief(QObject* parent)
+    : SessionClient(parent),
+      m_matchMap(new ZoneMapModel(this)),
+      m_windowMap(new ZoneMapModel(this)),
+      m_items(new DebriefListModel(this)),
+      m_geometry(new PitchGeometry(this)) {}
+
+void MatchDebrief::setMatchId(const QString& id) {
+    if (id == m_matchId) return;
+    m_matchId = id;
+    emit matchIdChanged();
+    update();
+}
+
+void MatchDebrief::setMetricId(const QString& id) {
+    if (id == m_metricId) return;
+    m_metricId = id;
+    emit metricIdChanged();
+    update();
+}
+
+void MatchDebrief::selectZone(int band, int lane) {
+    if (band == m_selectedBand && lane == m_selectedLane) return;
+    m_selectedBand = band;
+    m_selectedLane = lane;
+    emit selectionChanged();
+}
+
+void MatchDebrief::clear() {
+    m_matchRow = m_metricRow = -1;
+    m_hasTargets = false;
+    m_matchTitle.clear();
+    m_metricName.clear();
+    m_metricQuestion.clear();
+    m_betterText.clear();
+    m_windowText.clear();
+    m_judgedText.clear();
+    m_matchMap->clear();
+    m_windowMap->clear();
+    m_items->reset({});
+}
+
+void MatchDebrief::refresh() {
+    clear();
+    ClubSession* s = session();
+    if (!s || !s->isOpen() || s->matchSummaries().empty()) {
+        emit changed();
+        return;
+    }
+    const MatchSummary* match = s->summary(m_matchId.toStdString());
+    if (!match) match = &s->matchSummaries().back();
+    const auto season = s->seasonOf(match->id);
+    const auto focal = season ? season->indexOf(match->id) : std::nullopt;
+    if (!focal) {
+        emit changed();
+        return;
+    }
+    if (const QString id = QString::fromStdString(match->id); id != m_matchId) {
+        m_matchId = id;
+        emit matchIdChanged();
+    }
+    m_geometry->setZoneGrid(s->grid());
+    m_geometry->setPitch(match->pitch);
+
+    m_hasTargets = !season->targets().empty();
+    const Debrief& debriefed = season->debriefAt(*focal);
+    const MetricSpec* metric = s->metricSpec(m_metricId.toStdString());
+    if (!metric) metric = s->metricSpec(defaultMetric(debriefed, s->metricSpecs()));
+    if (!metric) {
+        emit changed();
+        return;
+    }
+    if (const QString id = QString::fromStdString(metric->id); id != m_metricId) {
+        m_metricId = id;
+        emit metricIdChanged();
+    }
+    if (const QString key = m_matchId + QLatin1Char('/') + m_metricId; key != m_selectionFor) {
+        m_selectionFor = key;
+        int band = 0, lane = 0;
+        for (const auto* list : {&debriefed.slippedInWindow, &debriefed.slippedInMatch, &debriefed.watched}) {
+            const auto it = std::find_if(list->begin(), list->end(), [&](const DebriefItem& item) {
+                return item.now.metric == metric->id && item.now.band > 0;
+            });
+            if (it == list->end()) continue;
+            band = it->now.band;
+            lane = it->now.lane;
+            break;
+        }
+        selectZone(band, lane);
+    }
+    m_matchRow = s->matches()->indexOf(m_matchId);
+    m_metricRow = s->metrics()->indexOf(m_metricId);
+
+    const MetricKind kind = metric->kind();
+    const AppWindows& windows = season->windows();
+    m_matchTitle = QStringLiteral("%1 · %2 · %3 (%4)")
+                       .arg(m_matchId, dateText(match->date), QString::fromStdString(match->opponent),
+                            venueText(match->venue).toLower());
+    if (const QString score = scoreText(*match); !score.isEmpty())
+        m_matchTitle += QStringLiteral(" · %1 %2").arg(score, outcomeWord(*match).toLower());
+    m_metricName = QString::fromStdString(metric->name.empty() ? metric->id : metric->name);
+    m_metricQuestion = QString::fromStdString(metric->question);
+    m_betterText = desktop::betterText(metric->better);
+    m_windowText = desktop::windowText(windows.judged);
+
+    // One metric's zones in the match and over the judged window, on one shared colour scale.
+    const ZoneGrid& grid = s->grid();
+    std::vector<const ZoneStatus*> inMatch, inWindow;
+    std::vector<double> values;
+    for (int i = 0; i < grid.zoneCount(); ++i) {
+        const Zone z = grid.zoneAt(i);
+        const ZoneStatus* a = season->find(*focal, metric->id, z.band, z.lane, windows.match);
+        const ZoneStatus* b = season->find(*focal, metric->id, z.band, z.lane, windows.judged);
+        if (!a || !b) continue;
+        inMatch.push_back(a);
+        inWindow.push_back(b);
+        values.push_back(a->value);
+        values.push_back(b->value);
+    }
+    const ScaleDomain domain = scaleDomain(kind, values);
+    const QStringList labels = scaleLabels(kind, domain);
+    const QString level = levelText(s->flagSettings().level);
+    const auto header = [&](const QString& title, const QString& subtitle, const Window& w) {
+        ZoneMapModel::Header h{title, subtitle, {}, ZoneState::NoTarget, labels, level};
+        if (const ZoneStatus* whole = season->find(*focal, metric->id, 0, 0, w)) {
+            h.wholePitchText = wholePitchLine(*whole, kind);
+            h.wholePitchState = ZoneState::from(whole->state);
+        }
+        return h;
+    };
+    const std::size_t first = season->judgedWindowStart(*focal);
+    m_matchMap->reset(header(tr("This match"),
+                             QStringLiteral("%1 v %2").arg(m_matchId, QString::fromStdString(match->opponent)),
+                             windows.match),
+                      zoneCells(inMatch, kind, domain));
+    m_windowMap->reset(header(tr("%1 — judged").arg(m_windowText),
+                              QStringLiteral("%1 … %2").arg(QString::fromStdString(season->tallies().matchIds[first]),
+                                                            m_matchId),
+                              windows.judged),
+                       zoneCells(inWindow, kind, domain));
+
+    if (m_hasTargets) {
+        const QString phrase = windowPhrase(windows.judged);
+        auto rows = debriefRows(tr("Slipped over %1").arg(phrase), debriefed.slippedInWindow,
+                                s->metricsById(), debriefed.previousMatchId, true);
+        auto inMatchOnly = debriefRows(tr("Slipped in this match alone"), debriefed.slippedInMatch,
+                                       s->metricsById(), debriefed.previousMatchId, false);
+        auto watch = debriefRows(tr("On watch over %1").arg(phrase), debriefed.watched, s->metricsById(),
+                                 debriefed.previousMatchId, false);
+        rows.insert(rows.end(), inMatchOnly.begin(), inMatchOnly.end());
+        rows.insert(rows.end(), watch.begin(), watch.end());
+        m_items->reset(std::move(rows));
+        m_judgedText = tr("%1 zones with targets judged over %2, %3 with too little data. If every "
+                          "true value sat exactly on its target, chance alone would flag about %4. Flags are "
+                          "evidence for the staff to weigh, not verdicts.")
+                           .arg(debriefed.judged)
+                           .arg(phrase)
+                           .arg(debriefed.tooLittleData)
+                           .arg(QLocale().toString(debriefed.chanceFlags, 'f', 1));
+    }
+    emit changed();
+}
+
+} // namespace pitchloop::desktop

@@ -1,0 +1,102 @@
+#pragma once
+// A match judged against the season's targets (the debrief page): one metric's zones in this
+// match and over the judged window, and every slipped or watched target, most certain first.
+
+#include "sessionclient.h"
+
+#include <QString>
+#include <QtQml/qqmlregistration.h>
+
+namespace pitchloop::desktop {
+
+class DebriefListModel;
+class PitchGeometry;
+class ZoneMapModel;
+
+/// Inputs: matchId (empty: the latest match) and metricId (empty: the metric of the most
+/// certain slip, else the first metric). Both are filled in with what is shown.
+class MatchDebrief : public pitchloop::desktop::SessionClient {
+    Q_OBJECT
+    Q_MOC_INCLUDE("debrieflistmodel.h")
+    Q_MOC_INCLUDE("pitchgeometry.h")
+    Q_MOC_INCLUDE("zonemapmodel.h")
+    QML_ELEMENT
+    Q_PROPERTY(QString matchId READ matchId WRITE setMatchId NOTIFY matchIdChanged)
+    Q_PROPERTY(QString metricId READ metricId WRITE setMetricId NOTIFY metricIdChanged)
+    /// The zone picked on both maps: the most certain flag of the shown metric when the match or
+    /// metric changes, else what the user picks; (0, 0) for none.
+    Q_PROPERTY(int selectedBand READ selectedBand NOTIFY selectionChanged)
+    Q_PROPERTY(int selectedLane READ selectedLane NOTIFY selectionChanged)
+    /// Rows of the shown match and metric in the session's match and metric lists.
+    Q_PROPERTY(int matchRow READ matchRow NOTIFY changed)
+    Q_PROPERTY(int metricRow READ metricRow NOTIFY changed)
+    Q_PROPERTY(bool hasMatch READ hasMatch NOTIFY changed)
+    Q_PROPERTY(bool hasTargets READ hasTargets NOTIFY changed)
+    Q_PROPERTY(QString matchTitle READ matchTitle NOTIFY changed)
+    Q_PROPERTY(QString metricName READ metricName NOTIFY changed)
+    Q_PROPERTY(QString metricQuestion READ metricQuestion NOTIFY changed)
+    Q_PROPERTY(QString betterText READ betterText NOTIFY changed)
+    Q_PROPERTY(QString windowText READ windowText NOTIFY changed)
+    Q_PROPERTY(QString judgedText READ judgedText NOTIFY changed)
+    Q_PROPERTY(pitchloop::desktop::ZoneMapModel* matchMap READ matchMap CONSTANT)
+    Q_PROPERTY(pitchloop::desktop::ZoneMapModel* windowMap READ windowMap CONSTANT)
+    Q_PROPERTY(pitchloop::desktop::DebriefListModel* items READ items CONSTANT)
+    Q_PROPERTY(pitchloop::desktop::PitchGeometry* geometry READ geometry CONSTANT)
+public:
+    explicit MatchDebrief(QObject* parent = nullptr);
+
+    QString matchId() const { return m_matchId; }
+    void setMatchId(const QString& id);
+    QString metricId() const { return m_metricId; }
+    void setMetricId(const QString& id);
+    int selectedBand() const { return m_selectedBand; }
+    int selectedLane() const { return m_selectedLane; }
+    Q_INVOKABLE void selectZone(int band, int lane);
+    int matchRow() const { return m_matchRow; }
+    int metricRow() const { return m_metricRow; }
+    bool hasMatch() const { return m_matchRow >= 0; }
+    bool hasTargets() const { return m_hasTargets; }
+    QString matchTitle() const { return m_matchTitle; }
+    QString metricName() const { return m_metricName; }
+    QString metricQuestion() const { return m_metricQuestion; }
+    QString betterText() const { return m_betterText; }
+    QString windowText() const { return m_windowText; }
+    QString judgedText() const { return m_judgedText; }
+    ZoneMapModel* matchMap() const { return m_matchMap; }
+    ZoneMapModel* windowMap() const { return m_windowMap; }
+    DebriefListModel* items() const { return m_items; }
+    PitchGeometry* geometry() const { return m_geometry; }
+
+signals:
+    void matchIdChanged();
+    void metricIdChanged();
+    void selectionChanged();
+    void changed();
+
+protected:
+    void refresh() override;
+
+private:
+    void clear();
+
+    QString m_matchId;
+    QString m_metricId;
+    int m_selectedBand = 0;
+    int m_selectedLane = 0;
+    QString m_selectionFor; ///< match and metric the selection was made for
+    int m_matchRow = -1;
+    int m_metricRow = -1;
+    bool m_hasTargets = false;
+    QString m_matchTitle;
+    QString m_metricName;
+    QString m_metricQuestion;
+    QString m_betterText;
+    QString m_windowText;
+    QString m_judgedText;
+    ZoneMapModel* m_matchMap;
+    ZoneMapModel* m_windowMap;
+    DebriefListModel* m_items;
+    PitchGeometry* m_geometry;
+};
+
+} // namespace pitchloop::desktop

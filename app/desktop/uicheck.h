@@ -1,0 +1,27 @@
+#pragma once
+// Headless checks of the user interface: the QML self-test (every page loads and draws without
+// a QML warning or error) and screenshots of every page.
+
+#include <QString>
+#include <QStringList>
+
+class QQuickWindow;
+
+namespace pitchloop::desktop {
+
+/// Counts warnings, criticals and fatals from any category (QML binding errors arrive as
+/// warnings), passing every message on to the previous handler.
+class WarningCounter {
+public:
+    static void install();
+    static int count();
+    static QStringList messages();
+};
+
+/// Shows every page of the main window in turn (the root's `currentPage`, `pageCount` and
+/// `pageNames` properties), waits until it is drawn, and, when `screenshotDir` is not empty,
+/// saves it there as NN-name.png. Returns the problems found (a page not drawn, a file not
+/// written), empty when none.
+QStringList visitPages(QQuickWindow* window, const QString& screenshotDir);
+
+} // namespace pitchloop::desktop

@@ -1,0 +1,120 @@
+#include "zonemapmodel.h"
+
+#include "targets.h"
+#include "zonestate.h"
+
+#include <cmath>
+
+namespace pitchloop::desktop {
+
+using namespace pitchloop::model;
+
+std::vector<ZoneCell> zoneCells(const std::vector<const ZoneStatus*>& statuses, MetricKind kind,
+                                const ScaleDomain& domain) {
+    std::vector<ZoneCell> out;
+    out.reserve(statuses.size());
+    const long minSample = defaultMinSample(kind);
+    for (const ZoneStatus* s : statuses) {
+        ZoneCell c;
+        c.band = s->band;
+        c.lane = s->lane;
+        c.hasValue = !std::isnan(s->value);
+        c.value = c.hasValue ? s->value : 0;
+        c.scaled = c.hasValue ? domain.position(s->value) : 0;
+        // Counts are per match whatever the window; shares and exposures rest on their items.
+        c.thin = c.hasValue && kind != MetricKind::Count &&
+                 s->sum.den < static_cast<double>(s->target ? s->target->minSample : minSample);
+        c.valueText = valueText(kind, s->value);
+        c.sampleText = sampleText(kind, s->sum, s->window);
+        c.intervalText = c.hasValue ? intervalText(kind, s->interval) : QString();
+        c.targetText = targetText(kind, s->target);
+        c.state = ZoneState::from(s->state);
+        c.stateText = stateText(s->state);
+        c.certaintyText = certaintyText(s->pMiss);
+        out.push_back(std::move(c));
+    }
+    return out;
+}
+
+QString wholePitchLine(const ZoneStatus& s, MetricKind kind) {
+    QStringList parts{QStringLiteral("Whole pitch %1").arg(valueText(kind, s.value)),
+                      sampleText(kind, s.sum, s.window)};
+    if (s.target) {
+        parts << QStringLiteral("target %1").arg(targetText(kind, s.target));
+        parts << stateText(s.state);
+    }
+    return parts.join(QStringLiteral(" · "));
+}
+
+ZoneMapModel::ZoneMapModel(QObject* parent) : QAbstractListModel(parent) {}
+
+void ZoneMapModel::reset(Header header, std::vector<ZoneCell> cells) {
+    beginResetModel();
+    m_header = std::move(header);
+    m_cells = std::move(cells);
+    endResetModel();
+    emit changed();
+}
+
+void ZoneMapModel::clear() { reset({}, {}); }
+
+QVariantMap ZoneMapModel::zone(int band, int lane) const {
+    for (int row = 0; row < count(); ++row) {
+        const ZoneCell& c = m_cells[static_cast<std::size_t>(row)];
+        if (c.band != band || c.lane != lane) continue;
+        QVariantMap out;
+        const QModelIndex i = index(row);
+        const auto roles = roleNames();
+        for (auto it = roles.begin(); it != roles.end(); ++it)
+            out.insert(QString::fromUtf8(it.value()), data(i, it.key()));
+        return out;
+    }
+    return {};
+}
+
+int ZoneMapModel::rowCount(const QModelIndex& parent) const {
+    return parent.isValid() ? 0 : count();
+}
+
+QVariant ZoneMapModel::data(const QModelIndex& index, int role) const {
+    if (!checkIndex(index, CheckIndexOption::IndexIsValid | CheckIndexOption::ParentIsInvalid))
+        return {};
+    const ZoneCell& c = m_cells[static_cast<std::size_t>(index.row())];
+    switch (role) {
+    case Qt::DisplayRole:
+    case ZoneNameRole: return zoneText(c.band, c.lane);
+    case BandRole: return c.band;
+    case LaneRole: return c.lane;
+    case HasValueRole: return c.hasValue;
+    case ValueRole: return c.value;
+    case ScaledRole: return c.scaled;
+    case ThinRole: return c.thin;
+    case ValueTextRole: return c.valueText;
+    case SampleTextRole: return c.sampleText;
+    case IntervalTextRole: return c.intervalText;
+    case TargetTextRole: return c.targetText;
+    case StateRole: return c.state;
+    case StateTextRole: return c.stateText;
+    case CertaintyTextRole: return c.certaintyText;
+    default: return {};
+    }
+}
+
+QHash<int, QByteArray> ZoneMapModel::roleNames() const {
+    return {{BandRole, "band"},
+            {LaneRole, "lane"},
+            {ZoneNameRole, "zoneName"},
+            {HasValueRole, "hasValue"},
+            {ValueRole, "value"},
+            {ScaledRole, "scaled"},
+            {ThinRole, "thin"},
+            {ValueTextRole, "valueText"},
+            {SampleTextRole, "sampleText"},
+            {IntervalTextRole, "intervalText"},
+            {TargetTextRole, "targetText"},
+            {StateRole, "zoneState"},
+            {StateTextRole, "stateText"},
+            {CertaintyTextRole, "certaintyText"}};
+}
+
+} // namespace pitchloop::desktop

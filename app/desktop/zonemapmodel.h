@@ -1,0 +1,111 @@
+#pragma once
+// One metric's zones in one window, for a pitch heat map: value, where it sits on the colour
+// scale, sample, interval, target and state, all as display-ready roles.
+
+#include "display.h"
+#include "status.h"
+
+#include <QAbstractListModel>
+#include <QStringList>
+#include <QVariantMap>
+#include <QtQml/qqmlregistration.h>
+
+#include <vector>
+
+namespace pitchloop::desktop {
+
+/// One zone of a heat map, ready for display.
+struct ZoneCell {
+    int band = 0;
+    int lane = 0;
+    bool hasValue = false;
+    double value = 0;
+    double scaled = 0; ///< position on the colour scale, 0..1
+    bool thin = false; ///< a share or exposure on fewer items than a target needs to be judged
+    QString valueText;
+    QString sampleText;
+    QString intervalText;
+    QString targetText;
+    int state = 0; ///< ZoneState::Value
+    QString stateText;
+    QString certaintyText;
+};
+
+/// Builds the cells of one metric in one window from statuses; `domain` places values on the
+/// colour scale. Zones come in grid order (band-major).
+std::vector<ZoneCell> zoneCells(const std::vector<const model::ZoneStatus*>& statuses,
+                                model::MetricKind kind, const ScaleDomain& domain);
+
+/// The zones of one metric in one window (the whole pitch is a property, not a row).
+class ZoneMapModel : public QAbstractListModel {
+    Q_OBJECT
+    QML_ELEMENT
+    QML_UNCREATABLE("Page controllers fill zone maps")
+    Q_PROPERTY(QString title READ title NOTIFY changed)
+    Q_PROPERTY(QString subtitle READ subtitle NOTIFY changed)
+    /// The whole pitch in one line: "Whole pitch 41.5% · n = 600 · target ≥ 40.0% · On target".
+    Q_PROPERTY(QString wholePitchText READ wholePitchText NOTIFY changed)
+    Q_PROPERTY(int wholePitchState READ wholePitchState NOTIFY changed)
+    /// Labels of the colour scale, evenly spaced from its low end to its high end.
+    Q_PROPERTY(QStringList scaleLabels READ scaleLabels NOTIFY changed)
+    Q_PROPERTY(QString levelText READ levelText NOTIFY changed)
+    Q_PROPERTY(int count READ count NOTIFY changed)
+public:
+    enum Role {
+        BandRole = Qt::UserRole + 1,
+        LaneRole,
+        ZoneNameRole,
+        HasValueRole,
+        ValueRole,
+        ScaledRole,
+        ThinRole,
+        ValueTextRole,
+        SampleTextRole,
+        IntervalTextRole,
+        TargetTextRole,
+        StateRole,
+        StateTextRole,
+        CertaintyTextRole,
+    };
+    Q_ENUM(Role)
+
+    explicit ZoneMapModel(QObject* parent = nullptr);
+
+    struct Header {
+        QString title;
+        QString subtitle;
+        QString wholePitchText;
+        int wholePitchState = 0;
+        QStringList scaleLabels;
+        QString levelText;
+    };
+    void reset(Header header, std::vector<ZoneCell> cells);
+    void clear();
+
+    QString title() const { return m_header.title; }
+    QString subtitle() const { return m_header.subtitle; }
+    QString wholePitchText() const { return m_header.wholePitchText; }
+    int wholePitchState() const { return m_header.wholePitchState; }
+    QStringList scaleLabels() const { return m_header.scaleLabels; }
+    QString levelText() const { return m_header.levelText; }
+    int count() const { return static_cast<int>(m_cells.size()); }
+
+    /// The roles of one zone by name (empty when the map has no such zone).
+    Q_INVOKABLE QVariantMap zone(int band, int lane) const;
+
+    int rowCount(const QModelIndex& parent = {}) const override;
+    QVariant data(const QModelIndex& index, int role) const override;
+    QHash<int, QByteArray> roleNames() const override;
+
+signals:
+    void changed();
+
+private:
+    Header m_header;
+    std::vector<ZoneCell> m_cells;
+};
+
+/// "Whole pitch 41.5% · n = 600 · target ≥ 40.0% · On target".
+QString wholePitchLine(const model::ZoneStatus& s, model::MetricKind kind);
+
+} // namespace pitchloop::desktop

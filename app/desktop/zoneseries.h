@@ -1,0 +1,136 @@
+#pragma once
+// One zone's trend for one metric over a season (the zone page): each match's value, the judged
+// window's value and interval, the EWMA and the target in force, match by match.
+
+#include "sessionclient.h"
+
+#include <QString>
+#include <QtQml/qqmlregistration.h>
+
+namespace pitchloop::desktop {
+
+class PitchGeometry;
+class SeriesModel;
+class ZoneMapModel;
+
+/// Inputs: metricId, band and lane (0, 0: the whole pitch), and
+/// matchId (empty: the latest match), whose season is drawn and whose judged window the
+/// summary and the zone picker show. Until a metric is chosen, the page opens on the zone of
+/// the chosen match's most certain flag (else the first metric's whole pitch).
+class ZoneSeries : public pitchloop::desktop::SessionClient {
+    Q_OBJECT
+    Q_MOC_INCLUDE("pitchgeometry.h")
+    Q_MOC_INCLUDE("seriesmodel.h")
+    Q_MOC_INCLUDE("zonemapmodel.h")
+    QML_ELEMENT
+    Q_PROPERTY(QString metricId READ metricId WRITE setMetricId NOTIFY selectionChanged)
+    Q_PROPERTY(int band READ band WRITE setBand NOTIFY selectionChanged)
+    Q_PROPERTY(int lane READ lane WRITE setLane NOTIFY selectionChanged)
+    Q_PROPERTY(QString matchId READ matchId WRITE setMatchId NOTIFY selectionChanged)
+    Q_PROPERTY(int metricRow READ metricRow NOTIFY changed)
+    Q_PROPERTY(bool hasSeries READ hasSeries NOTIFY changed)
+    Q_PROPERTY(QString zoneText READ zoneText NOTIFY changed)
+    Q_PROPERTY(QString metricName READ metricName NOTIFY changed)
+    Q_PROPERTY(QString metricQuestion READ metricQuestion NOTIFY changed)
+    Q_PROPERTY(QString betterText READ betterText NOTIFY changed)
+    Q_PROPERTY(QString seasonText READ seasonText NOTIFY changed)
+    Q_PROPERTY(QString windowText READ windowText NOTIFY changed)
+    Q_PROPERTY(QString ewmaText READ ewmaText NOTIFY changed)
+    Q_PROPERTY(QString levelText READ levelText NOTIFY changed)
+    /// When a zone is flagged, in one sentence from the club's flag settings.
+    Q_PROPERTY(QString ruleText READ ruleText NOTIFY changed)
+    /// Row of `matchId` in the series (the summary's match).
+    Q_PROPERTY(int focalRow READ focalRow NOTIFY changed)
+    Q_PROPERTY(QString summaryTitle READ summaryTitle NOTIFY changed)
+    Q_PROPERTY(QString summaryValue READ summaryValue NOTIFY changed)
+    Q_PROPERTY(QString summaryDetail READ summaryDetail NOTIFY changed)
+    Q_PROPERTY(QString summaryTarget READ summaryTarget NOTIFY changed)
+    Q_PROPERTY(int summaryState READ summaryState NOTIFY changed)
+    Q_PROPERTY(QString summaryStateText READ summaryStateText NOTIFY changed)
+    Q_PROPERTY(QString summaryCertainty READ summaryCertainty NOTIFY changed)
+    /// "This match alone: 42.0% · n = 143" and "EWMA, λ 0.30: 41.8%" at the chosen match.
+    Q_PROPERTY(QString summaryMatchText READ summaryMatchText NOTIFY changed)
+    Q_PROPERTY(QString summaryEwmaText READ summaryEwmaText NOTIFY changed)
+    Q_PROPERTY(pitchloop::desktop::SeriesModel* series READ series CONSTANT)
+    Q_PROPERTY(pitchloop::desktop::ZoneMapModel* map READ map CONSTANT)
+    Q_PROPERTY(pitchloop::desktop::PitchGeometry* geometry READ geometry CONSTANT)
+public:
+    explicit ZoneSeries(QObject* parent = nullptr);
+
+    QString metricId() const { return m_metricId; }
+    void setMetricId(const QString& id);
+    int band() const { return m_band; }
+    void setBand(int band);
+    int lane() const { return m_lane; }
+    void setLane(int lane);
+    QString matchId() const { return m_matchId; }
+    void setMatchId(const QString& id);
+    /// Sets every input at once and recomputes once.
+    Q_INVOKABLE void select(const QString& metricId, int band, int lane, const QString& matchId = {});
+
+    int metricRow() const { return m_metricRow; }
+    bool hasSeries() const { return m_hasSeries; }
+    QString zoneText() const { return m_zoneText; }
+    QString metricName() const { return m_metricName; }
+    QString metricQuestion() const { return m_metricQuestion; }
+    QString betterText() const { return m_betterText; }
+    QString seasonText() const { return m_seasonText; }
+    QString windowText() const { return m_windowText; }
+    QString ewmaText() const { return m_ewmaText; }
+    QString levelText() const { return m_levelText; }
+    QString ruleText() const { return m_ruleText; }
+    int focalRow() const { return m_focalRow; }
+    QString summaryTitle() const { return m_summaryTitle; }
+    QString summaryValue() const { return m_summaryValue; }
+    QString summaryDetail() const { return m_summaryDetail; }
+    QString summaryTarget() const { return m_summaryTarget; }
+    int summaryState() const { return m_summaryState; }
+    QString summaryStateText() const { return m_summaryStateText; }
+    QString summaryCertainty() const { return m_summaryCertainty; }
+    QString summaryMatchText() const { return m_summaryMatchText; }
+    QString summaryEwmaText() const { return m_summaryEwmaText; }
+    SeriesModel* series() const { return m_series; }
+    ZoneMapModel* map() const { return m_map; }
+    PitchGeometry* geometry() const { return m_geometry; }
+
+signals:
+    void selectionChanged();
+    void changed();
+
+protected:
+    void refresh() override;
+
+private:
+    void clear();
+
+    QString m_metricId;
+    int m_band = 0;
+    int m_lane = 0;
+    QString m_matchId;
+    int m_metricRow = -1;
+    bool m_hasSeries = false;
+    QString m_zoneText;
+    QString m_metricName;
+    QString m_metricQuestion;
+    QString m_betterText;
+    QString m_seasonText;
+    QString m_windowText;
+    QString m_ewmaText;
+    QString m_levelText;
+    QString m_ruleText;
+    int m_focalRow = -1;
+    QString m_summaryTitle;
+    QString m_summaryValue;
+    QString m_summaryDetail;
+    QString m_summaryTarget;
+    int m_summaryState = 0;
+    QString m_summaryStateText;
+    QString m_summaryCertainty;
+    QString m_summaryMatchText;
+    QString m_summaryEwmaText;
+    SeriesModel* m_series;
+    ZoneMapModel* m_map;
+    PitchGeometry* m_geometry;
+};
+
+} // namespace pitchloop::desktop

@@ -1,0 +1,398 @@
+#include "sessions.h"
+
+#include "repository.h"
+
+#include <SQLiteCpp/Database.h>
+#include <SQLiteCpp/Statement.h>
+#include <SQLiteCpp/Transaction.h>
+#include <map>
+#include <set>
+
+namespace pitchloop::model {
+
+namespace {
+
+template <typename F> auto guarded(const char* what, F&& f) -> decltype(f()) {
+    try {
+        return f();
+    } catch (const SQLite::Exception& e) {
+        throw StorageError(std::string(what) + ": " + e.what());
+    }
+}
+
+const char* kCapsKey = "microcycle.caps";
+
+std::optional<std::int64_t> seasonId(SQLite::Database& db, const std::string& squad,
+                                     const std::string& season) {
+    SQLite::Statement q(db, "SELECT se.id FROM season se JOIN squad sq ON sq.id = se.squad_id "
+                            "WHERE sq.name = ? AND se.name = ?");
+    q.bind(1, squad);
+    q.bind(2, season);
+    if (!q.executeStep()) return std::nullopt;
+    return q.getColumn(0).getInt64();
+}
+
+int linkUnlinked(SQLite::Database& db) {
+    return db.exec("UPDATE fixture SET match_id = (SELECT min(m.id) FROM match m WHERE "
+                   "m.season_id = fixture.season_id AND m.date = fixture.date) "
+                   "WHERE match_id IS NULL AND EXISTS (SELECT 1 FROM match m WHERE "
+                   "m.season_id = fixture.season_id AND m.date = fixture.date)");
+}
+
+std::optional<BlockRole> roleFromString(const std::string& s) {
+    for (BlockRole r : {BlockRole::WarmUp, BlockRole::Main, BlockRole::CoolDown})
+        if (toString(r) == s) return r;
+    return std::nullopt;
+}
+
+} // namespace
+
+// Fixtures ---------------------------------------------------------------------------------
+
+FixtureImport FixtureStore::importFixtures(const std::string& squad,
+                                           const std::vector<Fixture>& fixtures,
+                                           const std::string& source) {
+    FixtureImport r;
+    std::map<std::string, std::size_t> byDate;
+    for (std::size_t i = 0; i < fixtures.size(); ++i) {
+        const std::string place = "fixtures[" + std::to_string(i) + "]";
+        const Problems p = validateFixture(fixtures[i], source, place);
+        r.errors.insert(r.errors.end(), p.begin(), p.end());
+        if (auto [it, fresh] = byDate.emplace(fixtures[i].date, i); !fresh && p.empty())
+            r.errors.push_back({source, place, "date",
+                                "a second fixture on " + fixtures[i].date +
+                                    " (the first is "
+                                    "fixtures[" +
+                                    std::to_string(it->second) + "])"});
+    }
+    if (squad.empty()) r.errors.push_back({source, "", "squad", "missing"});
+    if (!r.errors.empty()) return r;
+
+    std::set<std::string> seasons;
+    for (const Fixture& f : fixtures)
+        seasons.insert(seasonOf(f.date));
+    for (const auto& s : seasons)
+        m_repo.ensureSeason(squad, s);
+    SQLite::Database& db = m_repo.database();
+    guarded("cannot save fixtures", [&] {
+        SQLite::Transaction tx(db);
+        SQLite::Statement find(db, "SELECT id, kickoff, opponent, venue, competition FROM fixture "
+                                   "WHERE season_id = ? AND date = ?");
+        SQLite::Statement update(db, "UPDATE fixture SET kickoff = ?, opponent = ?, venue = ?, "
+                                     "competition = ? WHERE id = ?");
+        SQLite::Statement insert(db, "INSERT INTO fixture(season_id, date, kickoff, opponent, "
+                                     "venue, competition) VALUES (?, ?, ?, ?, ?, ?)");
+        for (const Fixture& f : fixtures) {
+            const std::int64_t season = *seasonId(db, squad, seasonOf(f.date));
+            find.reset();
+            find.bind(1, season);
+            find.bind(2, f.date);
+            if (find.executeStep()) {
+                const std::int64_t id = find.getColumn(0).getInt64();
+                if (find.getColumn(1).getString() == f.kickoff &&
+                    find.getColumn(2).getString() == f.opponent &&
+                    find.getColumn(3).getString() == f.venue &&
+                    find.getColumn(4).getString() == f.competition) {
+                    ++r.unchanged;
+                    continue;
+                }
+                update.reset();
+                update.bind(1, f.kickoff);
+                update.bind(2, f.opponent);
+                update.bind(3, f.venue);
+                update.bind(4, f.competition);
+                update.bind(5, id);
+                update.exec();
+                ++r.updated;
+            } else {
+                insert.reset();
+                insert.bind(1, season);
+                insert.bind(2, f.date);
+                insert.bind(3, f.kickoff);
+                insert.bind(4, f.opponent);
+                insert.bind(5, f.venue);
+                insert.bind(6, f.competition);
+                insert.exec();
+                ++r.added;
+            }
+        }
+        r.linked = linkUnlinked(db);
+        tx.commit();
+        return 0;
+    });
+    return r;
+}
+
+bool FixtureStore::remove(const std::string& squad, const std::string& date) {
+    if (!dayNumber(date)) return false;
+    SQLite::Database& db = m_repo.database();
+    return guarded("cannot remove fixture", [&] {
+        SQLite::Statement q(db, "DELETE FROM fixture WHERE date = ? AND season_id IN (SELECT "
+                                "se.id FROM season se JOIN squad sq ON sq.id = se.squad_id "
+                                "WHERE sq.name = ?)");
+        q.bind(1, date);
+        q.bind(2, squad);
+        return q.exec() > 0;
+    });
+}
+
+std::vector<Fixture> FixtureStore::list(const std::string& squad, const std::string& season) const {
+    SQLite::Database& db = m_repo.database();
+    return guarded("cannot read fixtures", [&] {
+        std::vector<Fixture> out;
+        // A match stored since the last linkMatches() shows too (same season and date).
+        SQLite::Statement q(db, "SELECT f.date, f.kickoff, f.opponent, f.venue, f.competition, "
+                                "m.code FROM fixture f JOIN season se ON se.id = f.season_id "
+                                "JOIN squad sq ON sq.id = se.squad_id LEFT JOIN match m ON "
+                                "m.id = coalesce(f.match_id, (SELECT min(x.id) FROM match x "
+                                "WHERE x.season_id = f.season_id AND x.date = f.date)) "
+                                "WHERE sq.name = ? AND (? = '' OR se.name = ?) ORDER BY f.date");
+        q.bind(1, squad);
+        q.bind(2, season);
+        q.bind(3, season);
+        while (q.executeStep()) {
+            Fixture f;
+            f.date = q.getColumn(0).getString();
+            f.kickoff = q.getColumn(1).getString();
+            f.opponent = q.getColumn(2).getString();
+            f.venue = q.getColumn(3).getString();
+            f.competition = q.getColumn(4).getString();
+            if (!q.getColumn(5).isNull()) f.matchId = q.getColumn(5).getString();
+            out.push_back(std::move(f));
+        }
+        return out;
+    });
+}
+
+int FixtureStore::linkMatches() {
+    SQLite::Database& db = m_repo.database();
+    return guarded("cannot link fixtures", [&] {
+        SQLite::Transaction tx(db);
+        const int n = linkUnlinked(db);
+        tx.commit();
+        return n;
+    });
+}
+
+IntensityCaps FixtureStore::caps() const {
+    SQLite::Database& db = m_repo.database();
+    return guarded("cannot read settings", [&] {
+        SQLite::Statement q(db, "SELECT value FROM setting WHERE key = ?");
+        q.bind(1, kCapsKey);
+        if (!q.executeStep()) return IntensityCaps{};
+        // A damaged value gives the defaults (parseCaps returns them with its problems).
+        return parseCaps(q.getColumn(0).getString(), kCapsKey).caps;
+    });
+}
+
+void FixtureStore::saveCaps(const IntensityCaps& caps) {
+    SQLite::Database& db = m_repo.database();
+    guarded("cannot save settings", [&] {
+        SQLite::Transaction tx(db);
+        SQLite::Statement q(db, "INSERT INTO setting(key, value) VALUES (?, ?) "
+                                "ON CONFLICT(key) DO UPDATE SET value = excluded.value");
+        q.bind(1, kCapsKey);
+        q.bind(2, capsToJson(caps));
+        q.exec();
+        tx.commit();
+        return 0;
+    });
+}
+
+// Sessions ---------------------------------------------------------------------------------
+
+SessionSave SessionStore::save(const std::string& squad, const Plan& plan, const std::string& by,
+                               const std::string& now) {
+    if (!dayNumber(plan.date))
+        throw StorageError("cannot save session: '" + plan.date + "' is not a date");
+    const std::string season = seasonOf(plan.date);
+    m_repo.ensureSeason(squad, season);
+    SQLite::Database& db = m_repo.database();
+    return guarded("cannot save session", [&] {
+        SessionSave out;
+        SQLite::Transaction tx(db);
+        const std::int64_t seasonRow = *seasonId(db, squad, season);
+        {
+            SQLite::Statement del(db, "DELETE FROM session WHERE season_id = ? AND date = ?");
+            del.bind(1, seasonRow);
+            del.bind(2, plan.date);
+            out.replaced = del.exec() > 0;
+        }
+        SQLite::Statement ins(db, "INSERT INTO session(season_id, date, minutes, players, "
+                                  "day_label, intensity_cap, objective, saved_by, saved_at) "
+                                  "VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?)");
+        ins.bind(1, seasonRow);
+        ins.bind(2, plan.date);
+        ins.bind(3, plan.sessionMinutes);
+        ins.bind(4, plan.playersAvailable);
+        ins.bind(5, plan.day.label);
+        ins.bind(6, plan.cap);
+        ins.bind(7, static_cast<std::int64_t>(plan.objective));
+        ins.bind(8, by);
+        ins.bind(9, now);
+        ins.exec();
+        out.id = db.getLastInsertRowid();
+        SQLite::Statement block(db, "INSERT INTO session_block(session_id, position, role, "
+                                    "drill_id, minutes, focus_id, pinned, why) "
+                                    "VALUES (?, ?, ?, ?, ?, ?, ?, ?)");
+        int position = 0;
+        for (const PlanBlock& b : plan.blocks) {
+            block.reset();
+            block.clearBindings();
+            block.bind(1, out.id);
+            block.bind(2, position++);
+            block.bind(3, std::string(toString(b.role)));
+            block.bind(4, b.drillId);
+            block.bind(5, b.minutes);
+            if (b.focus && *b.focus < plan.focusMinutes.size() &&
+                plan.focusMinutes[*b.focus].focusId != 0)
+                block.bind(6, plan.focusMinutes[*b.focus].focusId);
+            else
+                block.bind(6);
+            block.bind(7, b.pinned ? 1 : 0);
+            block.bind(8, b.why);
+            block.exec();
+        }
+        SQLite::Statement focus(db, "INSERT INTO session_focus(session_id, focus_id, minutes) "
+                                    "VALUES (?, ?, ?)");
+        for (const FocusMinutes& fm : plan.focusMinutes) {
+            if (fm.focusId == 0 || fm.minutes == 0) continue;
+            focus.reset();
+            focus.bind(1, out.id);
+            focus.bind(2, fm.focusId);
+            focus.bind(3, fm.minutes);
+            focus.exec();
+        }
+        tx.commit();
+        return out;
+    });
+}
+
+std::vector<SavedSession> SessionStore::list(const std::string& squad, const std::string& from,
+                                             const std::string& to) const {
+    SQLite::Database& db = m_repo.database();
+    return guarded("cannot read sessions", [&] {
+        std::vector<SavedSession> out;
+        SQLite::Statement q(db, "SELECT s.id, sq.name, se.name, s.date, s.minutes, s.players, "
+                                "s.day_label, s.intensity_cap, s.objective, s.saved_by, "
+                                "s.saved_at FROM session s JOIN season se ON se.id = s.season_id "
+                                "JOIN squad sq ON sq.id = se.squad_id WHERE sq.name = ? AND "
+                                "(? = '' OR s.date >= ?) AND (? = '' OR s.date <= ?) "
+                                "ORDER BY s.date");
+        q.bind(1, squad);
+        q.bind(2, from);
+        q.bind(3, from);
+        q.bind(4, to);
+        q.bind(5, to);
+        while (q.executeStep()) {
+            SavedSession s;
+            s.id = q.getColumn(0).getInt64();
+            s.squad = q.getColumn(1).getString();
+            s.season = q.getColumn(2).getString();
+            s.date = q.getColumn(3).getString();
+            s.minutes = q.getColumn(4).getInt();
+            s.players = q.getColumn(5).getInt();
+            s.dayLabel = q.getColumn(6).getString();
+            s.cap = q.getColumn(7).getInt();
+            s.objective = static_cast<long>(q.getColumn(8).getInt64());
+            s.savedBy = q.getColumn(9).getString();
+            s.savedAt = q.getColumn(10).getString();
+            out.push_back(std::move(s));
+        }
+        SQLite::Statement b(db, "SELECT role, drill_id, minutes, focus_id, pinned, why FROM "
+                                "session_block WHERE session_id = ? ORDER BY position");
+        SQLite::Statement f(db, "SELECT focus_id, minutes FROM session_focus WHERE session_id = ? "
+                                "ORDER BY focus_id");
+        for (SavedSession& s : out) {
+            b.reset();
+            b.bind(1, s.id);
+            while (b.executeStep()) {
+                SavedBlock block;
+                const std::string role = b.getColumn(0).getString();
+                const auto r = roleFromString(role);
+                if (!r) throw StorageError("stored session block has unknown role '" + role + "'");
+                block.role = *r;
+                block.drillId = b.getColumn(1).getInt64();
+                block.minutes = b.getColumn(2).getInt();
+                if (!b.getColumn(3).isNull()) block.focusId = b.getColumn(3).getInt64();
+                block.pinned = b.getColumn(4).getInt() != 0;
+                block.why = b.getColumn(5).getString();
+                s.blocks.push_back(std::move(block));
+            }
+            f.reset();
+            f.bind(1, s.id);
+            while (f.executeStep())
+                s.focusMinutes.emplace_back(f.getColumn(0).getInt64(), f.getColumn(1).getInt());
+        }
+        return out;
+    });
+}
+
+std::optional<SavedSession> SessionStore::get(const std::string& squad,
+                                              const std::string& date) const {
+    auto sessions = list(squad, date, date);
+    if (sessions.empty()) return std::nullopt;
+    return std::move(sessions.front());
+}
+
+bool SessionStore::remove(const std::string& squad, const std::string& date) {
+    SQLite::Database& db = m_repo.database();
+    return guarded("cannot remove session", [&] {
+        SQLite::Statement q(db, "DELETE FROM session WHERE date = ? AND season_id IN (SELECT "
+                                "se.id FROM season se JOIN squad sq ON sq.id = se.squad_id "
+                                "WHERE sq.name = ?)");
+        q.bind(1, date);
+        q.bind(2, squad);
+        return q.exec() > 0;
+    });
+}
+
+std::vector<std::int64_t> SessionStore::drillsOn(const std::string& squad,
+                                                 const std::string& date) const {
+    std::vector<std::int64_t> out;
+    if (auto s = get(squad, date))
+        for (const SavedBlock& b : s->blocks)
+            out.push_back(b.drillId);
+    return out;
+}
+
+int SessionStore::minutesOnDrills(const std::string& squad, const std::string& from,
+                                  const std::string& to,
+                                  const std::vector<std::int64_t>& drills) const {
+    if (drills.empty()) return 0;
+    std::string in;
+    for (std::size_t i = 0; i < drills.size(); ++i)
+        in += i ? ", ?" : "?";
+    SQLite::Database& db = m_repo.database();
+    return guarded("cannot read sessions", [&] {
+        SQLite::Statement q(db, "SELECT coalesce(sum(b.minutes), 0) FROM session_block b JOIN "
+                                "session s ON s.id = b.session_id JOIN season se ON se.id = "
+                                "s.season_id JOIN squad sq ON sq.id = se.squad_id WHERE "
+                                "sq.name = ? AND s.date >= ? AND s.date <= ? AND b.drill_id IN (" +
+                                    in + ")");
+        q.bind(1, squad);
+        q.bind(2, from);
+        q.bind(3, to);
+        for (std::size_t i = 0; i < drills.size(); ++i)
+            q.bind(static_cast<int>(i) + 4, drills[i]);
+        q.executeStep();
+        return q.getColumn(0).getInt();
+    });
+}
+
+int SessionStore::minutesOnFocus(std::int64_t focusId, const std::string& from,
+                                 const std::string& to) const {
+    SQLite::Database& db = m_repo.database();
+    return guarded("cannot read sessions", [&] {
+        SQLite::Statement q(db, "SELECT coalesce(sum(f.minutes), 0) FROM session_focus f JOIN "
+                                "session s ON s.id = f.session_id WHERE f.focus_id = ? AND "
+                                "s.date >= ? AND s.date <= ?");
+        q.bind(1, focusId);
+        q.bind(2, from);
+        q.bind(3, to);
+        q.executeStep();
+        return q.getColumn(0).getInt();
+    });
+}
+
+} // namespace pitchloop::model

@@ -1,0 +1,113 @@
+#pragma once
+// Storage of fixtures and planned training sessions in the club file (tables fixture, session,
+// session_block, session_focus; docs/planner.md). Storage faults throw StorageError.
+
+#include "fixtures.h"
+#include "planner.h"
+#include "problem.h"
+
+#include <cstdint>
+#include <optional>
+#include <string>
+#include <vector>
+
+namespace pitchloop::model {
+
+class ClubRepository;
+
+/// What an import of fixtures did. With any problem nothing was written.
+struct FixtureImport {
+    int added = 0;
+    int updated = 0; ///< a fixture on the same date whose kick-off, opponent, ... changed
+    int unchanged = 0;
+    int linked = 0; ///< fixtures newly linked to a stored match of the same date
+    Problems errors;
+};
+
+/// A squad's fixtures, stored per season (one a date), linked to the match played that day.
+class FixtureStore {
+  public:
+    explicit FixtureStore(ClubRepository& repo) : m_repo(repo) {}
+
+    /// Adds the fixtures to the squad's seasons (each by its date, July–June), replacing the
+    /// fixture of the same date, in one transaction; validated first (problems name `source`).
+    FixtureImport importFixtures(const std::string& squad, const std::vector<Fixture>& fixtures,
+                                 const std::string& source = "fixtures");
+    /// Removes the squad's fixture on `date`; false when there is none.
+    bool remove(const std::string& squad, const std::string& date);
+    /// The squad's fixtures of one season (every season when empty), by date, each with the
+    /// stored match of its date (linked or not yet).
+    std::vector<Fixture> list(const std::string& squad, const std::string& season = "") const;
+    /// Links every unlinked fixture to the squad's stored match of the same date; returns how
+    /// many were linked. Ingest calls it after storing a match (and imports call it too).
+    int linkMatches();
+
+    /// The club's intensity caps (setting `microcycle.caps`; the defaults while unset).
+    IntensityCaps caps() const;
+    void saveCaps(const IntensityCaps& caps);
+
+  private:
+    ClubRepository& m_repo;
+};
+
+/// One stored block of a session.
+struct SavedBlock {
+    BlockRole role = BlockRole::Main;
+    std::int64_t drillId = 0;
+    int minutes = 0;
+    std::optional<std::int64_t> focusId;
+    bool pinned = false;
+    std::string why;
+};
+
+struct SavedSession {
+    std::int64_t id = 0;
+    std::string squad;
+    std::string season;
+    std::string date;
+    int minutes = 0; ///< the session's length as planned
+    int players = 0;
+    std::string dayLabel;
+    int cap = 0;
+    long objective = 0;
+    std::string savedBy;
+    std::string savedAt;
+    std::vector<SavedBlock> blocks;
+    std::vector<std::pair<std::int64_t, int>> focusMinutes; ///< (focus id, minutes), by id
+};
+
+struct SessionSave {
+    std::int64_t id = 0;
+    bool replaced = false; ///< a session of the same date was replaced
+};
+
+/// Planned sessions: one a squad and date (saving again replaces it).
+class SessionStore {
+  public:
+    explicit SessionStore(ClubRepository& repo) : m_repo(repo) {}
+
+    /// Saves a plan for `squad` in one transaction (blocks and minutes per stored focus).
+    /// Throws StorageError when a block's drill or focus is not in the club file.
+    SessionSave save(const std::string& squad, const Plan& plan, const std::string& by,
+                     const std::string& now);
+    std::optional<SavedSession> get(const std::string& squad, const std::string& date) const;
+    /// The squad's sessions dated `from`–`to` (inclusive; empty: open-ended), by date.
+    std::vector<SavedSession> list(const std::string& squad, const std::string& from = "",
+                                   const std::string& to = "") const;
+    bool remove(const std::string& squad, const std::string& date);
+    /// Drills of the squad's session on `date` (empty when there was none): the planner's
+    /// "yesterday" when asked for the day before.
+    std::vector<std::int64_t> drillsOn(const std::string& squad, const std::string& date) const;
+
+    /// Minutes of saved sessions of `squad` dated `from`–`to` (inclusive) spent in blocks whose
+    /// drill is one of `drills`: the training time a focus review reports.
+    int minutesOnDrills(const std::string& squad, const std::string& from, const std::string& to,
+                        const std::vector<std::int64_t>& drills) const;
+    /// Minutes saved sessions dated `from`–`to` gave to focus `focusId` (any drill working on it).
+    int minutesOnFocus(std::int64_t focusId, const std::string& from, const std::string& to) const;
+
+  private:
+    ClubRepository& m_repo;
+};
+
+} // namespace pitchloop::model

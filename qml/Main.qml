@@ -1,0 +1,166 @@
+pragma ComponentBehavior: Bound
+import QtQuick
+import QtQuick.Controls
+import QtQuick.Layouts
+import Qt.labs.settings
+import Pitchloop
+
+// The main window: a side bar of screens and the current screen. Navigation only; the screens
+// get the club session from here and ask for each other through signals.
+ApplicationWindow {
+    id: root
+
+    required property ClubSession session
+    property int currentPage: 0
+    readonly property var pages: [
+        { name: "season", title: qsTr("Season"), shortcut: "Ctrl+1" },
+        { name: "debrief", title: qsTr("Match debrief"), shortcut: "Ctrl+2" },
+        { name: "zone", title: qsTr("Zone trend"), shortcut: "Ctrl+3" }
+    ]
+    readonly property int pageCount: pages.length
+    readonly property var pageNames: pages.map(page => page.name)
+
+    function openDebrief(matchId: string) {
+        debriefPage.showMatch(matchId)
+        currentPage = 1
+    }
+
+    function openZone(metricId: string, band: int, lane: int, matchId: string) {
+        zonePage.show(metricId, band, lane, matchId)
+        currentPage = 2
+    }
+
+    width: 1280
+    height: 800
+    minimumWidth: 1100
+    minimumHeight: 720
+    visible: true
+    title: session.clubName.length > 0 ? qsTr("%1 — Pitchloop").arg(session.clubName) : "Pitchloop"
+    color: Theme.window
+    font.family: Theme.fontFamily
+    font.pixelSize: Theme.fontBody
+
+    Settings {
+        category: "window"
+        property alias width: root.width
+        property alias height: root.height
+        property alias currentPage: root.currentPage
+    }
+
+    Repeater {
+        model: root.pages
+        delegate: Item {
+            id: binding
+            required property var modelData
+            required property int index
+            Shortcut {
+                sequence: binding.modelData.shortcut
+                context: Qt.ApplicationShortcut
+                onActivated: root.currentPage = binding.index
+            }
+        }
+    }
+
+    RowLayout {
+        anchors.fill: parent
+        spacing: 0
+
+        Rectangle {
+            Layout.preferredWidth: Theme.sidebarWidth
+            Layout.fillHeight: true
+            color: Theme.sidebar
+
+            ColumnLayout {
+                anchors.fill: parent
+                anchors.topMargin: Theme.margin
+                anchors.bottomMargin: Theme.gapLarge
+                spacing: 2
+
+                Label {
+                    Layout.leftMargin: Theme.gapLarge
+                    text: "Pitchloop"
+                    color: "#ffffff"
+                    font.pixelSize: Theme.fontTitle + 2
+                    font.bold: true
+                }
+                Label {
+                    Layout.leftMargin: Theme.gapLarge
+                    Layout.bottomMargin: Theme.margin
+                    Layout.maximumWidth: Theme.sidebarWidth - 2 * Theme.gapLarge
+                    text: root.session.clubName
+                    color: Theme.sidebarText
+                    elide: Text.ElideRight
+                }
+
+                Repeater {
+                    model: root.pages
+                    delegate: NavButton {
+                        required property var modelData
+                        required property int index
+                        Layout.fillWidth: true
+                        Layout.leftMargin: Theme.gap
+                        Layout.rightMargin: Theme.gap
+                        title: modelData.title
+                        shortcutText: modelData.shortcut
+                        current: root.currentPage === index
+                        onClicked: root.currentPage = index
+                    }
+                }
+
+                Item { Layout.fillHeight: true }
+
+                Label {
+                    visible: root.session.demo
+                    Layout.leftMargin: Theme.gapLarge
+                    Layout.rightMargin: Theme.gapLarge
+                    Layout.fillWidth: true
+                    text: qsTr("Demo club: invented data. Your own club file goes in your data folder, or open one with --db.")
+                    wrapMode: Text.WordWrap
+                    color: Theme.watch
+                    font.pixelSize: Theme.fontSmall
+                }
+                Label {
+                    visible: root.session.errorString.length > 0
+                    Layout.leftMargin: Theme.gapLarge
+                    Layout.rightMargin: Theme.gapLarge
+                    Layout.fillWidth: true
+                    text: root.session.errorString
+                    wrapMode: Text.WordWrap
+                    color: "#ffb68a"
+                    font.pixelSize: Theme.fontSmall
+                }
+                Label {
+                    Layout.leftMargin: Theme.gapLarge
+                    Layout.rightMargin: Theme.gapLarge
+                    Layout.topMargin: Theme.gap
+                    Layout.fillWidth: true
+                    text: root.session.clubFile
+                    elide: Text.ElideMiddle
+                    color: Theme.sidebarMuted
+                    font.pixelSize: Theme.fontSmall
+                }
+            }
+        }
+
+        StackLayout {
+            Layout.fillWidth: true
+            Layout.fillHeight: true
+            currentIndex: root.currentPage
+
+            HomePage {
+                session: root.session
+                onOpenDebrief: matchId => root.openDebrief(matchId)
+                onOpenZone: (metricId, band, lane, matchId) => root.openZone(metricId, band, lane, matchId)
+            }
+            DebriefPage {
+                id: debriefPage
+                session: root.session
+                onOpenZone: (metricId, band, lane, matchId) => root.openZone(metricId, band, lane, matchId)
+            }
+            ZonePage {
+                id: zonePage
+                session: root.session
+            }
+        }
+    }
+}

@@ -1,0 +1,115 @@
+import QtQuick
+import QtQuick.Controls
+import QtQuick.Layouts
+import Pitchloop
+
+// One debrief line: state marker, metric and zone, value with its interval and sample, the
+// target, how sure the flag is, and what changed since the previous match.
+ItemDelegate {
+    id: root
+
+    required property string metricId
+    required property string metricName
+    required property int band
+    required property int lane
+    required property string zoneText
+    required property string valueText
+    required property string intervalText
+    required property string sampleText
+    required property string targetText
+    required property string certaintyText
+    required property int zoneState
+    required property string stateText
+    required property bool isNew
+    required property string changeText
+    required property string section
+    required property bool firstInSection
+    property bool selected: false
+
+    height: firstInSection ? 76 : 46
+    padding: 0
+    topPadding: firstInSection ? 30 : 0
+    topInset: topPadding
+    leftPadding: Theme.gap
+    rightPadding: Theme.gap
+
+    // The section's title above its first line.
+    Label {
+        visible: root.firstInSection
+        x: root.leftPadding
+        y: 10
+        text: root.section
+        font.bold: true
+        color: Theme.text
+    }
+
+    background: Rectangle {
+        color: root.selected ? Theme.accentSoft : (root.hovered ? Theme.surfaceAlt : "transparent")
+        Rectangle {
+            anchors.bottom: parent.bottom
+            width: parent.width
+            height: 1
+            color: Theme.border
+            opacity: 0.6
+        }
+    }
+
+    contentItem: RowLayout {
+        spacing: Theme.gap + 4
+        StateMarker {
+            // Hidden while its row is only partly in view: the software renderer (headless
+            // runs) does not clip shapes to the list.
+            readonly property Flickable listView: root.ListView.view
+            readonly property real rowTop: root.y + root.topPadding + (root.availableHeight - height) / 2
+            visible: !listView || (rowTop >= listView.contentY && rowTop + height <= listView.contentY + listView.height)
+            zoneState: root.zoneState
+            size: 15
+        }
+        Label {
+            Layout.preferredWidth: 92
+            text: root.stateText
+            color: Theme.text
+            font.bold: root.zoneState === ZoneState.Slipped
+        }
+        ColumnLayout {
+            Layout.fillWidth: true
+            Layout.minimumWidth: 180
+            spacing: 0
+            Label {
+                Layout.fillWidth: true
+                text: root.metricName
+                color: Theme.text
+                elide: Text.ElideRight
+            }
+            Label {
+                Layout.fillWidth: true
+                text: root.zoneText
+                color: Theme.textMuted
+                font.pixelSize: Theme.fontSmall
+            }
+        }
+        Label {
+            Layout.preferredWidth: 230
+            text: root.valueText + "  (" + root.intervalText + ")  " + root.sampleText
+            color: Theme.text
+            elide: Text.ElideRight
+        }
+        Label {
+            Layout.preferredWidth: 96
+            text: root.targetText.length > 0 ? qsTr("target %1").arg(root.targetText) : ""
+            color: Theme.textMuted
+        }
+        Label {
+            Layout.preferredWidth: 100
+            text: root.certaintyText
+            color: Theme.textMuted
+        }
+        Label {
+            Layout.preferredWidth: 140
+            text: root.changeText
+            color: root.isNew ? Theme.error : Theme.textMuted
+            font.bold: root.isNew
+            elide: Text.ElideRight
+        }
+    }
+}

@@ -1,0 +1,183 @@
+pragma ComponentBehavior: Bound
+import QtQuick
+import QtQuick.Controls
+import QtQuick.Layouts
+import Pitchloop
+
+// A match judged against the season's targets: one metric on two pitches, this match and the
+// judged window, with every zone's state; below, every slipped or watched target of the match,
+// most certain first.
+Page {
+    id: root
+
+    required property ClubSession session
+
+    signal openZone(string metricId, int band, int lane, string matchId)
+
+    function showMatch(matchId: string) {
+        debrief.matchId = matchId
+    }
+
+    background: Rectangle { color: Theme.window }
+
+    MatchDebrief {
+        id: debrief
+        session: root.session
+    }
+
+    component MapPanel: ColumnLayout {
+        id: panel
+        required property ZoneMapModel zones
+        spacing: 2
+        Label {
+            text: panel.zones.title + "  ·  " + panel.zones.subtitle
+            font.pixelSize: Theme.fontLarge
+            font.bold: true
+            color: Theme.text
+        }
+        Label {
+            text: panel.zones.wholePitchText
+            color: Theme.textMuted
+            font.pixelSize: Theme.fontSmall
+        }
+        PitchMap {
+            id: map
+            Layout.fillWidth: true
+            Layout.preferredHeight: 250
+            geometry: debrief.geometry
+            zones: panel.zones
+            selectedBand: debrief.selectedBand
+            selectedLane: debrief.selectedLane
+            onZoneClicked: (band, lane) => debrief.selectZone(band, lane)
+        }
+        Label {
+            Layout.fillWidth: true
+            Layout.preferredHeight: 2 * Theme.fontSmall + 6
+            text: map.captionText.length > 0 ? map.captionText : qsTr("Hover a zone for its numbers; click to pick it on both maps.")
+            color: Theme.textMuted
+            font.pixelSize: Theme.fontSmall
+            wrapMode: Text.WordWrap
+            maximumLineCount: 2
+            elide: Text.ElideRight
+        }
+    }
+
+    ColumnLayout {
+        anchors.fill: parent
+        anchors.margins: Theme.margin
+        spacing: Theme.gap + 2
+
+        RowLayout {
+            Layout.fillWidth: true
+            spacing: Theme.gap
+            Label {
+                text: qsTr("Match")
+                color: Theme.textMuted
+            }
+            ComboBox {
+                Layout.preferredWidth: 470
+                model: root.session.matches
+                textRole: "label"
+                valueRole: "matchId"
+                currentIndex: debrief.matchRow
+                onActivated: debrief.matchId = currentValue
+            }
+            Item { Layout.preferredWidth: Theme.gapLarge }
+            Label {
+                text: qsTr("Metric")
+                color: Theme.textMuted
+            }
+            ComboBox {
+                Layout.preferredWidth: 300
+                model: root.session.metrics
+                textRole: "name"
+                valueRole: "metricId"
+                currentIndex: debrief.metricRow
+                onActivated: debrief.metricId = currentValue
+            }
+            Item { Layout.fillWidth: true }
+        }
+
+        Label {
+            Layout.fillWidth: true
+            text: debrief.metricQuestion + "  " + debrief.betterText + "."
+            color: Theme.text
+            elide: Text.ElideRight
+        }
+
+        RowLayout {
+            Layout.fillWidth: true
+            spacing: Theme.margin
+            MapPanel {
+                Layout.fillWidth: true
+                Layout.preferredWidth: 1
+                zones: debrief.matchMap
+            }
+            MapPanel {
+                Layout.fillWidth: true
+                Layout.preferredWidth: 1
+                zones: debrief.windowMap
+            }
+        }
+
+        RowLayout {
+            Layout.fillWidth: true
+            Legend {
+                Layout.fillWidth: true
+                title: qsTr("%1, both maps").arg(debrief.metricName)
+                labels: debrief.matchMap.scaleLabels
+            }
+            Button {
+                text: debrief.selectedBand > 0
+                      ? qsTr("Trend of band %1 · lane %2").arg(debrief.selectedBand).arg(debrief.selectedLane)
+                      : qsTr("Pick a zone for its trend")
+                enabled: debrief.selectedBand > 0
+                onClicked: root.openZone(debrief.metricId, debrief.selectedBand, debrief.selectedLane, debrief.matchId)
+            }
+        }
+
+        Card {
+            title: debrief.hasTargets ? qsTr("Targets that slipped or are on watch, most certain first")
+                                      : qsTr("Targets")
+            Layout.fillWidth: true
+            Layout.fillHeight: true
+
+            Label {
+                visible: debrief.judgedText.length > 0
+                Layout.fillWidth: true
+                Layout.bottomMargin: Theme.gapSmall
+                text: debrief.judgedText
+                wrapMode: Text.WordWrap
+                color: Theme.textMuted
+                font.pixelSize: Theme.fontSmall
+            }
+            Label {
+                Layout.fillWidth: true
+                visible: !debrief.hasTargets || debrief.items.count === 0
+                wrapMode: Text.WordWrap
+                text: debrief.hasTargets ? qsTr("Nothing slipped or on watch after this match.")
+                                         : qsTr("No targets set for this season yet, so nothing is judged; the maps show the values alone.")
+                color: Theme.text
+            }
+            ListView {
+                id: list
+                Layout.fillWidth: true
+                Layout.fillHeight: true
+                Layout.minimumHeight: 46
+                clip: true
+                model: debrief.items
+                boundsBehavior: Flickable.StopAtBounds
+                ScrollBar.vertical: ScrollBar {}
+                delegate: DebriefItemDelegate {
+                    width: ListView.view.width
+                    selected: metricId === debrief.metricId && band === debrief.selectedBand && lane === debrief.selectedLane
+                    onClicked: {
+                        debrief.metricId = metricId
+                        debrief.selectZone(band, lane)
+                    }
+                    onDoubleClicked: root.openZone(metricId, band, lane, debrief.matchId)
+                }
+            }
+        }
+    }
+}

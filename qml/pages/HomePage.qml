@@ -1,0 +1,217 @@
+pragma ComponentBehavior: Bound
+import QtQuick
+import QtQuick.Controls
+import QtQuick.Layouts
+import Pitchloop
+
+// The squad's season at a glance: the last match, what slipped over the judged window, how many
+// zones were judged, and how many flags chance alone would raise.
+Page {
+    id: root
+
+    required property ClubSession session
+
+    signal openDebrief(string matchId)
+    signal openZone(string metricId, int band, int lane, string matchId)
+
+    background: Rectangle { color: Theme.window }
+
+    SeasonOverview {
+        id: overview
+        session: root.session
+    }
+
+    component Figure: ColumnLayout {
+        id: figure
+        property alias value: number.text
+        property alias caption: label.text
+        property int zoneState: ZoneState.NoTarget
+        spacing: 0
+        RowLayout {
+            spacing: Theme.gap
+            StateMarker {
+                zoneState: figure.zoneState
+                size: 18
+            }
+            Label {
+                id: number
+                font.pixelSize: Theme.fontHeading + 4
+                font.bold: true
+                color: Theme.text
+            }
+        }
+        Label {
+            id: label
+            color: Theme.textMuted
+        }
+    }
+
+    ColumnLayout {
+        anchors.fill: parent
+        anchors.margins: Theme.margin
+        spacing: Theme.gapLarge
+
+        RowLayout {
+            Layout.fillWidth: true
+            ColumnLayout {
+                spacing: 2
+                Label {
+                    text: root.session.clubName.length > 0 ? root.session.clubName : qsTr("Your club")
+                    font.pixelSize: Theme.fontHeading
+                    font.bold: true
+                    color: Theme.text
+                }
+                Label {
+                    text: overview.hasMatches
+                          ? qsTr("%1 · %2 matches stored").arg(overview.squadText).arg(overview.seasonMatchCount)
+                          : qsTr("No matches stored yet")
+                    color: Theme.textMuted
+                }
+            }
+            Item { Layout.fillWidth: true }
+            Button {
+                text: qsTr("Debrief the last match")
+                highlighted: true
+                enabled: overview.hasMatches
+                onClicked: root.openDebrief(overview.lastMatchId)
+            }
+        }
+
+        Label {
+            visible: !overview.hasMatches
+            Layout.fillWidth: true
+            wrapMode: Text.WordWrap
+            text: qsTr("This club file holds no matches yet. Load match files with the command line: "
+                       + "pitchloop --db %1 ingest MATCH.json …").arg(root.session.clubFile)
+            color: Theme.text
+        }
+
+        RowLayout {
+            visible: overview.hasMatches
+            Layout.fillWidth: true
+            spacing: Theme.gapLarge
+
+            Card {
+                title: qsTr("Last match")
+                Layout.fillWidth: true
+                Layout.preferredWidth: 1
+                Layout.preferredHeight: 172
+                Label {
+                    text: qsTr("v %1").arg(overview.lastOpponent)
+                    font.pixelSize: Theme.fontTitle
+                    font.bold: true
+                    color: Theme.text
+                }
+                Label {
+                    text: overview.lastVenue + " · " + overview.lastDateText
+                    color: Theme.textMuted
+                }
+                RowLayout {
+                    spacing: Theme.gapLarge
+                    Label {
+                        text: overview.lastScore.length > 0 ? overview.lastScore : qsTr("no score")
+                        font.pixelSize: Theme.fontDisplay
+                        font.bold: true
+                        color: Theme.text
+                    }
+                    Label {
+                        text: overview.lastOutcomeWord
+                        font.pixelSize: Theme.fontLarge
+                        color: Theme.textMuted
+                    }
+                }
+                Label {
+                    text: overview.lastMatchId + (overview.lastCompetition.length > 0 ? " · " + overview.lastCompetition : "")
+                    color: Theme.textMuted
+                    font.pixelSize: Theme.fontSmall
+                }
+            }
+
+            Card {
+                title: qsTr("Judged window")
+                Layout.fillWidth: true
+                Layout.preferredWidth: 1
+                Layout.preferredHeight: 172
+                Label {
+                    text: overview.windowText
+                    font.pixelSize: Theme.fontTitle
+                    font.bold: true
+                    color: Theme.text
+                }
+                Label {
+                    text: overview.windowRangeText
+                    color: Theme.textMuted
+                }
+                RowLayout {
+                    visible: overview.hasTargets
+                    spacing: Theme.margin
+                    Figure { value: overview.judged; caption: qsTr("zones judged") }
+                    Figure {
+                        value: overview.tooLittleData
+                        caption: qsTr("too little data")
+                        zoneState: ZoneState.TooLittleData
+                    }
+                }
+                Label {
+                    visible: !overview.hasTargets
+                    Layout.fillWidth: true
+                    wrapMode: Text.WordWrap
+                    text: qsTr("No targets set for this season yet.")
+                    color: Theme.text
+                }
+            }
+
+            Card {
+                title: qsTr("Flags over the window")
+                Layout.fillWidth: true
+                Layout.preferredWidth: 1.4
+                Layout.preferredHeight: 172
+                RowLayout {
+                    spacing: Theme.margin
+                    Figure { value: overview.slippedCount; caption: qsTr("slipped"); zoneState: ZoneState.Slipped }
+                    Figure { value: overview.watchCount; caption: qsTr("on watch"); zoneState: ZoneState.Watch }
+                    Figure { value: overview.recoveredCount; caption: qsTr("back on target"); zoneState: ZoneState.OnTarget }
+                }
+                Label {
+                    Layout.fillWidth: true
+                    wrapMode: Text.WordWrap
+                    text: overview.chanceText
+                    color: Theme.textMuted
+                    font.pixelSize: Theme.fontSmall
+                }
+            }
+        }
+
+        Card {
+            visible: overview.hasMatches
+            title: qsTr("What the last match's debrief says, most certain first")
+            Layout.fillWidth: true
+            Layout.fillHeight: true
+
+            Label {
+                visible: overview.hasTargets && overview.items.count === 0
+                text: qsTr("Nothing slipped, on watch or back on target over %1.").arg(overview.windowText.toLowerCase())
+                color: Theme.text
+            }
+            ListView {
+                Layout.fillWidth: true
+                Layout.fillHeight: true
+                clip: true
+                model: overview.items
+                boundsBehavior: Flickable.StopAtBounds
+                ScrollBar.vertical: ScrollBar {}
+                delegate: DebriefItemDelegate {
+                    width: ListView.view.width
+                    onClicked: root.openZone(metricId, band, lane, overview.lastMatchId)
+                }
+            }
+        }
+
+        Label {
+            visible: overview.hasTargets
+            text: qsTr("Flags are evidence for the staff to weigh, not verdicts. Click a line for its zone trend.")
+            color: Theme.textMuted
+            font.pixelSize: Theme.fontSmall
+        }
+    }
+}

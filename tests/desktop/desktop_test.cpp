@@ -1,0 +1,557 @@
+// Tests of the desktop adapters: every list model runs under QAbstractItemModelTester while its
+// controller fills it; the numbers shown are checked against model/ computed independently (or
+// by hand, as noted); the pitch map's clicks are checked against model::ZoneGrid::zoneOf.
+//
+// The club: the first seven matches of the demo season (sample-club/matches) and its targets
+// (sample-club/targets.json), ingested into a temporary club file.
+
+#include "clubsession.h"
+#include "debrieflistmodel.h"
+#include "display.h"
+#include "ingest.h"
+#include "matchdebrief.h"
+#include "matchlistmodel.h"
+#include "metriclistmodel.h"
+#include "pitchgeometry.h"
+#include "seasonoverview.h"
+#include "seriesmodel.h"
+#include "startup.h"
+#include "targets.h"
+#include "zonemapmodel.h"
+#include "zoneseries.h"
+#include "zonestate.h"
+
+#include <QAbstractItemModelTester>
+#include <QFile>
+#include <QGuiApplication>
+#include <QQmlEngine>
+#include <QQuickItem>
+#include <QQuickStyle>
+#include <QQuickView>
+#include <QSignalSpy>
+#include <QTemporaryDir>
+#include <QTest>
+#include <QtQml/qqmlextensionplugin.h>
+
+#include <cmath>
+#include <memory>
+
+Q_IMPORT_QML_PLUGIN(PitchloopPlugin)
+
+using namespace pitchloop;
+using namespace pitchloop::desktop;
+
+namespace {
+
+constexpr int kMatches = 7;
+const QString kSource = QStringLiteral(PITCHLOOP_SOURCE_DIR);
+
+std::unique_ptr<QAbstractItemModelTester> watch(QAbstractItemModel* m) {
+    return std::make_unique<QAbstractItemModelTester>(
+        m, QAbstractItemModelTester::FailureReportingMode::QtTest);
+}
+
+QVariant role(const QAbstractItemModel& m, int row, const QByteArray& name) {
+    const auto roles = m.roleNames();
+    for (auto it = roles.begin(); it != roles.end(); ++it)
+        if (it.value() == name) return m.data(m.index(row, 0), it.key());
+    return {};
+}
+
+/// The model's own status of one zone after match `focal` of the test season.
+model::ZoneStatus referenceStatus(const model::ClubRepository& repo, std::size_t focal,
+                                  const std::string& metric, int band, int lane,
+                                  const model::Window& window) {
+    const auto season = repo.seasonTallies("First team", "2026-27");
+    const auto statuses =
+        model::computeStatus(season, focal, repo.metrics(), repo.targets("First team", "2026-27"),
+                             repo.tallyGrid(), {window}, repo.flagSettings());
+    for (const auto& s : statuses)
+        if (s.metric == metric && s.band == band && s.lane == lane) return s;
+    return {};
+}
+
+} // namespace
+
+class DesktopTest : public QObject {
+    Q_OBJECT
+
+private slots:
+    void initTestCase();
+    void matchList();
+    void metricList();
+    void debriefMaps();
+    void debriefList();
+    void seasonOverview();
+    void zoneSeries();
+    void emptyClub();
+    void scaleDomains();
+    void clubFileChoice();
+    void pitchGeometry();
+    void pitchClickMapsToZone();
+    void pitchHoverShowsNumbers();
+
+private:
+    QTemporaryDir m_dir;
+    QString m_file;
+    std::unique_ptr<model::ClubRepository> m_reference; ///< same file, read independently
+    ClubSession m_session;
+};
+
+void DesktopTest::initTestCase() {
+    QVERIFY(m_dir.isValid());
+    m_file = m_dir.filePath(QStringLiteral("club.sqlite"));
+    {
+        model::ClubRepository repo(m_file.toStdString());
+        for (int i = 1; i <= kMatches; ++i) {
+            const auto report = model::ingestFile(
+                repo, QStringLiteral("%1/sample-club/matches/KB-2026-%2.json")
+                          .arg(kSource)
+                          .arg(i, 2, 10, QLatin1Char('0'))
+                          .toStdString());
+            QVERIFY2(report.ok(), report.file.c_str());
+        }
+        QFile targets(kSource + QStringLiteral("/sample-club/targets.json"));
+        QVERIFY(targets.open(QIODevice::ReadOnly));
+        const auto grid = repo.tallyGrid();
+        const auto parsed = model::parseTargetFile(targets.readAll().toStdString(), "targets.json",
+                                                   repo.metrics(), grid.bands(), grid.lanes());
+        QVERIFY(parsed.errors.empty());
+        repo.addTargets(parsed.targets, "2026-07-20T10:00:00Z");
+    }
+    QSignalSpy opened(&m_session, &ClubSession::opened);
+    QVERIFY(m_session.open(m_file));
+    QCOMPARE(opened.count(), 1);
+    QVERIFY(m_session.errorString().isEmpty());
+    QCOMPARE(m_session.matchCount(), kMatches);
+    m_reference = std::make_unique<model::ClubRepository>(m_file.toStdString());
+}
+
+void DesktopTest::matchList() {
+    MatchListModel model;
+    const auto tester = watch(&model);
+    model.reset(m_reference->matches());
+    QCOMPARE(model.rowCount(), kMatches);
+    // Newest first; KB-2026-07 was lost 0–2 at home (sample-club/matches/KB-2026-07.json).
+    QCOMPARE(role(model, 0, "matchId").toString(), QStringLiteral("KB-2026-07"));
+    QCOMPARE(role(model, 0, "score").toString(), QStringLiteral("0–2"));
+    QCOMPARE(role(model, 0, "outcome").toString(), QStringLiteral("L"));
+    QCOMPARE(role(model, 0, "venue").toString(), QStringLiteral("Home"));
+    QVERIFY(role(model, 0, "label").toString().startsWith(QStringLiteral("KB-2026-07 · ")));
+    QCOMPARE(role(model, kMatches - 1, "matchId").toString(), QStringLiteral("KB-2026-01"));
+    QCOMPARE(model.indexOf(QStringLiteral("KB-2026-05")), 2);
+    QCOMPARE(model.idAt(2), QStringLiteral("KB-2026-05"));
+    QCOMPARE(model.indexOf(QStringLiteral("nope")), -1);
+    QVERIFY(model.idAt(kMatches).isEmpty());
+    model.reset({});
+    QCOMPARE(model.rowCount(), 0);
+}
+
+void DesktopTest::metricList() {
+    MetricListModel model;
+    const auto tester = watch(&model);
+    const auto metrics = m_reference->metrics();
+    model.reset(metrics);
+    QCOMPARE(model.rowCount(), static_cast<int>(metrics.size()));
+    const int regain = model.indexOf(QStringLiteral("regain_5s"));
+    QVERIFY(regain >= 0);
+    QCOMPARE(role(model, regain, "name").toString(), QStringLiteral("Regain within 5 s"));
+    QCOMPARE(role(model, regain, "kind").toString(), QStringLiteral("share of items"));
+    QCOMPARE(role(model, regain, "better").toString(), QStringLiteral("Higher is better"));
+    const int losses = model.indexOf(QStringLiteral("losses"));
+    QCOMPARE(role(model, losses, "better").toString(), QStringLiteral("Lower is better"));
+    QCOMPARE(model.idAt(losses), QStringLiteral("losses"));
+}
+
+void DesktopTest::debriefMaps() {
+    MatchDebrief debrief;
+    const auto matchTester = watch(debrief.matchMap());
+    const auto windowTester = watch(debrief.windowMap());
+    const auto itemTester = watch(debrief.items());
+    debrief.setMetricId(QStringLiteral("regain_5s"));
+    debrief.setSession(&m_session);
+    QVERIFY(debrief.errorString().isEmpty());
+    QCOMPARE(debrief.matchId(), QStringLiteral("KB-2026-07")); // empty input: the latest match
+    QCOMPARE(debrief.matchRow(), 0);
+    QCOMPARE(debrief.matchMap()->rowCount(), 30); // the default 6 × 5 grid
+    QCOMPARE(debrief.windowMap()->rowCount(), 30);
+
+    const model::FlagSettings settings = m_reference->flagSettings();
+    const model::Window match{model::Window::Kind::Match, 1, 0.3};
+    for (const auto& [band, lane] : {std::pair{5, 1}, {2, 5}, {1, 1}}) {
+        const QVariantMap inMatch = debrief.matchMap()->zone(band, lane);
+        const QVariantMap inWindow = debrief.windowMap()->zone(band, lane);
+        const auto a = referenceStatus(*m_reference, kMatches - 1, "regain_5s", band, lane, match);
+        const auto b = referenceStatus(*m_reference, kMatches - 1, "regain_5s", band, lane, settings.window);
+        QCOMPARE(inMatch.value(QStringLiteral("hasValue")).toBool(), !std::isnan(a.value));
+        if (!std::isnan(a.value)) {
+            QCOMPARE(inMatch.value(QStringLiteral("value")).toDouble(), a.value);
+            QCOMPARE(inMatch.value(QStringLiteral("valueText")).toString(),
+                     valueText(model::MetricKind::Rate, a.value));
+        }
+        QCOMPARE(inWindow.value(QStringLiteral("value")).toDouble(), std::isnan(b.value) ? 0 : b.value);
+        QCOMPARE(inWindow.value(QStringLiteral("zoneState")).toInt(), static_cast<int>(ZoneState::from(b.state)));
+        QCOMPARE(inWindow.value(QStringLiteral("zoneName")).toString(), zoneText(band, lane));
+        const double scaled = inWindow.value(QStringLiteral("scaled")).toDouble();
+        QVERIFY(scaled >= 0 && scaled <= 1);
+    }
+    // Both maps share one colour scale: its labels run from its low to its high end.
+    QCOMPARE(debrief.matchMap()->scaleLabels(), debrief.windowMap()->scaleLabels());
+    QVERIFY(debrief.matchMap()->scaleLabels().size() >= 2);
+
+    // Another metric and another match refill every model (the testers watch the resets).
+    debrief.setMetricId(QStringLiteral("losses"));
+    QCOMPARE(debrief.metricRow(), m_session.metrics()->indexOf(QStringLiteral("losses")));
+    debrief.setMatchId(QStringLiteral("KB-2026-03"));
+    QCOMPARE(debrief.matchRow(), m_session.matches()->indexOf(QStringLiteral("KB-2026-03")));
+    QCOMPARE(debrief.matchMap()->rowCount(), 30);
+    // Counts: one match's value in a zone is its tally (den 1 a match).
+    const auto tally = m_reference->matchTally("KB-2026-03", "losses");
+    const model::ZoneGrid grid;
+    const auto z = tally[static_cast<std::size_t>(grid.indexOf({3, 2}))];
+    QCOMPARE(debrief.matchMap()->zone(3, 2).value(QStringLiteral("value")).toDouble(),
+             static_cast<double>(z.num) / static_cast<double>(z.den));
+    // An unknown match falls back to the latest.
+    debrief.setMatchId(QStringLiteral("no-such-match"));
+    QCOMPARE(debrief.matchId(), QStringLiteral("KB-2026-07"));
+}
+
+void DesktopTest::debriefList() {
+    MatchDebrief debrief;
+    const auto tester = watch(debrief.items());
+    debrief.setSession(&m_session);
+    const auto season = m_reference->seasonTallies("First team", "2026-27");
+    const auto reference =
+        model::buildDebrief(season, kMatches - 1, m_reference->metrics(),
+                            m_reference->targets("First team", "2026-27"), m_reference->tallyGrid(),
+                            m_reference->flagSettings());
+    const auto* items = debrief.items();
+    QCOMPARE(items->rowCount(), static_cast<int>(reference.slippedInWindow.size() +
+                                                 reference.slippedInMatch.size() +
+                                                 reference.watched.size()));
+    QVERIFY(items->rowCount() > 0); // match 7 has a slip and several zones on watch (CLI debrief)
+    // The default metric is that of the first line, and its zone is picked on the maps.
+    QCOMPARE(debrief.metricId(), role(*items, 0, "metricId").toString());
+    if (role(*items, 0, "band").toInt() > 0) {
+        QCOMPARE(debrief.selectedBand(), role(*items, 0, "band").toInt());
+        QCOMPARE(debrief.selectedLane(), role(*items, 0, "lane").toInt());
+    }
+    // Sections in order, each most certain first; the title row is marked once per section.
+    QString section;
+    double lastP = 2;
+    for (int row = 0; row < items->rowCount(); ++row) {
+        const QString s = role(*items, row, "section").toString();
+        const bool first = role(*items, row, "firstInSection").toBool();
+        QCOMPARE(first, s != section);
+        if (first) lastP = 2;
+        const double p = role(*items, row, "pMiss").toDouble();
+        QVERIFY2(p <= lastP, qPrintable(QStringLiteral("row %1 out of order").arg(row)));
+        lastP = p;
+        section = s;
+    }
+    if (!reference.slippedInWindow.empty()) {
+        QCOMPARE(role(*items, 0, "zoneState").toInt(), static_cast<int>(ZoneState::Slipped));
+        QCOMPARE(role(*items, 0, "stateText").toString(), QStringLiteral("Slipped"));
+        QCOMPARE(role(*items, 0, "metricId").toString(),
+                 QString::fromStdString(reference.slippedInWindow.front().now.metric));
+    }
+}
+
+void DesktopTest::seasonOverview() {
+    SeasonOverview overview;
+    const auto tester = watch(overview.items());
+    QSignalSpy changed(&overview, &SeasonOverview::changed);
+    overview.setSession(&m_session);
+    QVERIFY(changed.count() >= 1);
+    QVERIFY(overview.errorString().isEmpty());
+    QCOMPARE(overview.lastMatchId(), QStringLiteral("KB-2026-07"));
+    QCOMPARE(overview.lastScore(), QStringLiteral("0–2"));
+    QCOMPARE(overview.lastOutcomeWord(), QStringLiteral("Lost"));
+    QCOMPARE(overview.seasonMatchCount(), kMatches);
+    QVERIFY(overview.hasTargets());
+    const auto season = m_reference->seasonTallies("First team", "2026-27");
+    const auto reference =
+        model::buildDebrief(season, kMatches - 1, m_reference->metrics(),
+                            m_reference->targets("First team", "2026-27"), m_reference->tallyGrid(),
+                            m_reference->flagSettings());
+    QCOMPARE(overview.judged(), reference.judged);
+    QCOMPARE(overview.tooLittleData(), reference.tooLittleData);
+    QCOMPARE(overview.slippedCount(), static_cast<int>(reference.slippedInWindow.size()));
+    QCOMPARE(overview.watchCount(), static_cast<int>(reference.watched.size()));
+    QCOMPARE(overview.recoveredCount(), static_cast<int>(reference.recovered.size()));
+    QCOMPARE(overview.chanceFlags(), reference.chanceFlags);
+    QCOMPARE(overview.items()->rowCount(),
+             overview.slippedCount() + overview.watchCount() + overview.recoveredCount());
+    // Last 5 matches ending at match 7 start at match 3, played on 2026-08-22.
+    QVERIFY(overview.windowRangeText().startsWith(compactDateText("2026-08-22")));
+}
+
+void DesktopTest::zoneSeries() {
+    ZoneSeries trend;
+    const auto seriesTester = watch(trend.series());
+    const auto mapTester = watch(trend.map());
+    trend.setSession(&m_session);
+    trend.select(QStringLiteral("regain_5s"), 5, 1);
+    QVERIFY(trend.errorString().isEmpty());
+    QCOMPARE(trend.matchId(), QStringLiteral("KB-2026-07"));
+    QCOMPARE(trend.focalRow(), kMatches - 1);
+    const auto* series = trend.series();
+    QCOMPARE(series->rowCount(), kMatches);
+    QCOMPARE(trend.map()->rowCount(), 30);
+    const model::ZoneGrid grid;
+    const auto zone = static_cast<std::size_t>(grid.indexOf({5, 1}));
+    const auto ids = m_reference->seasonTallies("First team", "2026-27").matchIds;
+    for (int row = 0; row < kMatches; ++row) {
+        // Each match's own value is its tally num/den in the zone.
+        const auto t = m_reference->matchTally(ids[static_cast<std::size_t>(row)], "regain_5s")[zone];
+        QCOMPARE(role(*series, row, "matchId").toString(), QString::fromStdString(ids[static_cast<std::size_t>(row)]));
+        QCOMPARE(role(*series, row, "hasValue").toBool(), t.den > 0);
+        if (t.den > 0)
+            QCOMPARE(role(*series, row, "value").toDouble(),
+                     static_cast<double>(t.num) / static_cast<double>(t.den));
+        // The target in force all season: regain_5s band 5 lane 1 at least 55 %
+        // (sample-club/targets.json, effective 2026-07-01).
+        QCOMPARE(role(*series, row, "hasTarget").toBool(), true);
+        QCOMPARE(role(*series, row, "target").toDouble(), 0.55);
+        QCOMPARE(role(*series, row, "targetText").toString(), QStringLiteral("≥ 55.0%"));
+        const double low = role(*series, row, "low").toDouble();
+        const double high = role(*series, row, "high").toDouble();
+        QVERIFY(low <= high);
+    }
+    QCOMPARE(series->values().size(), kMatches);
+    // Rates are drawn on an axis inside 0–100 %.
+    QVERIFY(series->axisLow() >= 0 && series->axisHigh() <= 1 && series->axisLow() < series->axisHigh());
+    QCOMPARE(trend.zoneText(), QStringLiteral("Band 5 · lane 1"));
+    QCOMPARE(series->point(0).value(QStringLiteral("matchId")).toString(), QStringLiteral("KB-2026-01"));
+    QVERIFY(series->point(kMatches).isEmpty());
+
+    // The whole pitch, and a zone outside the grid falls back to it.
+    trend.select(QStringLiteral("regain_5s"), 0, 0);
+    QCOMPARE(trend.zoneText(), QStringLiteral("Whole pitch"));
+    trend.select(QStringLiteral("regain_5s"), 9, 9);
+    QCOMPARE(trend.band(), 0);
+    QCOMPARE(trend.lane(), 0);
+    QCOMPARE(series->rowCount(), kMatches);
+    // Up to an earlier match: the same season, the summary at that match.
+    trend.select(QStringLiteral("losses"), 2, 3, QStringLiteral("KB-2026-04"));
+    QCOMPARE(trend.focalRow(), 3);
+    QCOMPARE(trend.metricRow(), m_session.metrics()->indexOf(QStringLiteral("losses")));
+}
+
+void DesktopTest::emptyClub() {
+    QTemporaryDir dir;
+    ClubSession empty;
+    QVERIFY(empty.open(dir.filePath(QStringLiteral("new/club.sqlite"))));
+    QCOMPARE(empty.matchCount(), 0);
+    SeasonOverview overview;
+    MatchDebrief debrief;
+    ZoneSeries trend;
+    const auto t1 = watch(overview.items());
+    const auto t2 = watch(debrief.matchMap());
+    const auto t3 = watch(debrief.items());
+    const auto t4 = watch(trend.series());
+    overview.setSession(&empty);
+    debrief.setSession(&empty);
+    trend.setSession(&empty);
+    QVERIFY(!overview.hasMatches());
+    QVERIFY(!debrief.hasMatch());
+    QVERIFY(!trend.hasSeries());
+    QCOMPARE(debrief.matchMap()->rowCount(), 0);
+    QCOMPARE(trend.series()->rowCount(), 0);
+    QVERIFY(overview.errorString().isEmpty() && debrief.errorString().isEmpty() &&
+            trend.errorString().isEmpty());
+}
+
+void DesktopTest::scaleDomains() {
+    using model::MetricKind;
+    // Rates 33 %–47 %: tenths 0.3–0.5 span 0.2 ≤ 0.3, so steps of 5 points.
+    auto d = scaleDomain(MetricKind::Rate, {0.33, 0.47, NAN});
+    QCOMPARE(d.low, 0.3);
+    QVERIFY(std::abs(d.high - 0.5) < 1e-12);
+    QCOMPARE(d.steps(), 4);
+    QCOMPARE(scaleLabels(MetricKind::Rate, d),
+             (QStringList{"30%", "35%", "40%", "45%", "50%"}));
+    QCOMPARE(d.position(0.4), 0.5);
+    // Rates 0–100 %: span 1, steps of 20 points.
+    d = scaleDomain(MetricKind::Rate, {0.0, 1.0});
+    QCOMPARE(scaleLabels(MetricKind::Rate, d), (QStringList{"0%", "20%", "40%", "60%", "80%", "100%"}));
+    // Counts up to 3.4: a quarter of 3.4 is 0.85, the next tidy step is 1, so 0–4.
+    d = scaleDomain(MetricKind::Count, {0, 1.2, 3.4});
+    QCOMPARE(d.low, 0.0);
+    QCOMPARE(d.high, 4.0);
+    QCOMPARE(scaleLabels(MetricKind::Count, d), (QStringList{"0", "1", "2", "3", "4"}));
+    // Counts up to 1.4: a quarter is 0.35, the tidy step is 0.5, so 0–1.5.
+    d = scaleDomain(MetricKind::Count, {1.4});
+    QCOMPARE(scaleLabels(MetricKind::Count, d), (QStringList{"0.0", "0.5", "1.0", "1.5"}));
+    // No values: a unit scale.
+    d = scaleDomain(MetricKind::Exposure, {NAN});
+    QCOMPARE(d.low, 0.0);
+    QCOMPARE(d.high, 1.0);
+    QCOMPARE(d.position(NAN), 0.0);
+}
+
+void DesktopTest::clubFileChoice() {
+    QTemporaryDir dir;
+    const QString user = dir.filePath(QStringLiteral("data/club.sqlite"));
+    const QString demo = dir.filePath(QStringLiteral("demo.sqlite"));
+    const QString missingDemo = dir.filePath(QStringLiteral("missing.sqlite"));
+    // Nothing exists: the user's file, to be created.
+    auto c = chooseClubFile({}, user, {missingDemo, demo});
+    QCOMPARE(c.file, user);
+    QVERIFY(!c.demo);
+    // A demo club exists and the user has none: the demo.
+    QFile(demo).open(QIODevice::WriteOnly);
+    c = chooseClubFile({}, user, {missingDemo, demo});
+    QCOMPARE(c.file, demo);
+    QVERIFY(c.demo);
+    // The user's own file wins over the demo once it exists.
+    QVERIFY(QDir().mkpath(dir.filePath(QStringLiteral("data"))));
+    QFile(user).open(QIODevice::WriteOnly);
+    c = chooseClubFile({}, user, {demo});
+    QCOMPARE(c.file, user);
+    QVERIFY(!c.demo);
+    // --db wins over everything.
+    c = chooseClubFile(QStringLiteral("/x/other.sqlite"), user, {demo});
+    QCOMPARE(c.file, QStringLiteral("/x/other.sqlite"));
+}
+
+void DesktopTest::pitchGeometry() {
+    PitchGeometry g; // 105 × 68, 6 × 5 equal zones
+    QCOMPARE(g.bands(), 6);
+    QCOMPARE(g.lanes(), 5);
+    QCOMPARE(g.bandEdges().size(), 7);
+    QCOMPARE(g.bandEdges().back(), 105.0);
+    // The zones tile the pitch: their areas add up to 105 × 68 = 7140 m².
+    double area = 0;
+    for (int band = 1; band <= 6; ++band)
+        for (int lane = 1; lane <= 5; ++lane) {
+            const QRectF r = g.zoneRect(band, lane);
+            area += r.width() * r.height();
+            // The centre of each zone's rectangle lies in that zone.
+            QCOMPARE(g.zoneAt(r.center().x(), r.center().y()), QPoint(band, lane));
+        }
+    QVERIFY(std::abs(area - 105.0 * 68.0) < 1e-9);
+    // Lane 1 is at our right touchline, drawn at the bottom: its rectangle ends at the bottom
+    // edge of the pitch (margin + width); band 1 starts at our goal line (the margin).
+    const QRectF corner = g.zoneRect(1, 1);
+    QCOMPARE(corner.left(), g.margin());
+    QCOMPARE(corner.bottom(), g.margin() + 68.0);
+    QVERIFY(g.zoneRect(0, 0).isEmpty());
+    QCOMPARE(g.zoneAt(0.5, 0.5), QPoint(0, 0)); // in the margin, off the pitch
+    // Law 1 markings are all there: 4 corner arcs, 2 penalty arcs and the centre circle as arcs.
+    const QString path = g.markingsPath(5);
+    QCOMPARE(path.count(QLatin1Char('A')), 4 + 2 + 2);
+    QCOMPARE(g.spotsPath(5).count(QLatin1Char('M')), 3); // centre mark and two penalty marks
+    g.setGrid(QStringLiteral("markings:6"));
+    QCOMPARE(g.grid(), QStringLiteral("markings:6"));
+    // Markings lanes: the middle lane is the goal area's width, 18.32 m (Law 1).
+    const auto lanes = g.laneEdges();
+    QVERIFY(std::abs((lanes[3] - lanes[2]) - 18.32) < 1e-9);
+}
+
+void DesktopTest::pitchClickMapsToZone() {
+    QQuickView view;
+    view.engine()->addImportPath(QStringLiteral("qrc:/qt/qml"));
+    view.setSource(QUrl::fromLocalFile(kSource + QStringLiteral("/tests/desktop/pitch_host.qml")));
+    QCOMPARE(view.status(), QQuickView::Ready);
+    view.show();
+    QVERIFY(QTest::qWaitForWindowExposed(&view));
+    auto* map = view.rootObject()->findChild<QQuickItem*>(QStringLiteral("map"));
+    QVERIFY(map);
+    QSignalSpy clicked(map, SIGNAL(zoneClicked(int, int)));
+
+    const double scale = map->property("pxPerMetre").toDouble();
+    const double margin = 2.5, length = 105, width = 68;
+    const double left = (map->width() - (length + 2 * margin) * scale) / 2;
+    const double top = (map->height() - (width + 2 * margin) * scale) / 2;
+    // A point given as metres from our goal line (x) and from our right touchline (y).
+    const auto pixel = [&](double x, double y) {
+        return QPoint(static_cast<int>(std::lround(left + (margin + x) * scale)),
+                      static_cast<int>(std::lround(top + (margin + width - y) * scale)));
+    };
+
+    // By hand: 80 m upfield is band 5 (80 / 17.5 = 4.6), 10 m from our right touchline is
+    // lane 1 (10 / 13.6 = 0.7), drawn in the lower half since we attack left to right.
+    const QPoint p = pixel(80, 10);
+    QVERIFY(p.y() > map->height() / 2 && p.x() > map->width() / 2);
+    QTest::mouseClick(&view, Qt::LeftButton, {}, p);
+    QCOMPARE(clicked.count(), 1);
+    QCOMPARE(clicked.takeFirst(), (QList<QVariant>{5, 1}));
+    // 10 m from our goal line, 60 m from our right touchline: band 1, lane 5, top left.
+    QTest::mouseClick(&view, Qt::LeftButton, {}, pixel(10, 60));
+    QCOMPARE(clicked.takeFirst(), (QList<QVariant>{1, 5}));
+
+    // A sweep over the pitch agrees with model::ZoneGrid::zoneOf, away from the zone lines
+    // (a pixel is about 0.2 m here).
+    const model::ZoneGrid grid;
+    const model::Pitch pitch{length, width};
+    const auto nearLine = [](double v, const std::vector<double>& edges) {
+        for (double e : edges)
+            if (std::abs(v - e) < 0.6) return true;
+        return false;
+    };
+    int checked = 0;
+    for (double x = 1.3; x < length; x += 6.1)
+        for (double y = 1.7; y < width; y += 5.3) {
+            if (nearLine(x, grid.bandEdges(pitch)) || nearLine(y, grid.laneEdges(pitch))) continue;
+            QTest::mouseClick(&view, Qt::LeftButton, {}, pixel(x, y));
+            QCOMPARE(clicked.count(), 1);
+            const model::Zone z = grid.zoneOf({x, y}, pitch);
+            QCOMPARE(clicked.takeFirst(), (QList<QVariant>{z.band, z.lane}));
+            ++checked;
+        }
+    QVERIFY(checked > 150);
+
+    // Beyond the goal line, in the drawn margin: no zone, no signal.
+    QTest::mouseClick(&view, Qt::LeftButton, {}, pixel(-1.5, 30));
+    QCOMPARE(clicked.count(), 0);
+}
+
+void DesktopTest::pitchHoverShowsNumbers() {
+    MatchDebrief debrief;
+    debrief.setMetricId(QStringLiteral("regain_5s"));
+    debrief.setSession(&m_session);
+    QQuickView view;
+    view.engine()->addImportPath(QStringLiteral("qrc:/qt/qml"));
+    view.setSource(QUrl::fromLocalFile(kSource + QStringLiteral("/tests/desktop/pitch_host.qml")));
+    QCOMPARE(view.status(), QQuickView::Ready);
+    view.show();
+    QVERIFY(QTest::qWaitForWindowExposed(&view));
+    auto* map = view.rootObject()->findChild<QQuickItem*>(QStringLiteral("map"));
+    QVERIFY(map);
+    map->setProperty("zones", QVariant::fromValue(debrief.windowMap()));
+    QCOMPARE(map->property("captionText").toString(), QString()); // nothing hovered or picked
+
+    // Hover the middle of band 5, lane 1 (x 70–87.5 m, y 0–13.6 m).
+    const double scale = map->property("pxPerMetre").toDouble();
+    const double left = (map->width() - 110 * scale) / 2, top = (map->height() - 73 * scale) / 2;
+    const QPoint p(static_cast<int>(left + (2.5 + 78.75) * scale),
+                   static_cast<int>(top + (2.5 + 68 - 6.8) * scale));
+    QTest::mouseMove(&view, p);
+    const QVariantMap zone = debrief.windowMap()->zone(5, 1);
+    QTRY_VERIFY(map->property("captionText").toString().startsWith(QStringLiteral("Band 5 · lane 1")));
+    const QString caption = map->property("captionText").toString();
+    QVERIFY2(caption.contains(zone.value(QStringLiteral("valueText")).toString()), qPrintable(caption));
+    QVERIFY2(caption.contains(zone.value(QStringLiteral("sampleText")).toString()), qPrintable(caption));
+    QVERIFY2(caption.contains(QStringLiteral("90% interval ") +
+                              zone.value(QStringLiteral("intervalText")).toString()),
+             qPrintable(caption));
+
+    // Picked but not hovered (the pointer in the margin beyond our goal line): the picked
+    // zone's numbers.
+    QTest::mouseMove(&view, QPoint(static_cast<int>(left + 1.0 * scale), p.y()));
+    map->setProperty("selectedBand", 2);
+    map->setProperty("selectedLane", 3);
+    QTRY_VERIFY(map->property("captionText").toString().startsWith(QStringLiteral("Band 2 · lane 3")));
+}
+
+int main(int argc, char* argv[]) {
+    if (!qEnvironmentVariableIsSet("QT_QPA_PLATFORM")) qputenv("QT_QPA_PLATFORM", "offscreen");
+    if (!qEnvironmentVariableIsSet("QT_QUICK_BACKEND")) qputenv("QT_QUICK_BACKEND", "software");
+    QGuiApplication app(argc, argv);
+    QQuickStyle::setStyle(QStringLiteral("Fusion"));
+    DesktopTest test;
+    return QTest::qExec(&test, argc, argv);
+}
+
+#include "desktop_test.moc"
