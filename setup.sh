@@ -46,6 +46,13 @@ prepare_demo() {
   "$build_dir"/app/cli/pitchloop --db sample-club/club.sqlite ingest sample-club/matches/*.json
   "$build_dir"/app/cli/pitchloop --db sample-club/club.sqlite targets import sample-club/targets.json
   "$build_dir"/app/cli/pitchloop --db sample-club/club.sqlite drills import sample-club/drills.json
+  # The demo story's focus: opened after match 8 on the slipped left-back zone, with three of
+  # the drill book's drills for it (ids 6, 7 and 9 in sample-club/drills.json's order).
+  if [ "$("$build_dir"/app/cli/pitchloop --db sample-club/club.sqlite focus list --format json)" = "[]" ]; then
+    "$build_dir"/app/cli/pitchloop --db sample-club/club.sqlite focus open --match KB-2026-08 \
+      --metric pre_shot_passes_against --zone 2,5 --drill 6 --drill 7 --drill 9 \
+      --by "D. Arkwright (head coach)" --note "their right side keeps overloading our left back" >/dev/null
+  fi
 }
 
 case "$mode" in

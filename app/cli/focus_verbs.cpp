@@ -275,13 +275,16 @@ int FocusVerbs::runShow(ClubRepository& repo, std::ostream& out, std::ostream& e
     if (f->drills.empty()) out << " none (pitchloop focus link FOCUS DRILL)";
     out << "\n  evidence frozen at opening:\n";
     const auto evidence = nlohmann::json::parse(f->evidence);
+    const auto metric = repo.metric(f->metric);
+    const MetricKind kind = metric ? metric->kind() : MetricKind::Rate;
+    auto value = [&](const nlohmann::json& v) {
+        return v.is_null() ? std::string("-") : formatValue(kind, v.get<double>());
+    };
     for (const auto& z : evidence["zones"]) {
         char line[300];
-        std::snprintf(line, sizeof line, "    %-16s %-8s value %-10s [%s–%s]  state %-15s P(miss) %s\n",
+        std::snprintf(line, sizeof line, "    %-16s %-8s %9s [%s–%s]  %-16s P(miss) %s\n",
                       zoneName(z["band"], z["lane"]).c_str(), z["window"].get<std::string>().c_str(),
-                      z["value"].is_null() ? "-" : std::to_string(z["value"].get<double>()).substr(0, 6).c_str(),
-                      z["low"].is_null() ? "-" : std::to_string(z["low"].get<double>()).substr(0, 6).c_str(),
-                      z["high"].is_null() ? "-" : std::to_string(z["high"].get<double>()).substr(0, 6).c_str(),
+                      value(z["value"]).c_str(), value(z["low"]).c_str(), value(z["high"]).c_str(),
                       z["state"].get<std::string>().c_str(),
                       z["p_miss"].is_null() ? "-" : std::to_string(z["p_miss"].get<double>()).substr(0, 5).c_str());
         out << line;

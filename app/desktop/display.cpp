@@ -28,6 +28,8 @@ double tidyStep(double span, int steps) {
 QString valueText(MetricKind kind, double value) {
     if (std::isnan(value)) return QStringLiteral("–");
     if (kind == MetricKind::Rate) return number(100 * value, 1) + QLatin1Char('%');
+    if (kind == MetricKind::Count) // whole numbers for whole counts, else tenths
+        return number(value, std::abs(value - std::round(value)) < 0.005 ? 0 : 1);
     return number(value, 2);
 }
 
@@ -37,7 +39,8 @@ QString intervalText(MetricKind kind, const stats::Interval& interval) {
     if (kind == MetricKind::Rate)
         return number(100 * interval.low, 1) + QStringLiteral("–") + number(100 * interval.high, 1) +
                QLatin1Char('%');
-    return number(interval.low, 2) + QStringLiteral("–") + number(interval.high, 2);
+    const int decimals = kind == MetricKind::Count ? 1 : 2;
+    return number(interval.low, decimals) + QStringLiteral("–") + number(interval.high, decimals);
 }
 
 QString levelText(double level) {

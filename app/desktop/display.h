@@ -13,7 +13,8 @@
 
 namespace pitchloop::desktop {
 
-/// "52.3%" for rates, "1.40" for counts and exposures, "–" when there is no value.
+/// "52.3%" for rates; "3" or "6.8" for counts (whole counts without decimals); "0.15" for
+/// exposures; "–" when there is no value.
 QString valueText(model::MetricKind kind, double value);
 /// "40.1–64.2%" at the status's level.
 QString intervalText(model::MetricKind kind, const model::stats::Interval& interval);

@@ -61,7 +61,7 @@ ItemDelegate {
             // runs) does not clip shapes to the list.
             readonly property Flickable listView: root.ListView.view
             readonly property real rowTop: root.y + root.topPadding + (root.availableHeight - height) / 2
-            visible: !listView || (rowTop >= listView.contentY && rowTop + height <= listView.contentY + listView.height)
+            opacity: !listView || (rowTop >= listView.contentY && rowTop + height <= listView.contentY + listView.height) ? 1 : 0
             zoneState: root.zoneState
             size: 15
         }

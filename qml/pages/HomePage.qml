@@ -71,7 +71,8 @@ Page {
             Item { Layout.fillWidth: true }
             Button {
                 text: qsTr("Debrief the last match")
-                highlighted: true
+                palette.button: Theme.accent
+                palette.buttonText: "#ffffff"
                 enabled: overview.hasMatches
                 onClicked: root.openDebrief(overview.lastMatchId)
             }

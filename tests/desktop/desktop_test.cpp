@@ -24,6 +24,7 @@
 #include <QAbstractItemModelTester>
 #include <QFile>
 #include <QGuiApplication>
+#include <QLocale>
 #include <QQmlEngine>
 #include <QQuickItem>
 #include <QQuickStyle>
@@ -86,6 +87,7 @@ private slots:
     void zoneSeries();
     void emptyClub();
     void scaleDomains();
+    void valueTexts();
     void clubFileChoice();
     void pitchGeometry();
     void pitchClickMapsToZone();
@@ -390,6 +392,23 @@ void DesktopTest::scaleDomains() {
     QCOMPARE(d.position(NAN), 0.0);
 }
 
+void DesktopTest::valueTexts() {
+    using model::MetricKind;
+    QCOMPARE(valueText(MetricKind::Rate, 0.523), QStringLiteral("52.3%"));
+    QCOMPARE(valueText(MetricKind::Count, 3.0), QStringLiteral("3"));    // one match: whole
+    QCOMPARE(valueText(MetricKind::Count, 6.8), QStringLiteral("6.8"));  // 34 in 5 matches
+    QCOMPARE(valueText(MetricKind::Exposure, 0.153), QStringLiteral("0.15"));
+    QCOMPARE(valueText(MetricKind::Count, NAN), QStringLiteral("–"));
+    QCOMPARE(intervalText(MetricKind::Rate, {0.401, 0.642}), QStringLiteral("40.1–64.2%"));
+    QCOMPARE(intervalText(MetricKind::Count, {5.0, 9.05}), QStringLiteral("5.0–9.1"));
+    QCOMPARE(zoneText(0, 0), QStringLiteral("Whole pitch"));
+    QCOMPARE(zoneText(2, 5), QStringLiteral("Band 2 · lane 5"));
+    QCOMPARE(levelText(0.9), QStringLiteral("90% interval"));
+    QCOMPARE(certaintyText(0.9996), QStringLiteral("P(miss) 1.000"));
+    QCOMPARE(certaintyText(0.64), QStringLiteral("P(miss) 0.64"));
+    QVERIFY(certaintyText(NAN).isEmpty());
+}
+
 void DesktopTest::clubFileChoice() {
     QTemporaryDir dir;
     const QString user = dir.filePath(QStringLiteral("data/club.sqlite"));
@@ -549,6 +568,7 @@ int main(int argc, char* argv[]) {
     if (!qEnvironmentVariableIsSet("QT_QPA_PLATFORM")) qputenv("QT_QPA_PLATFORM", "offscreen");
     if (!qEnvironmentVariableIsSet("QT_QUICK_BACKEND")) qputenv("QT_QUICK_BACKEND", "software");
     QGuiApplication app(argc, argv);
+    QLocale::setDefault(QLocale(QLocale::English, QLocale::UnitedKingdom)); // texts checked below
     QQuickStyle::setStyle(QStringLiteral("Fusion"));
     DesktopTest test;
     return QTest::qExec(&test, argc, argv);
