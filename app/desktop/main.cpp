@@ -64,8 +64,9 @@ int main(int argc, char* argv[]) {
     cli.addHelpOption();
     cli.addVersionOption();
     const QCommandLineOption dbOption(QStringLiteral("db"),
-                                      QStringLiteral("Club file (default: your data folder's club file, "
-                                                     "else the demo club when you have none yet)"),
+                                      QStringLiteral("Club file (default: $PITCHLOOP_DB, else your data "
+                                                     "folder's club file, else the demo club while "
+                                                     "you have none)"),
                                       QStringLiteral("FILE"));
     const QCommandLineOption selfTestOption(
         QStringLiteral("self-test"),
@@ -87,7 +88,7 @@ int main(int argc, char* argv[]) {
     QQuickStyle::setStyle(QStringLiteral("Fusion"));
 
     const ClubChoice choice = chooseClubFile(
-        cli.value(dbOption), userClubFile(),
+        explicitClubFile(cli.value(dbOption)), userClubFile(),
         {QDir::current().filePath(QStringLiteral("sample-club/club.sqlite")),
          QStringLiteral(PITCHLOOP_SOURCE_DIR "/sample-club/club.sqlite")});
     ClubSession session;

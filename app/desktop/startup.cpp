@@ -6,9 +6,12 @@
 
 namespace pitchloop::desktop {
 
+QString explicitClubFile(const QString& dbOption) {
+    if (!dbOption.isEmpty()) return dbOption;
+    return qEnvironmentVariable("PITCHLOOP_DB");
+}
+
 QString userClubFile() {
-    const QString env = qEnvironmentVariable("PITCHLOOP_DB");
-    if (!env.isEmpty()) return env;
     const QString base = QStandardPaths::writableLocation(QStandardPaths::GenericDataLocation);
     return QDir(base).filePath(QStringLiteral("pitchloop/club.sqlite"));
 }

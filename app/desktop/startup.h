@@ -12,11 +12,15 @@ struct ClubChoice {
     bool demo = false; ///< the demo club, opened because the user has no club file yet
 };
 
-/// The user's club file: $PITCHLOOP_DB when set, else pitchloop/club.sqlite in the generic data
-/// folder (QStandardPaths; ~/.local/share on Linux), the same file the command line uses.
+/// The club file named outside the app: --db's value, else $PITCHLOOP_DB (as the command line
+/// reads it); empty when neither is given.
+QString explicitClubFile(const QString& dbOption);
+
+/// The user's club file: pitchloop/club.sqlite in the generic data folder (QStandardPaths;
+/// ~/.local/share on Linux), the command line's default too.
 QString userClubFile();
 
-/// `explicitFile` (from --db) wins; else `userFile` when it exists; else the first existing
+/// `explicitFile` wins, existing or not; else `userFile` when it exists; else the first existing
 /// demo candidate; else `userFile`, to be created.
 ClubChoice chooseClubFile(const QString& explicitFile, const QString& userFile,
                           const QStringList& demoCandidates);

@@ -62,7 +62,19 @@ Page {
         }
     }
 
+    Label {
+        visible: !debrief.hasMatch
+        anchors.centerIn: parent
+        width: Math.min(parent.width - 2 * Theme.margin, 640)
+        wrapMode: Text.WordWrap
+        horizontalAlignment: Text.AlignHCenter
+        text: qsTr("No matches in this club file yet. Load match files with the command line: "
+                   + "pitchloop --db %1 ingest MATCH.json …").arg(root.session.clubFile)
+        color: Theme.text
+    }
+
     ColumnLayout {
+        visible: debrief.hasMatch
         anchors.fill: parent
         anchors.margins: Theme.margin
         spacing: Theme.gap + 2
@@ -136,48 +148,24 @@ Page {
             }
         }
 
-        Card {
+        DebriefListCard {
             title: debrief.hasTargets ? qsTr("Targets that slipped or are on watch, most certain first")
                                       : qsTr("Targets")
             Layout.fillWidth: true
             Layout.fillHeight: true
-
-            Label {
-                visible: debrief.judgedText.length > 0
-                Layout.fillWidth: true
-                Layout.bottomMargin: Theme.gapSmall
-                text: debrief.judgedText
-                wrapMode: Text.WordWrap
-                color: Theme.textMuted
-                font.pixelSize: Theme.fontSmall
+            lines: debrief.items
+            note: debrief.judgedText
+            emptyText: debrief.hasTargets
+                       ? qsTr("Nothing slipped or on watch after this match.")
+                       : qsTr("No targets set for this season yet, so nothing is judged; the maps show the values alone.")
+            selectedMetric: debrief.metricId
+            selectedBand: debrief.selectedBand > 0 ? debrief.selectedBand : -1
+            selectedLane: debrief.selectedLane
+            onLineClicked: (metricId, band, lane) => {
+                debrief.metricId = metricId
+                debrief.selectZone(band, lane)
             }
-            Label {
-                Layout.fillWidth: true
-                visible: !debrief.hasTargets || debrief.items.count === 0
-                wrapMode: Text.WordWrap
-                text: debrief.hasTargets ? qsTr("Nothing slipped or on watch after this match.")
-                                         : qsTr("No targets set for this season yet, so nothing is judged; the maps show the values alone.")
-                color: Theme.text
-            }
-            ListView {
-                id: list
-                Layout.fillWidth: true
-                Layout.fillHeight: true
-                Layout.minimumHeight: 46
-                clip: true
-                model: debrief.items
-                boundsBehavior: Flickable.StopAtBounds
-                ScrollBar.vertical: ScrollBar {}
-                delegate: DebriefItemDelegate {
-                    width: ListView.view.width
-                    selected: metricId === debrief.metricId && band === debrief.selectedBand && lane === debrief.selectedLane
-                    onClicked: {
-                        debrief.metricId = metricId
-                        debrief.selectZone(band, lane)
-                    }
-                    onDoubleClicked: root.openZone(metricId, band, lane, debrief.matchId)
-                }
-            }
+            onLineDoubleClicked: (metricId, band, lane) => root.openZone(metricId, band, lane, debrief.matchId)
         }
     }
 }

@@ -21,31 +21,6 @@ Page {
         session: root.session
     }
 
-    component Figure: ColumnLayout {
-        id: figure
-        property alias value: number.text
-        property alias caption: label.text
-        property int zoneState: ZoneState.NoTarget
-        spacing: 0
-        RowLayout {
-            spacing: Theme.gap
-            StateMarker {
-                zoneState: figure.zoneState
-                size: 18
-            }
-            Label {
-                id: number
-                font.pixelSize: Theme.fontHeading + 4
-                font.bold: true
-                color: Theme.text
-            }
-        }
-        Label {
-            id: label
-            color: Theme.textMuted
-        }
-    }
-
     ColumnLayout {
         anchors.fill: parent
         anchors.margins: Theme.margin
@@ -70,6 +45,7 @@ Page {
             }
             Item { Layout.fillWidth: true }
             Button {
+                visible: overview.hasMatches
                 text: qsTr("Debrief the last match")
                 palette.button: Theme.accent
                 palette.buttonText: "#ffffff"
@@ -146,8 +122,8 @@ Page {
                 RowLayout {
                     visible: overview.hasTargets
                     spacing: Theme.margin
-                    Figure { value: overview.judged; caption: qsTr("zones judged") }
-                    Figure {
+                    FigureTile { value: overview.judged; caption: qsTr("zones judged") }
+                    FigureTile {
                         value: overview.tooLittleData
                         caption: qsTr("too little data")
                         zoneState: ZoneState.TooLittleData
@@ -167,11 +143,19 @@ Page {
                 Layout.fillWidth: true
                 Layout.preferredWidth: 1.4
                 Layout.preferredHeight: 172
+                Label {
+                    visible: !overview.hasTargets
+                    Layout.fillWidth: true
+                    wrapMode: Text.WordWrap
+                    text: qsTr("Nothing is judged without targets.")
+                    color: Theme.text
+                }
                 RowLayout {
+                    visible: overview.hasTargets
                     spacing: Theme.margin
-                    Figure { value: overview.slippedCount; caption: qsTr("slipped"); zoneState: ZoneState.Slipped }
-                    Figure { value: overview.watchCount; caption: qsTr("on watch"); zoneState: ZoneState.Watch }
-                    Figure { value: overview.recoveredCount; caption: qsTr("back on target"); zoneState: ZoneState.OnTarget }
+                    FigureTile { value: overview.slippedCount; caption: qsTr("slipped"); zoneState: ZoneState.Slipped }
+                    FigureTile { value: overview.watchCount; caption: qsTr("on watch"); zoneState: ZoneState.Watch }
+                    FigureTile { value: overview.recoveredCount; caption: qsTr("back on target"); zoneState: ZoneState.OnTarget }
                 }
                 Label {
                     Layout.fillWidth: true
@@ -183,29 +167,23 @@ Page {
             }
         }
 
-        Card {
+        DebriefListCard {
             visible: overview.hasMatches
             title: qsTr("What the last match's debrief says, most certain first")
             Layout.fillWidth: true
             Layout.fillHeight: true
+            lines: overview.items
+            emptyText: overview.hasTargets
+                       ? qsTr("Nothing slipped, on watch or back on target over %1.").arg(overview.windowText.toLowerCase())
+                       : qsTr("No targets are set for this season, so the debrief has nothing to judge. "
+                              + "Set them with the command line: pitchloop --db %1 targets import FILE.json")
+                         .arg(root.session.clubFile)
+            onLineClicked: (metricId, band, lane) => root.openZone(metricId, band, lane, overview.lastMatchId)
+        }
 
-            Label {
-                visible: overview.hasTargets && overview.items.count === 0
-                text: qsTr("Nothing slipped, on watch or back on target over %1.").arg(overview.windowText.toLowerCase())
-                color: Theme.text
-            }
-            ListView {
-                Layout.fillWidth: true
-                Layout.fillHeight: true
-                clip: true
-                model: overview.items
-                boundsBehavior: Flickable.StopAtBounds
-                ScrollBar.vertical: ScrollBar {}
-                delegate: DebriefItemDelegate {
-                    width: ListView.view.width
-                    onClicked: root.openZone(metricId, band, lane, overview.lastMatchId)
-                }
-            }
+        Item {
+            visible: !overview.hasMatches
+            Layout.fillHeight: true
         }
 
         Label {

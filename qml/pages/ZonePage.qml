@@ -23,26 +23,19 @@ Page {
         session: root.session
     }
 
-    component Key: Row {
-        id: key
-        property alias text: label.text
-        default property alias swatch: holder.data
-        spacing: Theme.gapSmall + 2
-        Item {
-            id: holder
-            width: 26
-            height: 14
-            anchors.verticalCenter: parent.verticalCenter
-        }
-        Label {
-            id: label
-            anchors.verticalCenter: parent.verticalCenter
-            color: Theme.text
-            font.pixelSize: Theme.fontSmall
-        }
+    Label {
+        visible: !trend.hasSeries
+        anchors.centerIn: parent
+        width: Math.min(parent.width - 2 * Theme.margin, 640)
+        wrapMode: Text.WordWrap
+        horizontalAlignment: Text.AlignHCenter
+        text: qsTr("No matches in this club file yet. Load match files with the command line: "
+                   + "pitchloop --db %1 ingest MATCH.json …").arg(root.session.clubFile)
+        color: Theme.text
     }
 
     ColumnLayout {
+        visible: trend.hasSeries
         anchors.fill: parent
         anchors.margins: Theme.margin
         spacing: Theme.gapLarge
@@ -179,76 +172,10 @@ Page {
                 ewmaText: trend.ewmaText
                 levelText: trend.levelText
             }
-            Row {
-                spacing: Theme.margin
-                Key {
-                    text: qsTr("each match")
-                    Rectangle {
-                        x: 9
-                        y: 3
-                        width: 8
-                        height: 8
-                        radius: 4
-                        color: "#3b4352"
-                    }
-                }
-                Key {
-                    text: qsTr("%1, %2").arg(trend.levelText).arg(trend.windowText.toLowerCase())
-                    Rectangle {
-                        anchors.fill: parent
-                        color: Qt.rgba(0.04, 0.36, 0.6, 0.18)
-                    }
-                }
-                Key {
-                    text: trend.ewmaText
-                    Rectangle {
-                        y: 6
-                        width: 26
-                        height: 3
-                        color: Theme.accent
-                    }
-                }
-                Key {
-                    text: qsTr("target")
-                    Row {
-                        y: 6
-                        spacing: 3
-                        Repeater {
-                            model: 3
-                            delegate: Rectangle {
-                                width: 6
-                                height: 2
-                                color: Theme.text
-                            }
-                        }
-                    }
-                }
-            }
-            Row {
-                spacing: Theme.margin
-                Label {
-                    text: qsTr("Judged state over %1 after each match:").arg(trend.windowText.toLowerCase())
-                    color: Theme.textMuted
-                    font.pixelSize: Theme.fontSmall
-                }
-                Repeater {
-                    model: [
-                        { state: ZoneState.Slipped, name: qsTr("Slipped") },
-                        { state: ZoneState.Watch, name: qsTr("Watch") },
-                        { state: ZoneState.OnTarget, name: qsTr("On target") },
-                        { state: ZoneState.TooLittleData, name: qsTr("Too little data") }
-                    ]
-                    delegate: Key {
-                        id: stateKey
-                        required property var modelData
-                        text: modelData.name
-                        StateMarker {
-                            x: 6
-                            zoneState: stateKey.modelData.state
-                            size: 13
-                        }
-                    }
-                }
+            SeriesKey {
+                windowText: trend.windowText
+                ewmaText: trend.ewmaText
+                levelText: trend.levelText
             }
         }
     }

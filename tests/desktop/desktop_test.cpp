@@ -429,9 +429,15 @@ void DesktopTest::clubFileChoice() {
     c = chooseClubFile({}, user, {demo});
     QCOMPARE(c.file, user);
     QVERIFY(!c.demo);
-    // --db wins over everything.
+    // --db wins over everything, existing or not; $PITCHLOOP_DB when --db is not given.
     c = chooseClubFile(QStringLiteral("/x/other.sqlite"), user, {demo});
     QCOMPARE(c.file, QStringLiteral("/x/other.sqlite"));
+    QVERIFY(!c.demo);
+    qputenv("PITCHLOOP_DB", "/x/from-env.sqlite");
+    QCOMPARE(explicitClubFile(QString()), QStringLiteral("/x/from-env.sqlite"));
+    QCOMPARE(explicitClubFile(QStringLiteral("/x/option.sqlite")), QStringLiteral("/x/option.sqlite"));
+    qunsetenv("PITCHLOOP_DB");
+    QVERIFY(explicitClubFile(QString()).isEmpty());
 }
 
 void DesktopTest::pitchGeometry() {
