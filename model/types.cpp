@@ -108,6 +108,15 @@ const std::vector<Result>& allowedResults(EventType type) {
     }
 }
 
+bool isIsoDate(std::string_view s) {
+    if (s.size() != 10 || s[4] != '-' || s[7] != '-') return false;
+    for (std::size_t i : {0u, 1u, 2u, 3u, 5u, 6u, 8u, 9u})
+        if (s[i] < '0' || s[i] > '9') return false;
+    const int month = (s[5] - '0') * 10 + (s[6] - '0');
+    const int day = (s[8] - '0') * 10 + (s[9] - '0');
+    return month >= 1 && month <= 12 && day >= 1 && day <= 31;
+}
+
 bool givesControl(const Event& e) {
     switch (e.type) {
     case EventType::Pass:

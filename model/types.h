@@ -111,6 +111,10 @@ const std::vector<std::string_view>& eventTypeNames();
 /// Results a file may give for `type`; empty for types that take no result.
 const std::vector<Result>& allowedResults(EventType type);
 
+/// Whether `s` is a date written YYYY-MM-DD with a month 1–12 and a day 1–31 (the one date
+/// check of match files, targets and the command line).
+bool isIsoDate(std::string_view s);
+
 /// Whether the event gives its side control of the ball (BRIEF §2 table).
 bool givesControl(const Event& e);
 

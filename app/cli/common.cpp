@@ -101,15 +101,6 @@ std::string formatValue(MetricKind kind, double value) {
     return buf;
 }
 
-bool isIsoDate(const std::string& s) {
-    if (s.size() != 10 || s[4] != '-' || s[7] != '-') return false;
-    for (std::size_t i : {0u, 1u, 2u, 3u, 5u, 6u, 8u, 9u})
-        if (s[i] < '0' || s[i] > '9') return false;
-    // Same range check as the match reader's dates.
-    const int month = std::stoi(s.substr(5, 2));
-    const int day = std::stoi(s.substr(8, 2));
-    return month >= 1 && month <= 12 && day >= 1 && day <= 31;
-}
 
 nlohmann::json statusJson(const ZoneStatus& s) {
     nlohmann::json j{{"metric", s.metric},        {"band", s.band},

@@ -40,8 +40,6 @@ std::string zoneName(int band, int lane);
 /// A value in its metric's unit for people: "45.2%" for rates, "2.40" otherwise.
 std::string formatValue(model::MetricKind kind, double value);
 
-bool isIsoDate(const std::string& s);
-
 /// One zone's status as JSON (status --format json, a focus's frozen evidence).
 nlohmann::json statusJson(const model::ZoneStatus& s);
 

@@ -3,6 +3,7 @@
 // bad input, import/export round trips. "Now" is fixed with $PITCHLOOP_TODAY (12:00 UTC of
 // that day). Every drill here is invented.
 
+#include "clirun.h"
 #include "commands.h"
 #include "matchreader.h"
 #include "testutil.h"
@@ -20,36 +21,15 @@
 #include <vector>
 
 namespace fs = std::filesystem;
+using pitchloop::testutil::cli;
+using pitchloop::testutil::CliRun;
+using pitchloop::testutil::contains;
 using nlohmann::json;
 using pitchloop::testutil::dataSnapshot;
 using pitchloop::testutil::freshTempDir;
 using pitchloop::testutil::sourcePath;
 
 namespace {
-
-struct CliRun {
-    int code = -1;
-    std::string out;
-    std::string err;
-};
-
-CliRun cli(std::vector<std::string> args) {
-    args.insert(args.begin(), "pitchloop");
-    std::vector<char*> argv;
-    for (auto& a : args)
-        argv.push_back(a.data());
-    argv.push_back(nullptr);
-    std::ostringstream out, err;
-    CliRun r;
-    r.code = pitchloop::cli::run(static_cast<int>(args.size()), argv.data(), out, err);
-    r.out = out.str();
-    r.err = err.str();
-    return r;
-}
-
-bool contains(const std::string& text, const std::string& part) {
-    return text.find(part) != std::string::npos;
-}
 
 std::vector<std::string> lines(const std::string& text) {
     std::vector<std::string> out;

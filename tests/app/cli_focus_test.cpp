@@ -1,6 +1,7 @@
 // `focus` and `review` on the command line, on the first matches of the demo season (the
 // planted story: opponents' pre-shot passes through our band 2, lane 5 in matches 1–8).
 
+#include "clirun.h"
 #include "commands.h"
 #include "testutil.h"
 
@@ -14,34 +15,14 @@
 #include <vector>
 
 namespace fs = std::filesystem;
+using pitchloop::testutil::cli;
+using pitchloop::testutil::CliRun;
+using pitchloop::testutil::contains;
 using pitchloop::testutil::dataSnapshot;
 using pitchloop::testutil::freshTempDir;
 using pitchloop::testutil::sourcePath;
 
 namespace {
-
-struct Run {
-    int code = -1;
-    std::string out;
-    std::string err;
-};
-
-Run cli(std::vector<std::string> args) {
-    args.insert(args.begin(), "pitchloop");
-    std::vector<char*> argv;
-    for (auto& a : args) argv.push_back(a.data());
-    argv.push_back(nullptr);
-    std::ostringstream out, err;
-    Run r;
-    r.code = pitchloop::cli::run(static_cast<int>(args.size()), argv.data(), out, err);
-    r.out = out.str();
-    r.err = err.str();
-    return r;
-}
-
-bool has(const std::string& text, const std::string& part) {
-    return text.find(part) != std::string::npos;
-}
 
 /// A club file with the first `n` demo matches and the demo targets.
 struct DemoClub {
@@ -76,12 +57,12 @@ TEST_CASE("a focus opened from the planted slip and reviewed after five matches"
     REQUIRE(open.code == 0);
     CHECK(open.out == "1\n");
     // The zone was off target at that match, so no "opened anyway" note.
-    CHECK_FALSE(has(open.err, "opened anyway"));
+    CHECK_FALSE(contains(open.err, "opened anyway"));
 
     const auto show = cli({"--db", club.db, "focus", "show", "1"});
     REQUIRE(show.code == 0);
-    CHECK(has(show.out, "off_target"));       // the frozen evidence
-    CHECK(has(show.out, "rechts überladen — ⚽")); // the note, byte for byte
+    CHECK(contains(show.out, "off_target"));       // the frozen evidence
+    CHECK(contains(show.out, "rechts überladen — ⚽")); // the note, byte for byte
 
     const auto list = cli({"--db", club.db, "focus", "list", "--format", "json"});
     const auto focuses = nlohmann::json::parse(list.out);
@@ -111,7 +92,7 @@ TEST_CASE("a focus opened from the planted slip and reviewed after five matches"
     CHECK(nlohmann::json::parse(stored.out) == r);
     const auto again = cli({"--db", club.db, "review", "1", "--verdict", "partly", "--by", "X"});
     CHECK(again.code == 2);
-    CHECK(has(again.err, "was closed"));
+    CHECK(contains(again.err, "was closed"));
 }
 
 TEST_CASE("focus and review refuse bad input and change nothing", "[cli]") {
@@ -121,7 +102,7 @@ TEST_CASE("focus and review refuse bad input and change nothing", "[cli]") {
         args.insert(args.begin(), {"--db", club.db});
         const auto r = cli(args);
         CHECK(r.code == 2);
-        CHECK(has(r.err, message));
+        CHECK(contains(r.err, message));
     };
     refused({"review", "9"}, "no focus 9");
     refused({"focus", "show", "9"}, "no focus 9");
@@ -147,7 +128,7 @@ TEST_CASE("focus and review refuse bad input and change nothing", "[cli]") {
     const std::string opened = dataSnapshot(club.db);
     const auto early = cli({"--db", club.db, "review", "1", "--verdict", "worked", "--by", "X"});
     CHECK(early.code == 2);
-    CHECK(has(early.err, "2 have been played (3 missing)"));
+    CHECK(contains(early.err, "2 have been played (3 missing)"));
     CHECK(dataSnapshot(club.db) == opened);
     refused({"review", "1", "--after", "2", "--before", "9"}, "(1 missing)");
 }

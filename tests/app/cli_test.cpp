@@ -1,6 +1,7 @@
 // The command line, run in-process through pitchloop::cli::run, plus two runs of the real
 // binary for its exit codes. The base match is tests/data/minimal-match.json (KB-TEST-01).
 
+#include "clirun.h"
 #include "commands.h"
 #include "matchreader.h"
 #include "testutil.h"
@@ -16,35 +17,14 @@
 #include <vector>
 
 namespace fs = std::filesystem;
+using pitchloop::testutil::cli;
+using pitchloop::testutil::CliRun;
+using pitchloop::testutil::contains;
 using pitchloop::testutil::dataSnapshot;
 using pitchloop::testutil::freshTempDir;
 using pitchloop::testutil::sourcePath;
 
 namespace {
-
-struct CliRun {
-    int code = -1;
-    std::string out;
-    std::string err;
-};
-
-CliRun cli(std::vector<std::string> args) {
-    args.insert(args.begin(), "pitchloop");
-    std::vector<char*> argv;
-    for (auto& a : args)
-        argv.push_back(a.data());
-    argv.push_back(nullptr);
-    std::ostringstream out, err;
-    CliRun r;
-    r.code = pitchloop::cli::run(static_cast<int>(args.size()), argv.data(), out, err);
-    r.out = out.str();
-    r.err = err.str();
-    return r;
-}
-
-bool contains(const std::string& text, const std::string& part) {
-    return text.find(part) != std::string::npos;
-}
 
 std::string minimalPath() {
     return sourcePath("tests/data/minimal-match.json").string();
