@@ -77,9 +77,7 @@ std::string addDays(const std::string& date, long days) {
 
 // Fixtures ---------------------------------------------------------------------------------
 
-namespace {
-
-bool isKickoff(const std::string& s) {
+bool isClockTime(std::string_view s) {
     if (s.size() != 5 || s[2] != ':') return false;
     for (std::size_t i : {0u, 1u, 3u, 4u})
         if (s[i] < '0' || s[i] > '9') return false;
@@ -87,6 +85,8 @@ bool isKickoff(const std::string& s) {
     const int m = (s[3] - '0') * 10 + (s[4] - '0');
     return h <= 23 && m <= 59;
 }
+
+namespace {
 
 std::string trim(std::string_view s) {
     const auto first = s.find_first_not_of(" \t");
@@ -123,7 +123,7 @@ Problems validateFixture(const Fixture& f, const std::string& source, const std:
         error("date", "missing");
     else if (!dayNumber(f.date))
         error("date", "'" + f.date + "' is not a date YYYY-MM-DD");
-    if (!f.kickoff.empty() && !isKickoff(f.kickoff))
+    if (!f.kickoff.empty() && !isClockTime(f.kickoff))
         error("kickoff", "'" + f.kickoff +
                              "' is not a time HH:MM (00:00 to 23:59), or empty "
                              "while unknown");

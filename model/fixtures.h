@@ -18,6 +18,8 @@ namespace pitchloop::model {
 /// Days since 1970-01-01 of an ISO date YYYY-MM-DD; nullopt when the text is not a real
 /// calendar date (2026-02-29 and 2026-13-01 are rejected).
 std::optional<long> dayNumber(std::string_view isoDate);
+/// A 24-hour clock time "HH:MM" (00:00 to 23:59).
+bool isClockTime(std::string_view text);
 /// The ISO date of a day number.
 std::string isoDate(long dayNumber);
 /// `isoDate` moved by `days` (negative for earlier); the input must be a valid date.

@@ -1,6 +1,6 @@
 # Regenerates the demo season into OUT and compares it with the committed files in SRC.
 #   cmake -DGEN=<pitchloop-demo-season> -DSRC=<sample-club/matches> -DOUT=<scratch dir>
-#         [-DSEED=2026] -P compare_regen.cmake
+#         [-DSEED=2026] [-DFIXTURES=<sample-club/fixtures.csv>] -P compare_regen.cmake
 foreach(var GEN SRC OUT)
     if(NOT DEFINED ${var} OR "${${var}}" STREQUAL "")
         message(FATAL_ERROR "compare_regen.cmake: -D${var}=... is required")
@@ -21,6 +21,7 @@ file(REMOVE_RECURSE "${OUT}")
 file(MAKE_DIRECTORY "${OUT}")
 execute_process(
     COMMAND "${GEN}" --seed ${SEED} --out "${OUT}" --matches ${expectedCount}
+            --fixtures "${OUT}/fixtures.csv"
     RESULT_VARIABLE genResult
     OUTPUT_QUIET
     ERROR_VARIABLE genLog)
@@ -47,4 +48,14 @@ foreach(name IN LISTS expected)
             "Regenerate with: pitchloop-demo-season --seed ${SEED} --out sample-club/matches")
     endif()
 endforeach()
+if(DEFINED FIXTURES AND NOT "${FIXTURES}" STREQUAL "")
+    execute_process(
+        COMMAND "${CMAKE_COMMAND}" -E compare_files "${FIXTURES}" "${OUT}/fixtures.csv"
+        RESULT_VARIABLE differs)
+    if(NOT differs EQUAL 0)
+        message(FATAL_ERROR "the committed ${FIXTURES} differs from the regenerated schedule\n"
+                            "Regenerate with: pitchloop-demo-season --seed ${SEED} "
+                            "--out sample-club/matches --fixtures sample-club/fixtures.csv")
+    endif()
+endif()
 message(STATUS "all ${expectedCount} demo match files regenerate byte for byte (seed ${SEED})")

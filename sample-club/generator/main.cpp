@@ -4,6 +4,7 @@
 
 #include <CLI/CLI.hpp>
 #include <algorithm>
+#include <chrono>
 #include <cstdint>
 #include <cstdio>
 #include <filesystem>
@@ -16,6 +17,26 @@ bool writeFile(const std::filesystem::path& path, const std::string& text) {
     std::ofstream out(path, std::ios::binary | std::ios::trunc);
     out.write(text.data(), static_cast<std::streamsize>(text.size()));
     return static_cast<bool>(out);
+}
+
+/// Weekday of an ISO date, 0 = Sunday … 6 = Saturday.
+unsigned weekdayOf(const std::string& iso) {
+    using namespace std::chrono;
+    const year_month_day ymd{year{std::stoi(iso.substr(0, 4))},
+                             month{static_cast<unsigned>(std::stoi(iso.substr(5, 2)))},
+                             day{static_cast<unsigned>(std::stoi(iso.substr(8, 2)))}};
+    return weekday{sys_days{ymd}}.c_encoding();
+}
+
+/// The whole season's schedule in the fixtures CSV shape of docs/planner.md: Saturday matches
+/// kick off at 15:00, the midweek ones at 19:45.
+std::string fixturesCsv(const pitchloop::demo::Season& season) {
+    std::string out = "date,kickoff,opponent,venue,competition\r\n";
+    for (const auto& fx : season.fixtures)
+        out += fx.date + ',' + (weekdayOf(fx.date) == 6 ? "15:00" : "19:45") + ',' +
+               season.opponents[static_cast<std::size_t>(fx.opponent)].name + ',' +
+               (fx.home ? "home" : "away") + ",League\r\n";
+    return out;
 }
 
 } // namespace
@@ -31,6 +52,9 @@ int main(int argc, char** argv) {
     app.add_option("--seed", seed, "Seed; the same seed always gives the same bytes")
         ->capture_default_str();
     app.add_option("--out", outDir, "Directory for KB-2026-NN.json files")->required();
+    std::string fixturesFile;
+    app.add_option("--fixtures", fixturesFile,
+                   "Also write the season's schedule as a fixtures CSV (docs/planner.md)");
     app.add_option("--matches", matches, "How many fixtures to play, from the first")
         ->check(CLI::Range(1, demo::kSeasonMatches))
         ->capture_default_str();
@@ -44,6 +68,10 @@ int main(int argc, char** argv) {
     }
 
     const demo::Season season = demo::buildSeason(seed);
+    if (!fixturesFile.empty() && !writeFile(fixturesFile, fixturesCsv(season))) {
+        std::fprintf(stderr, "cannot write %s\n", fixturesFile.c_str());
+        return 1;
+    }
     std::array<int, 3> wdl{};
     int minEvents = 1 << 30;
     int maxEvents = 0;

@@ -5,4 +5,5 @@ add_test(NAME demo_season_regenerates_same_bytes
         -DGEN=$<TARGET_FILE:pitchloop-demo-season>
         -DSRC=${PROJECT_SOURCE_DIR}/sample-club/matches
         -DOUT=${CMAKE_CURRENT_BINARY_DIR}/regen
+        -DFIXTURES=${PROJECT_SOURCE_DIR}/sample-club/fixtures.csv
         -P ${PROJECT_SOURCE_DIR}/sample-club/generator/compare_regen.cmake)
