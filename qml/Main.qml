@@ -20,14 +20,21 @@ ApplicationWindow {
     readonly property int pageCount: pages.length
     readonly property var pageNames: pages.map(page => page.name)
 
+    // Screens ask for each other by name, so the order of `pages` is free to change.
+    function showPage(name: string) {
+        const index = pageNames.indexOf(name)
+        if (index >= 0)
+            currentPage = index
+    }
+
     function openDebrief(matchId: string) {
         debriefPage.showMatch(matchId)
-        currentPage = 1
+        showPage("debrief")
     }
 
     function openZone(metricId: string, band: int, lane: int, matchId: string) {
         zonePage.show(metricId, band, lane, matchId)
-        currentPage = 2
+        showPage("zone")
     }
 
     width: 1280

@@ -66,6 +66,27 @@ void ClubSession::load() {
     m_metricModel->reset(m_metrics);
 }
 
+bool ClubSession::openFile(const QString& file) {
+    try {
+        auto repo = std::make_unique<ClubRepository>(QFile::encodeName(file).toStdString());
+        return adopt(std::move(repo), file, false);
+    } catch (const std::exception& e) {
+        setError(tr("Cannot open the club file %1: %2").arg(file, QString::fromUtf8(e.what())));
+        return false;
+    }
+}
+
+void ClubSession::reload() {
+    if (!m_repo) return;
+    m_seasons.clear();
+    try {
+        load();
+    } catch (const std::exception& e) {
+        setError(tr("Cannot read the club file %1: %2").arg(m_file, QString::fromUtf8(e.what())));
+    }
+    emit opened();
+}
+
 QString ClubSession::latestMatchId() const {
     return m_matches.empty() ? QString() : QString::fromStdString(m_matches.back().id);
 }

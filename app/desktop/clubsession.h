@@ -71,8 +71,18 @@ public:
     std::shared_ptr<const SeasonData> seasonOf(const std::string& matchId);
     /// Logs a caught fault and shows it to QML.
     void setError(const QString& message);
+    /// The open club file for controllers that read or write beyond what the session caches
+    /// (drill book, focuses, targets, fixtures, sessions); nullptr while closed.
+    model::ClubRepository* repository() const { return m_repo.get(); }
+
+    /// Opens another club file (the user's choice); on failure the current one stays open.
+    Q_INVOKABLE bool openFile(const QString& file);
+    /// Re-reads matches, metrics, targets and settings after an edit or import and tells every
+    /// page (the `opened` signal), so all screens show the same club file state.
+    Q_INVOKABLE void reload();
 
 signals:
+    /// The club file was opened or its content changed (reload); pages recompute.
     void opened();
     void errorStringChanged();
 
