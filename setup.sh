@@ -17,8 +17,9 @@ packages=(
   qml6-module-qtquick qml6-module-qtquick-controls qml6-module-qtquick-layouts
   qml6-module-qtquick-window qml6-module-qtquick-templates qml6-module-qtquick-shapes
   qml6-module-qtquick-dialogs qml6-module-qt-labs-folderlistmodel qml6-module-qt-labs-settings
-  qml6-module-qttest xvfb xauth fonts-dejavu-core
+  qml6-module-qttest xvfb xauth fonts-dejavu-core poppler-utils
   python3 python3-numpy python3-scipy python3-jsonschema python3-pandas python3-statsmodels
+  python3-icalendar
 )
 
 install_missing() {
@@ -41,18 +42,8 @@ build() {
 }
 
 prepare_demo() {
-  # Idempotent: an identical match file is a no-op, so the demo club is never rebuilt over
-  # edits made in it.
-  "$build_dir"/app/cli/pitchloop --db sample-club/club.sqlite ingest sample-club/matches/*.json
-  "$build_dir"/app/cli/pitchloop --db sample-club/club.sqlite targets import sample-club/targets.json
-  "$build_dir"/app/cli/pitchloop --db sample-club/club.sqlite drills import sample-club/drills.json
-  # The demo story's focus: opened after match 8 on the slipped left-back zone, with three of
-  # the drill book's drills for it (ids 6, 7 and 9 in sample-club/drills.json's order).
-  if [ "$("$build_dir"/app/cli/pitchloop --db sample-club/club.sqlite focus list --format json)" = "[]" ]; then
-    "$build_dir"/app/cli/pitchloop --db sample-club/club.sqlite focus open --match KB-2026-08 \
-      --metric pre_shot_passes_against --zone 2,5 --drill 6 --drill 7 --drill 9 \
-      --by "D. Arkwright (head coach)" --note "their right side keeps overloading our left back" >/dev/null
-  fi
+  # Idempotent (sample-club/prepare.cmake): the demo club is never rebuilt over edits made in it.
+  cmake -DCLI="$build_dir"/app/cli/pitchloop -DCLUB=sample-club/club.sqlite -P sample-club/prepare.cmake
 }
 
 case "$mode" in

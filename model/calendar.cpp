@@ -1,6 +1,8 @@
 #include "calendar.h"
 
+#include "drills.h"
 #include "planner.h"
+#include "repository.h"
 
 #include <algorithm>
 #include <cctype>
@@ -185,6 +187,42 @@ CalendarEvent reviewEvent(const Focus& focus, const std::string& dueDate,
     e.description = d;
     e.categories = "Review";
     return e;
+}
+
+SquadCalendar calendarFor(ClubRepository& repo, const std::string& squad,
+                          const std::string& from, const std::string& to,
+                          const std::string& start, const std::string& stampUtc) {
+    SquadCalendar out;
+    const std::string club = repo.clubName();
+    std::vector<CalendarEvent> events;
+    DrillBook book(repo);
+    for (const SavedSession& s : SessionStore(repo).list(squad, from, to)) {
+        std::vector<std::string> titles;
+        for (const auto& b : s.blocks) {
+            const auto d = book.get(b.drillId);
+            titles.push_back(d ? d->title : "drill " + std::to_string(b.drillId));
+        }
+        events.push_back(sessionEvent(s, titles, start, club));
+        ++out.sessions;
+    }
+    FixtureStore fixtures(repo);
+    for (const Focus& f : FocusStore(repo).list()) {
+        if (f.squad != squad || !f.closedAt.empty()) continue;
+        const auto due = reviewDueDate(f, fixtures.list(f.squad, f.season));
+        if (!due) {
+            out.notes.push_back("focus " + std::to_string(f.id) +
+                                ": the fixtures do not reach its review point yet; no review "
+                                "date");
+            continue;
+        }
+        if ((!from.empty() && *due < from) || (!to.empty() && *due > to)) continue;
+        const auto metric = repo.metric(f.metric);
+        events.push_back(reviewEvent(f, *due, metric ? metric->name : f.metric, club));
+        ++out.reviews;
+    }
+    const std::string name = (club.empty() ? std::string("Pitchloop") : club) + " " + squad;
+    out.text = toICalendar(events, stampUtc, name);
+    return out;
 }
 
 } // namespace pitchloop::model

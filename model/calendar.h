@@ -13,6 +13,8 @@
 
 namespace pitchloop::model {
 
+class ClubRepository;
+
 /// One entry of a calendar file.
 struct CalendarEvent {
     std::string uid;         ///< stable and unique: exporting again updates the same entry
@@ -53,5 +55,22 @@ CalendarEvent reviewEvent(const Focus& focus, const std::string& dueDate,
 
 /// Lower-case letters and digits of `text`, other runs turned into one '-' (for UIDs).
 std::string uidSlug(std::string_view text);
+
+/// A squad's calendar file as the command line and the desktop app write it.
+struct SquadCalendar {
+    std::string text;  ///< the VCALENDAR (with no entry when there is nothing to put in it)
+    int sessions = 0;  ///< saved sessions in it (its first entries)
+    int reviews = 0;   ///< review due dates of open focuses in it
+    std::vector<std::string> notes; ///< open focuses left out, in plain words
+    bool empty() const { return sessions + reviews == 0; }
+};
+
+/// The squad's saved sessions dated `from`–`to` (inclusive; empty: open-ended) as timed entries
+/// starting at `start` ("HH:MM", checked by the caller), and the review due dates of its open
+/// focuses that fall in those dates as all-day entries, named after the club and squad.
+/// `stampUtc` as for toICalendar.
+SquadCalendar calendarFor(ClubRepository& repo, const std::string& squad,
+                          const std::string& from, const std::string& to,
+                          const std::string& start, const std::string& stampUtc);
 
 } // namespace pitchloop::model

@@ -5,7 +5,10 @@
 #include <SQLiteCpp/Transaction.h>
 #include <nlohmann/json.hpp>
 
+#include <algorithm>
+#include <chrono>
 #include <cmath>
+#include <cstdio>
 #include <limits>
 
 namespace pitchloop::model {
@@ -72,6 +75,143 @@ FocusState focusState(const Focus& f, int matchesSinceStart, const std::string& 
     if (f.reviewOn.empty() && matchesSinceStart >= f.reviewAfterMatches)
         return FocusState::DueForReview;
     return FocusState::Open;
+}
+
+int matchesSince(const SeasonTallies& season, const std::string& startDate) {
+    int n = 0;
+    for (const auto& d : season.dates) n += d >= startDate;
+    return n;
+}
+
+std::string dayAfter(const std::string& iso) {
+    using namespace std::chrono;
+    const year_month_day d{year{std::stoi(iso.substr(0, 4))},
+                           month{static_cast<unsigned>(std::stoi(iso.substr(5, 2)))},
+                           day{static_cast<unsigned>(std::stoi(iso.substr(8, 2)))}};
+    const year_month_day next{sys_days{d} + days{1}};
+    char buf[16];
+    std::snprintf(buf, sizeof buf, "%04d-%02u-%02u", static_cast<int>(next.year()),
+                  static_cast<unsigned>(next.month()), static_cast<unsigned>(next.day()));
+    return buf;
+}
+
+// ---- evidence --------------------------------------------------------------------------------
+
+namespace {
+
+json evidenceZoneJson(const ZoneStatus& s) {
+    json j{{"metric", s.metric},        {"band", s.band},
+           {"lane", s.lane},            {"window", s.window.name()},
+           {"num", s.sum.num},          {"den", s.sum.den},
+           {"matches", s.sum.matches},  {"level", s.level},
+           {"state", toString(s.state)}};
+    auto put = [&](const char* key, double v) {
+        j[key] = std::isnan(v) || std::isinf(v) ? json() : json(v);
+    };
+    put("value", s.value);
+    put("low", s.interval.low);
+    put("high", s.interval.high);
+    put("p_miss", s.pMiss);
+    put("p_value", s.pValue);
+    if (s.target) {
+        j["target"] = {{"direction", toString(s.target->direction)},
+                       {"value", s.target->value},
+                       {"watch_margin", s.target->watchMargin},
+                       {"min_sample", s.target->minSample},
+                       {"author", s.target->author},
+                       {"effective_from", s.target->effectiveFrom}};
+        j["chance_off"] = s.chanceOff;
+        j["bh_rejected"] = s.bhRejected;
+    } else {
+        j["target"] = nullptr;
+    }
+    return j;
+}
+
+double numberOr(const json& j, const char* key) {
+    const auto it = j.find(key);
+    return it == j.end() || it->is_null() ? kNaN : it->get<double>();
+}
+
+FlagState flagStateFrom(const std::string& s) {
+    for (FlagState f : {FlagState::OnTarget, FlagState::Watch, FlagState::OffTarget,
+                        FlagState::TooLittleData, FlagState::NoTarget})
+        if (toString(f) == s) return f;
+    return FlagState::NoTarget;
+}
+
+} // namespace
+
+FocusEvidence focusEvidence(const SeasonTallies& season, std::size_t focal,
+                            const MetricSpec& metric, const std::vector<Target>& targets,
+                            const ZoneGrid& grid, const FlagSettings& settings,
+                            const std::vector<Zone>& zones, bool wholePitch,
+                            const std::string& frozenAt) {
+    FocusEvidence e;
+    e.matchId = focal < season.matchIds.size() ? season.matchIds[focal] : std::string();
+    e.date = focal < season.dates.size() ? season.dates[focal] : std::string();
+    e.frozenAt = frozenAt;
+    const auto statuses = computeStatus(
+        season, focal, {metric}, targets, grid,
+        {Window{Window::Kind::Match, 1, 0.3}, settings.window, Window{Window::Kind::Season, 0, 0.3}},
+        settings);
+    json j{{"match_id", e.matchId}, {"date", e.date}, {"frozen_at", frozenAt},
+           {"zones", json::array()}};
+    for (const auto& s : statuses) {
+        const bool wanted = wholePitch ? s.band == 0
+                                       : std::any_of(zones.begin(), zones.end(), [&](Zone z) {
+                                             return z.band == s.band && z.lane == s.lane;
+                                         });
+        if (!wanted) continue;
+        j["zones"].push_back(evidenceZoneJson(s));
+        e.slipped |= s.window == settings.window &&
+                     (s.state == FlagState::OffTarget || s.state == FlagState::Watch);
+    }
+    e.json = j.dump();
+    e.zones = readEvidence(e.json, settings.window.name()).zones;
+    return e;
+}
+
+FocusEvidence readEvidence(const std::string& text, const std::string& judgedWindow) {
+    const json j = json::parse(text);
+    FocusEvidence e;
+    e.matchId = j.value("match_id", std::string());
+    e.date = j.value("date", std::string());
+    e.frozenAt = j.value("frozen_at", std::string());
+    e.json = text;
+    for (const auto& z : j.at("zones")) {
+        EvidenceZone ez;
+        ez.band = z.at("band").get<int>();
+        ez.lane = z.at("lane").get<int>();
+        ez.window = z.at("window").get<std::string>();
+        ez.num = numberOr(z, "num");
+        ez.den = numberOr(z, "den");
+        ez.matches = z.value("matches", 0);
+        ez.value = numberOr(z, "value");
+        ez.low = numberOr(z, "low");
+        ez.high = numberOr(z, "high");
+        ez.level = numberOr(z, "level");
+        ez.state = flagStateFrom(z.value("state", std::string()));
+        ez.pMiss = numberOr(z, "p_miss");
+        if (const auto t = z.find("target"); t != z.end() && t->is_object()) {
+            Target target;
+            target.key.metric = z.value("metric", std::string());
+            target.key.band = ez.band;
+            target.key.lane = ez.lane;
+            target.direction =
+                directionFromString(t->value("direction", std::string())).value_or(Direction::AtLeast);
+            target.value = t->value("value", 0.0);
+            target.watchMargin = t->value("watch_margin", 0.0);
+            target.minSample = t->value("min_sample", 0L);
+            target.author = t->value("author", std::string());
+            target.effectiveFrom = t->value("effective_from", std::string());
+            ez.target = target;
+        }
+        e.slipped |= ez.window == judgedWindow &&
+                     (ez.state == FlagState::OffTarget || ez.state == FlagState::Watch);
+        e.zones.push_back(std::move(ez));
+    }
+    return e;
 }
 
 // ---- storage ---------------------------------------------------------------------------------

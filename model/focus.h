@@ -44,6 +44,56 @@ struct Focus {
 /// Open, due for review (the review point is reached), or closed.
 FocusState focusState(const Focus& f, int matchesSinceStart, const std::string& today);
 
+/// Matches of the season played on or after `startDate` (ISO dates compare as text).
+int matchesSince(const SeasonTallies& season, const std::string& startDate);
+
+/// The calendar day after an ISO date (a focus's default start: the day after its match).
+std::string dayAfter(const std::string& isoDate);
+
+/// One zone's flag at the match that opened a focus, as frozen in its evidence: one entry per
+/// zone (or the whole pitch, band 0 lane 0) and window.
+struct EvidenceZone {
+    int band = 0;
+    int lane = 0;
+    std::string window; ///< Window::name(): "match", "last5", "season", ...
+    double num = 0;
+    double den = 0;
+    int matches = 0;
+    double value = 0;   ///< NaN when the window had nothing to count
+    double low = 0;
+    double high = 0;
+    double level = 0;
+    FlagState state = FlagState::NoTarget;
+    double pMiss = 0;   ///< NaN when not judged
+    std::optional<Target> target; ///< direction, value, watch margin, author, effective date
+};
+
+/// The numbers that open a focus, frozen with it and never recomputed.
+struct FocusEvidence {
+    std::string matchId;
+    std::string date;
+    std::string frozenAt;
+    std::vector<EvidenceZone> zones;
+    /// Some wanted zone is off target or watched over the club's judged window. A focus may be
+    /// opened without a slip; the caller says so.
+    bool slipped = false;
+    std::string json; ///< what Focus::evidence stores (docs/reviews.md)
+};
+
+/// Freezes the evidence of a focus on `zones` of `metric` opened after match `focal` of
+/// `season`: every zone's status in the match alone, the club's judged window and the season
+/// so far. With `wholePitch` the whole-pitch status is taken instead of the zones'.
+FocusEvidence focusEvidence(const SeasonTallies& season, std::size_t focal,
+                            const MetricSpec& metric, const std::vector<Target>& targets,
+                            const ZoneGrid& grid, const FlagSettings& settings,
+                            const std::vector<Zone>& zones, bool wholePitch,
+                            const std::string& frozenAt);
+
+/// Reads stored evidence back; numbers the JSON holds as null come back as NaN, and `slipped`
+/// looks at the entries of `judgedWindow` (a Window::name()). Throws nlohmann::json exceptions
+/// on a damaged text.
+FocusEvidence readEvidence(const std::string& json, const std::string& judgedWindow);
+
 /// Focus storage on the club file (tables focus, focus_drill, review).
 class FocusStore {
 public:

@@ -2,6 +2,7 @@
 
 #include <algorithm>
 #include <array>
+#include <chrono>
 #include <utility>
 
 namespace pitchloop::model {
@@ -112,9 +113,11 @@ bool isIsoDate(std::string_view s) {
     if (s.size() != 10 || s[4] != '-' || s[7] != '-') return false;
     for (std::size_t i : {0u, 1u, 2u, 3u, 5u, 6u, 8u, 9u})
         if (s[i] < '0' || s[i] > '9') return false;
-    const int month = (s[5] - '0') * 10 + (s[6] - '0');
-    const int day = (s[8] - '0') * 10 + (s[9] - '0');
-    return month >= 1 && month <= 12 && day >= 1 && day <= 31;
+    using namespace std::chrono;
+    const int y = (s[0] - '0') * 1000 + (s[1] - '0') * 100 + (s[2] - '0') * 10 + (s[3] - '0');
+    const unsigned m = static_cast<unsigned>((s[5] - '0') * 10 + (s[6] - '0'));
+    const unsigned d = static_cast<unsigned>((s[8] - '0') * 10 + (s[9] - '0'));
+    return year_month_day{year{y}, month{m}, day{d}}.ok(); // 2026-02-29 and 2026-04-31 fail
 }
 
 bool givesControl(const Event& e) {

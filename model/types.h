@@ -111,8 +111,8 @@ const std::vector<std::string_view>& eventTypeNames();
 /// Results a file may give for `type`; empty for types that take no result.
 const std::vector<Result>& allowedResults(EventType type);
 
-/// Whether `s` is a date written YYYY-MM-DD with a month 1–12 and a day 1–31 (the one date
-/// check of match files, targets and the command line).
+/// Whether `s` is a real calendar date written YYYY-MM-DD (2026-02-29 and 2026-04-31 are not;
+/// 2028-02-29 is): the one date check of match files, targets and the command line.
 bool isIsoDate(std::string_view s);
 
 /// Whether the event gives its side control of the ball (BRIEF §2 table).

@@ -2,6 +2,7 @@
 
 #include "common.h"
 #include "drills_verbs.h"
+#include "export_verbs.h"
 #include "focus_verbs.h"
 #include "plan_verbs.h"
 #include "verbs.h"
@@ -110,10 +111,7 @@ int cmdTallies(const Globals& g, const std::string& format, const std::string& m
     const auto rows = repo->talliesOnGrid(*grid, match.empty() ? std::nullopt : std::optional(match),
                                           metric.empty() ? std::nullopt : std::optional(metric));
     if (format == "csv") {
-        out << "match_id,metric,band,lane,num,den\n";
-        for (const auto& r : rows)
-            out << csvField(r.matchId) << ',' << r.metricId << ',' << r.band << ',' << r.lane
-                << ',' << r.num << ',' << r.den << "\n";
+        out << talliesCsv(rows);
     } else {
         for (const auto& r : rows) {
             char line[160];
@@ -227,6 +225,7 @@ int run(int argc, char** argv, std::ostream& out, std::ostream& err) {
     DrillVerbs drillVerbs(app);
     FocusVerbs focusVerbs(app);
     PlanVerbs planVerbs(app);
+    ExportVerbs exportVerbs(app);
 
     auto* metrics = app.add_subcommand("metrics", "List, show and add metric definitions");
     metrics->require_subcommand(1);
@@ -279,6 +278,7 @@ int run(int argc, char** argv, std::ostream& out, std::ostream& err) {
         if (drillVerbs.chosen()) return drillVerbs.run(g, out, err);
         if (focusVerbs.chosen()) return focusVerbs.run(g, out, err);
         if (planVerbs.chosen()) return planVerbs.run(g, out, err);
+        if (exportVerbs.chosen()) return exportVerbs.run(g, out, err);
         if (*metricsList) return cmdMetricsList(g, out);
         if (*metricsShow) return cmdMetricsShow(g, showId, out, err);
         if (*metricsAdd) return cmdMetricsAdd(g, addFile, addReplace, err);

@@ -19,29 +19,10 @@ using namespace pitchloop::model;
 
 namespace {
 
-std::string dayAfter(const std::string& iso) {
-    using namespace std::chrono;
-    const year_month_day d{year{std::stoi(iso.substr(0, 4))},
-                           month{static_cast<unsigned>(std::stoi(iso.substr(5, 2)))},
-                           day{static_cast<unsigned>(std::stoi(iso.substr(8, 2)))}};
-    const year_month_day next{sys_days{d} + days{1}};
-    char buf[16];
-    std::snprintf(buf, sizeof buf, "%04d-%02u-%02u", static_cast<int>(next.year()),
-                  static_cast<unsigned>(next.month()), static_cast<unsigned>(next.day()));
-    return buf;
-}
-
 std::string zonesText(const std::vector<Zone>& zones) {
     std::string s;
     for (const auto& z : zones) s += (s.empty() ? "" : ", ") + zoneName(z.band, z.lane);
     return s;
-}
-
-/// Matches of the focus's season played on or after its start date, up to today's data.
-int matchesSince(const SeasonTallies& season, const std::string& start) {
-    int n = 0;
-    for (const auto& d : season.dates) n += d >= start;
-    return n;
 }
 
 } // namespace
@@ -157,23 +138,10 @@ int FocusVerbs::runOpen(ClubRepository& repo, std::ostream& out, std::ostream& e
     for (std::size_t i = 0; i < season.matchIds.size(); ++i)
         if (season.matchIds[i] == m_match) focal = i;
     const FlagSettings settings = repo.flagSettings();
-    const auto statuses = computeStatus(
-        season, focal, {*metric}, repo.targets(where->first, where->second), grid,
-        {Window{Window::Kind::Match, 1, 0.3}, settings.window, Window{Window::Kind::Season, 0, 0.3}},
-        settings);
-    nlohmann::json evidence{{"match_id", m_match}, {"date", summary->date},
-                            {"frozen_at", nowUtc()}, {"zones", nlohmann::json::array()}};
-    bool slipped = false;
-    for (const auto& s : statuses) {
-        const bool wanted = whole ? s.band == 0
-                                  : std::any_of(zones.begin(), zones.end(), [&](Zone z) {
-                                        return z.band == s.band && z.lane == s.lane;
-                                    });
-        if (!wanted) continue;
-        evidence["zones"].push_back(statusJson(s));
-        slipped |= s.window == settings.window &&
-                   (s.state == FlagState::OffTarget || s.state == FlagState::Watch);
-    }
+    const FocusEvidence evidence =
+        focusEvidence(season, focal, *metric, repo.targets(where->first, where->second), grid,
+                      settings, zones, whole, nowUtc());
+    const bool slipped = evidence.slipped;
     Focus f;
     f.squad = where->first;
     f.season = where->second;
@@ -183,7 +151,7 @@ int FocusVerbs::runOpen(ClubRepository& repo, std::ostream& out, std::ostream& e
     f.startDate = start;
     f.reviewAfterMatches = m_reviewAfter;
     f.reviewOn = m_reviewOn;
-    f.evidence = evidence.dump();
+    f.evidence = evidence.json;
     f.note = m_note;
     f.openedBy = m_by;
     f.drills = m_drills;

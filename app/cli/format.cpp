@@ -8,17 +8,6 @@ namespace pitchloop::cli {
 
 using namespace pitchloop::model;
 
-std::string csvField(const std::string& s) {
-    if (s.find_first_of(",\"\r\n") == std::string::npos) return s;
-    std::string out = "\"";
-    for (char c : s) {
-        if (c == '"') out += '"';
-        out += c;
-    }
-    out += '"';
-    return out;
-}
-
 namespace {
 
 std::string cellText(const MetricSpec& spec, const ZoneTally& z) {

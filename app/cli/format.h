@@ -1,6 +1,7 @@
 #pragma once
 // Turning model numbers into text for people (tables) and scripts (CSV, RFC 4180).
 
+#include "exports.h"
 #include "metricengine.h"
 #include "metricspec.h"
 #include "repository.h"
@@ -11,8 +12,8 @@
 
 namespace pitchloop::cli {
 
-/// One CSV field, quoted when needed (RFC 4180).
-std::string csvField(const std::string& s);
+/// One CSV field (RFC 4180, formula cells neutralised): model::csvField.
+using model::csvField;
 
 /// A per-zone table of one metric for one match, drawn as the pitch seen from above with our
 /// goal on the left: lanes as rows (our left touchline at the top), bands as columns.

@@ -5,6 +5,7 @@
 #include "fixtures.h"
 #include "focus.h"
 #include "matchreader.h"
+#include "planinput.h"
 #include "planner.h"
 #include "sessions.h"
 #include "status.h"
@@ -44,47 +45,6 @@ nlohmann::json fixtureJson(const Fixture& f) {
             {"venue", f.venue},
             {"competition", f.competition},
             {"match_id", f.matchId.empty() ? nlohmann::json() : nlohmann::json(f.matchId)}};
-}
-
-/// The open focuses of a squad's season ranked as the planner sees them: flag numbers in the
-/// club's judged window at the last match before `date`. Notes go to `err`.
-std::vector<PlanFocus> openFocuses(ClubRepository& repo, const std::string& squad,
-                                   const std::string& season, const std::string& date,
-                                   std::ostream& err) {
-    std::vector<PlanFocus> out;
-    std::vector<Focus> open;
-    for (auto& f : FocusStore(repo).list())
-        if (f.squad == squad && f.season == season && f.closedAt.empty()) open.push_back(f);
-    if (open.empty()) return out;
-    const SeasonTallies tallies = repo.seasonTallies(squad, season);
-    std::optional<std::size_t> focal;
-    for (std::size_t i = 0; i < tallies.dates.size(); ++i)
-        if (tallies.dates[i] < date) focal = i;
-    if (!focal) {
-        err << "note: no match of " << season << " before " << date
-            << ": the open focuses cannot be ranked yet and are left out\n";
-        return out;
-    }
-    const FlagSettings settings = repo.flagSettings();
-    const ZoneGrid grid = repo.tallyGrid();
-    const auto targets = repo.targets(squad, season);
-    for (const Focus& f : open) {
-        const auto metric = repo.metric(f.metric);
-        if (!metric) {
-            err << "note: focus " << f.id << " works on metric '" << f.metric
-                << "', which is no longer defined; left out\n";
-            continue;
-        }
-        const auto statuses =
-            computeStatus(tallies, *focal, {*metric}, targets, grid, {settings.window}, settings);
-        auto p = planFocus(f, *metric, statuses, settings.window, grid);
-        if (!p) {
-            err << "note: focus " << f.id << " has no target in force in its zones; left out\n";
-            continue;
-        }
-        out.push_back(std::move(*p));
-    }
-    return out;
 }
 
 } // namespace
@@ -149,6 +109,13 @@ PlanVerbs::PlanVerbs(CLI::App& app) {
     m_plan->add_option("--format", m_format, "table or json")
         ->check(CLI::IsMember({"table", "json"}));
     squad(m_plan);
+
+    m_sessions = app.add_subcommand("sessions", "The squad's saved sessions");
+    m_sessions->add_option("--from", m_from, "First date, YYYY-MM-DD");
+    m_sessions->add_option("--to", m_to, "Last date, YYYY-MM-DD");
+    m_sessions->add_option("--format", m_format, "table or json")
+        ->check(CLI::IsMember({"table", "json"}));
+    squad(m_sessions);
 }
 
 int PlanVerbs::run(const Globals& g, std::ostream& out, std::ostream& err) {
@@ -159,6 +126,7 @@ int PlanVerbs::run(const Globals& g, std::ostream& out, std::ostream& err) {
     if (m_remove->parsed()) return runRemove(*repo, err);
     if (m_next->parsed()) return runNext(*repo, out, err);
     if (m_caps->parsed()) return runCaps(*repo, out, err);
+    if (m_sessions->parsed()) return runSessions(*repo, out, err);
     return runPlan(*repo, out, err);
 }
 
@@ -305,23 +273,11 @@ int PlanVerbs::runPlan(ClubRepository& repo, std::ostream& out, std::ostream& er
         err << "error: --save needs --by NAME (who saves it)\n";
         return kExitBadInput;
     }
-    PlanRequest req;
-    req.date = m_date;
-    req.minutes = m_minutes;
-    req.playersAvailable = m_players;
+    std::vector<std::string> notes;
+    PlanRequest req = planRequestFor(repo, m_squad, m_date, m_minutes, m_players, notes);
+    for (const auto& n : notes) err << "note: " << n << "\n";
     req.pinned = m_pin;
     req.removed = m_removeDrills;
-    const bool dated = dayNumber(m_date).has_value();
-    req.season = dated ? seasonOf(m_date) : "";
-    FixtureStore fixtures(repo);
-    SessionStore sessions(repo);
-    if (dated) {
-        req.fixtures = fixtures.list(m_squad, req.season);
-        req.yesterday = sessions.drillsOn(m_squad, addDays(m_date, -1));
-        req.focuses = openFocuses(repo, m_squad, req.season, m_date, err);
-    }
-    req.caps = fixtures.caps();
-    req.drills = DrillBook(repo).list();
     for (const auto& s : m_swap) {
         const auto colon = s.find(':');
         try {
@@ -407,10 +363,61 @@ int PlanVerbs::runPlan(ClubRepository& repo, std::ostream& out, std::ostream& er
         out << "\n" << p.caution << "\n";
     }
     if (m_save) {
-        const SessionSave s = sessions.save(m_squad, p, m_by, nowUtc());
+        const SessionSave s = SessionStore(repo).save(m_squad, p, m_by, nowUtc());
         err << (s.replaced ? "saved (replacing the earlier plan of " : "saved the session of ")
             << p.date << (s.replaced ? ")" : "") << "\n";
     }
+    return kExitOk;
+}
+
+int PlanVerbs::runSessions(ClubRepository& repo, std::ostream& out, std::ostream& err) {
+    for (const auto* d : {&m_from, &m_to})
+        if (!d->empty() && !dayNumber(*d)) {
+            err << "error: " << (d == &m_from ? "--from" : "--to") << " '" << *d
+                << "': expected a date YYYY-MM-DD\n";
+            return kExitBadInput;
+        }
+    const auto sessions = SessionStore(repo).list(m_squad, m_from, m_to);
+    DrillBook book(repo);
+    auto title = [&](std::int64_t id) {
+        const auto d = book.get(id);
+        return d ? d->title : "drill " + std::to_string(id);
+    };
+    if (m_format == "json") {
+        nlohmann::json list = nlohmann::json::array();
+        for (const auto& s : sessions) {
+            nlohmann::json blocks = nlohmann::json::array();
+            for (const auto& b : s.blocks)
+                blocks.push_back({{"role", toString(b.role)},
+                                  {"drill_id", b.drillId},
+                                  {"title", title(b.drillId)},
+                                  {"minutes", b.minutes},
+                                  {"pinned", b.pinned}});
+            nlohmann::json focus = nlohmann::json::array();
+            for (const auto& [id, minutes] : s.focusMinutes)
+                focus.push_back({{"focus_id", id}, {"minutes", minutes}});
+            list.push_back({{"date", s.date},
+                            {"squad", s.squad},
+                            {"day", s.dayLabel},
+                            {"minutes", s.minutes},
+                            {"players", s.players},
+                            {"cap", s.cap},
+                            {"blocks", blocks},
+                            {"focus_minutes", focus},
+                            {"saved_by", s.savedBy},
+                            {"saved_at", s.savedAt}});
+        }
+        out << list.dump(2) << "\n";
+        return kExitOk;
+    }
+    for (const auto& s : sessions) {
+        out << s.date << "  " << s.dayLabel << "  " << s.minutes << " min, " << s.players
+            << " players, cap " << s.cap << "\n";
+        for (const auto& b : s.blocks)
+            out << "    " << b.minutes << " min  " << toString(b.role) << "  " << title(b.drillId)
+                << "\n";
+    }
+    if (sessions.empty()) err << "(no saved sessions: pitchloop plan DATE ... --save)\n";
     return kExitOk;
 }
 

@@ -12,11 +12,13 @@
 
 namespace pitchloop::cli {
 
-/// `fixtures import | add | list | remove | next | caps` and `plan DATE`.
+/// `fixtures import | add | list | remove | next | caps`, `plan DATE` and `sessions`.
 class PlanVerbs {
   public:
     explicit PlanVerbs(CLI::App& app);
-    bool chosen() const { return m_fixtures->parsed() || m_plan->parsed(); }
+    bool chosen() const {
+        return m_fixtures->parsed() || m_plan->parsed() || m_sessions->parsed();
+    }
     int run(const Globals& g, std::ostream& out, std::ostream& err);
 
   private:
@@ -27,6 +29,7 @@ class PlanVerbs {
     int runNext(model::ClubRepository& repo, std::ostream& out, std::ostream& err);
     int runCaps(model::ClubRepository& repo, std::ostream& out, std::ostream& err);
     int runPlan(model::ClubRepository& repo, std::ostream& out, std::ostream& err);
+    int runSessions(model::ClubRepository& repo, std::ostream& out, std::ostream& err);
 
     CLI::App* m_fixtures = nullptr;
     CLI::App* m_import = nullptr;
@@ -36,6 +39,9 @@ class PlanVerbs {
     CLI::App* m_next = nullptr;
     CLI::App* m_caps = nullptr;
     CLI::App* m_plan = nullptr;
+    CLI::App* m_sessions = nullptr;
+    std::string m_from;
+    std::string m_to;
 
     std::string m_squad = "First team";
     std::string m_season;

@@ -106,12 +106,17 @@ int StatusVerbs::run(const Globals& g, std::ostream& out, std::ostream& err) {
     return runSettings(*repo, out, err);
 }
 
-int StatusVerbs::runStatus(ClubRepository& repo, std::ostream& out, std::ostream& err) {
-    auto c = loadContext(repo, m_match, "the club file", err);
-    if (!c) return kExitBadInput;
-    const FlagSettings settings = repo.flagSettings();
-    std::vector<Window> windows;
-    if (m_windows.empty()) {
+std::optional<StatusRun> matchStatuses(ClubRepository& repo, const std::string& match,
+                                      const std::vector<std::string>& windowTexts,
+                                      const std::vector<std::string>& metricIds,
+                                      std::ostream& err) {
+    auto c = loadContext(repo, match, "the club file", err);
+    if (!c) return std::nullopt;
+    StatusRun run;
+    run.settings = repo.flagSettings();
+    const FlagSettings& settings = run.settings;
+    std::vector<Window>& windows = run.windows;
+    if (windowTexts.empty()) {
         windows = {Window{Window::Kind::Match, 1, 0.3}, settings.window,
                    Window{Window::Kind::Season, 0, 0.3},
                    Window{Window::Kind::Ewma, 0, 0.3}};
@@ -120,51 +125,56 @@ int StatusVerbs::runStatus(ClubRepository& repo, std::ostream& out, std::ostream
             if (std::find(unique.begin(), unique.end(), w) == unique.end()) unique.push_back(w);
         windows = unique;
     }
-    for (const auto& text : m_windows) {
+    for (const auto& text : windowTexts) {
         auto w = Window::parse(text);
         if (!w) {
             err << "error: --window " << text << ": expected match, lastN, season or ewma[λ]\n";
-            return kExitBadInput;
+            return std::nullopt;
         }
         windows.push_back(*w);
     }
     auto metrics = repo.metrics();
-    if (!m_metrics.empty()) {
-        for (const auto& id : m_metrics)
+    if (!metricIds.empty()) {
+        for (const auto& id : metricIds)
             if (std::none_of(metrics.begin(), metrics.end(), [&](auto& m) { return m.id == id; })) {
                 err << "error: --metric: no metric '" << id << "'\n";
-                return kExitBadInput;
+                return std::nullopt;
             }
         std::erase_if(metrics, [&](const MetricSpec& m) {
-            return std::find(m_metrics.begin(), m_metrics.end(), m.id) == m_metrics.end();
+            return std::find(metricIds.begin(), metricIds.end(), m.id) == metricIds.end();
         });
     }
-    const ZoneGrid grid = repo.tallyGrid();
+    run.grid = repo.tallyGrid();
     const auto targets = repo.targets(c->squad, c->season);
-    const auto statuses =
-        computeStatus(c->tallies, c->focal, metrics, targets, grid, windows, settings);
+    run.statuses =
+        computeStatus(c->tallies, c->focal, metrics, targets, run.grid, windows, settings);
+    run.metrics = std::move(metrics);
+    run.squad = c->squad;
+    run.season = c->season;
+    run.summary = c->summary;
+    run.focal = c->focal;
+    run.seasonMatches = c->tallies.matchIds.size();
+    return run;
+}
 
+int StatusVerbs::runStatus(ClubRepository& repo, std::ostream& out, std::ostream& err) {
+    const auto run = matchStatuses(repo, m_match, m_windows, m_metrics, err);
+    if (!run) return kExitBadInput;
+    const FlagSettings& settings = run->settings;
+    const std::vector<Window>& windows = run->windows;
+    const std::vector<MetricSpec>& metrics = run->metrics;
+    const ZoneGrid& grid = run->grid;
+    const std::vector<ZoneStatus>& statuses = run->statuses;
     if (m_format == "csv") {
-        out << "match_id,metric,band,lane,window,num,den,value,low,high,level,target,state,p_miss,"
-               "direction,matches,p_value,chance_off,bh_rejected\n";
-        for (const auto& s : statuses)
-            out << csvField(m_match) << ',' << s.metric << ',' << s.band << ',' << s.lane << ','
-                << s.window.name() << ',' << num(s.sum.num) << ',' << num(s.sum.den) << ','
-                << num(s.value) << ',' << num(s.interval.low) << ',' << num(s.interval.high) << ','
-                << num(s.level) << ',' << (s.target ? num(s.target->value) : "") << ','
-                << toString(s.state) << ',' << num(s.pMiss) << ','
-                << (s.target ? std::string(toString(s.target->direction)) : "") << ','
-                << s.sum.matches << ',' << num(s.pValue) << ','
-                << (s.target ? num(s.chanceOff) : "") << ','
-                << (s.target ? (s.bhRejected ? "1" : "0") : "") << "\n";
+        out << statusCsv(m_match, statuses);
         return kExitOk;
     }
     if (m_format == "json") {
         nlohmann::json j;
         j["match_id"] = m_match;
-        j["date"] = c->summary.date;
-        j["squad"] = c->squad;
-        j["season"] = c->season;
+        j["date"] = run->summary.date;
+        j["squad"] = run->squad;
+        j["season"] = run->season;
         j["grid"] = grid.name();
         j["settings"] = {{"level", settings.level},
                          {"off_threshold", settings.offThreshold},
@@ -187,9 +197,9 @@ int StatusVerbs::runStatus(ClubRepository& repo, std::ostream& out, std::ostream
     }
     std::map<std::string, MetricKind> kinds;
     for (const auto& m : metrics) kinds[m.id] = m.kind();
-    out << m_match << "  " << c->summary.date << "  v " << c->summary.opponent << "  — "
-        << c->squad << " " << c->season << ", match " << c->focal + 1 << " of "
-        << c->tallies.matchIds.size() << " stored; intervals at " << num(100 * settings.level)
+    out << m_match << "  " << run->summary.date << "  v " << run->summary.opponent << "  — "
+        << run->squad << " " << run->season << ", match " << run->focal + 1 << " of "
+        << run->seasonMatches << " stored; intervals at " << num(100 * settings.level)
         << " %\n\n";
     out << pad("metric", 25) << pad("zone", 18) << pad("window", 8) << pad("num/den", 13)
         << pad("value", 8) << pad("interval", 16) << pad("target", 10) << pad("state", 16)

@@ -4,13 +4,38 @@
 
 #include "common.h"
 
+#include "status.h"
+
 #include <CLI/CLI.hpp>
+
+#include <optional>
 
 #include <ostream>
 #include <string>
 #include <vector>
 
 namespace pitchloop::cli {
+
+/// Zone statuses of one stored match, as `status` computes them.
+struct StatusRun {
+    std::string squad;
+    std::string season;
+    model::MatchSummary summary;
+    std::size_t focal = 0;         ///< the match's index in its season
+    std::size_t seasonMatches = 0; ///< matches stored in the season
+    model::FlagSettings settings;
+    std::vector<model::Window> windows;
+    std::vector<model::MetricSpec> metrics;
+    model::ZoneGrid grid;
+    std::vector<model::ZoneStatus> statuses;
+};
+
+/// Statuses of `match` in `windows` (texts as --window takes them; the status defaults when
+/// empty) for `metrics` (ids; every metric when empty). nullopt after an error on `err`.
+std::optional<StatusRun> matchStatuses(model::ClubRepository& repo, const std::string& match,
+                                      const std::vector<std::string>& windows,
+                                      const std::vector<std::string>& metrics,
+                                      std::ostream& err);
 
 /// `targets set | retire | list | history | copy-season | import | export`.
 class TargetVerbs {

@@ -65,8 +65,10 @@ struct Workspace {
 std::vector<std::string> lines(const std::string& text) {
     std::vector<std::string> out;
     std::istringstream in(text);
-    for (std::string line; std::getline(in, line);)
+    for (std::string line; std::getline(in, line);) {
+        if (!line.empty() && line.back() == '\r') line.pop_back(); // CSV records end in CRLF
         out.push_back(line);
+    }
     return out;
 }
 

@@ -469,3 +469,19 @@ TEST_CASE("header fields are read") {
     CHECK(m.info.periodLength(3) == 0);
     CHECK_FALSE(m.info.goalsUs.has_value());
 }
+
+TEST_CASE("a match date must be a real calendar date") {
+    for (const char* bad : {"2026-02-29", "2026-04-31", "2026-13-01", "2026-00-10", "26-08-08"}) {
+        INFO(bad);
+        json header = headerJson("us");
+        header["date"] = bad;
+        const ReadResult r = parseMatch(fileText(header, json::array()), "match.json");
+        CHECK_FALSE(r.ok());
+        bool named = false;
+        for (const auto& p : r.errors) named |= p.place == "match" && p.field == "date";
+        CHECK(named);
+    }
+    CHECK(isIsoDate("2028-02-29")); // a leap year
+    CHECK_FALSE(isIsoDate("2100-02-29")); // a century that is not one
+    CHECK(isIsoDate("2000-02-29"));
+}

@@ -1,0 +1,38 @@
+#pragma once
+// Words and numbers as the printed sheets show them (no Qt, so tests read them directly).
+
+#include "planner.h"
+#include "status.h"
+#include "targets.h"
+#include "zones.h"
+
+#include <string>
+
+namespace pitchloop::print {
+
+/// "Tuesday 29 September 2026" for a day number (days since 1970-01-01) and its ISO date.
+std::string longDate(const std::string& isoDate, long dayNumber);
+/// "Warm-up", "Main", "Cool-down".
+std::string roleText(model::BlockRole role);
+/// "45.2 %" for rates, "2.40" otherwise.
+std::string valueText(model::MetricKind kind, double value);
+/// " a match" for counts; empty otherwise.
+std::string unitText(model::MetricKind kind);
+/// "≥ 80.0 %" or "≤ 2.00".
+std::string targetText(model::Direction direction, model::MetricKind kind, double value);
+/// P(miss) with three decimals; "> 0.999" when it would round to 1.000, "< 0.001" likewise.
+std::string probabilityText(double p);
+/// "band 2, lane 5" or "whole pitch".
+std::string zoneText(int band, int lane);
+/// "the last 5 matches", "this match alone", "the season so far", "the EWMA (λ 0.3)".
+std::string windowText(const model::Window& window);
+/// "on target", "watch", "off target", "too little data", "no target".
+std::string stateText(model::FlagState state);
+/// "1–2 L" from our side's point of view; empty without a score.
+std::string scoreText(const std::optional<int>& us, const std::optional<int>& them);
+/// "6 bands × 5 lanes" (equal zones) or "6 bands × 5 lanes at the box lines" (markings).
+std::string gridText(const model::ZoneGrid& grid);
+/// A number with up to `decimals` decimals, trailing zeros dropped ("0.999", "90").
+std::string shortNumber(double v, int decimals = 3);
+
+} // namespace pitchloop::print
