@@ -14,8 +14,14 @@ ApplicationWindow {
     property int currentPage: 0
     readonly property var pages: [
         { name: "season", title: qsTr("Season"), shortcut: "Ctrl+1" },
-        { name: "debrief", title: qsTr("Match debrief"), shortcut: "Ctrl+2" },
-        { name: "zone", title: qsTr("Zone trend"), shortcut: "Ctrl+3" }
+        { name: "import", title: qsTr("Load matches"), shortcut: "Ctrl+2" },
+        { name: "targets", title: qsTr("Season targets"), shortcut: "Ctrl+3" },
+        { name: "debrief", title: qsTr("Match debrief"), shortcut: "Ctrl+4" },
+        { name: "zone", title: qsTr("Zone trend"), shortcut: "Ctrl+5" },
+        { name: "drills", title: qsTr("Drill notes"), shortcut: "Ctrl+6" },
+        { name: "focuses", title: qsTr("Focuses"), shortcut: "Ctrl+7" },
+        { name: "planner", title: qsTr("Week planner"), shortcut: "Ctrl+8" },
+        { name: "settings", title: qsTr("Settings"), shortcut: "Ctrl+9" }
     ]
     readonly property int pageCount: pages.length
     readonly property var pageNames: pages.map(page => page.name)
@@ -35,6 +41,12 @@ ApplicationWindow {
     function openZone(metricId: string, band: int, lane: int, matchId: string) {
         zonePage.show(metricId, band, lane, matchId)
         showPage("zone")
+    }
+
+    // Opens a focus on a flagged zone (band 0, lane 0: the whole pitch) after a match.
+    function openFocus(metricId: string, band: int, lane: int, matchId: string) {
+        focusesPage.openFromZone(metricId, band, lane, matchId)
+        showPage("focuses")
     }
 
     width: 1280
@@ -158,6 +170,16 @@ ApplicationWindow {
                 session: root.session
                 onOpenDebrief: matchId => root.openDebrief(matchId)
                 onOpenZone: (metricId, band, lane, matchId) => root.openZone(metricId, band, lane, matchId)
+                onOpenPage: name => root.showPage(name)
+            }
+            ImportPage {
+                id: importPage
+                session: root.session
+                onOpenDebrief: matchId => root.openDebrief(matchId)
+                onShowRequested: root.showPage("import")
+            }
+            TargetsPage {
+                session: root.session
             }
             DebriefPage {
                 id: debriefPage
@@ -168,6 +190,28 @@ ApplicationWindow {
                 id: zonePage
                 session: root.session
             }
+            DrillsPage {
+                session: root.session
+            }
+            FocusesPage {
+                id: focusesPage
+                session: root.session
+            }
+            PlannerPage {
+                session: root.session
+            }
+            SettingsPage {
+                session: root.session
+            }
+        }
+    }
+
+    // Match files dropped anywhere on the window are loaded on the import page.
+    FileDropArea {
+        anchors.fill: parent
+        onFilesDropped: urls => {
+            root.showPage("import")
+            importPage.load(urls)
         }
     }
 }

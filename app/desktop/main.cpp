@@ -90,7 +90,8 @@ int main(int argc, char* argv[]) {
     const ClubChoice choice = chooseClubFile(
         explicitClubFile(cli.value(dbOption)), userClubFile(),
         {QDir::current().filePath(QStringLiteral("sample-club/club.sqlite")),
-         QStringLiteral(PITCHLOOP_SOURCE_DIR "/sample-club/club.sqlite")});
+         QStringLiteral(PITCHLOOP_SOURCE_DIR "/sample-club/club.sqlite")},
+        rememberedClubFile());
     ClubSession session;
     session.open(choice.file, choice.demo);
 

@@ -32,7 +32,7 @@ bool waitForFrames(QQuickWindow* window, int frames) {
         timeout.setSingleShot(true);
         QObject::connect(&timeout, &QTimer::timeout, &loop, [&loop] { loop.exit(1); });
         QObject::connect(window, &QQuickWindow::frameSwapped, &loop, [&loop] { loop.exit(0); });
-        window->requestUpdate();
+        window->update();
         timeout.start(5000);
         if (loop.exec() != 0) return false;
     }

@@ -13,12 +13,53 @@ Page {
 
     signal openDebrief(string matchId)
     signal openZone(string metricId, int band, int lane, string matchId)
+    signal openPage(string name)
 
     background: Rectangle { color: Theme.window }
 
     SeasonOverview {
         id: overview
         session: root.session
+    }
+
+    ClubAgenda {
+        id: agenda
+        session: root.session
+    }
+
+    // A card of the "coming up" row: a headline, a detail line, and a button to its screen.
+    component AgendaCard: Card {
+        id: card
+        property string headline
+        property string detail
+        property string action
+        property string page
+        Layout.fillWidth: true
+        Layout.preferredWidth: 1
+        Layout.preferredHeight: 136
+        Label {
+            Layout.fillWidth: true
+            text: card.headline
+            font.pixelSize: Theme.fontLarge
+            font.bold: true
+            color: Theme.text
+            elide: Text.ElideRight
+        }
+        Label {
+            Layout.fillWidth: true
+            text: card.detail
+            color: Theme.textMuted
+            font.pixelSize: Theme.fontSmall + 1
+            wrapMode: Text.WordWrap
+            maximumLineCount: 2
+            elide: Text.ElideRight
+        }
+        Button {
+            text: card.action
+            flat: true
+            palette.buttonText: Theme.accent
+            onClicked: root.openPage(card.page)
+        }
     }
 
     ColumnLayout {
@@ -164,6 +205,38 @@ Page {
                     color: Theme.textMuted
                     font.pixelSize: Theme.fontSmall
                 }
+            }
+        }
+
+        RowLayout {
+            Layout.fillWidth: true
+            spacing: Theme.gapLarge
+
+            AgendaCard {
+                title: qsTr("Next match")
+                headline: agenda.nextMatchText
+                detail: agenda.nextMatchDetail
+                action: qsTr("Plan the week →")
+                page: "planner"
+            }
+            AgendaCard {
+                title: qsTr("Next planned session")
+                headline: agenda.nextSessionText
+                detail: agenda.nextSessionDetail
+                action: qsTr("Open the week planner →")
+                page: "planner"
+            }
+            AgendaCard {
+                title: qsTr("Focuses (today is %1)").arg(agenda.todayText)
+                Layout.preferredWidth: 1.4
+                headline: agenda.openFocusCount === 0
+                          ? qsTr("No open focus")
+                          : qsTr("%n open", "", agenda.openFocusCount)
+                            + (agenda.dueCount > 0 ? qsTr(" · %n due for review", "", agenda.dueCount) : "")
+                detail: agenda.focusLines.length > 0 ? agenda.focusLines[0]
+                        : qsTr("Open one from a slipped zone in the match debrief")
+                action: qsTr("Focuses and reviews →")
+                page: "focuses"
             }
         }
 

@@ -1,0 +1,290 @@
+#include "importview.h"
+
+#include "clubsession.h"
+#include "display.h"
+#include "importresultmodel.h"
+#include "ingest.h"
+#include "logging.h"
+#include "repository.h"
+
+#include <QDir>
+#include <QDirIterator>
+#include <QFile>
+#include <QFileInfo>
+#include <QLocale>
+
+#include <algorithm>
+#include <exception>
+#include <filesystem>
+
+namespace pitchloop::desktop {
+
+using namespace pitchloop::model;
+
+namespace {
+
+/// Loads one file through the worker's own connection and words the outcome. Runs on the
+/// worker thread; touches nothing shared.
+ImportResult ingestOne(ClubRepository& repo, const QString& path, const IngestOptions& options) {
+    ImportResult r;
+    r.path = path;
+    r.fileName = QFileInfo(path).fileName();
+    IngestReport report;
+    try {
+        report = ingestFile(repo, std::filesystem::path(QFile::encodeName(path).toStdString()), options);
+    } catch (const std::exception& e) {
+        r.outcome = ImportResult::Failed;
+        r.detail = QStringLiteral("Nothing of this file was stored.");
+        r.problems << QStringLiteral("%1: the club file could not be written: %2")
+                          .arg(r.fileName, QString::fromUtf8(e.what()));
+        return r;
+    }
+    // The row names the file already: problems name it by its short name, not its full path.
+    const std::string shortName = r.fileName.toStdString();
+    const auto describe = [&](Problem p) {
+        p.file = shortName;
+        return QString::fromStdString(p.describe());
+    };
+    for (const auto& p : report.errors) r.problems << describe(p);
+    for (const auto& p : report.warnings) r.warnings << describe(p);
+    r.matchId = QString::fromStdString(report.matchId);
+    switch (report.status) {
+    case IngestStatus::Added: r.outcome = ImportResult::Stored; break;
+    case IngestStatus::Replaced: r.outcome = ImportResult::Replaced; break;
+    case IngestStatus::Unchanged: r.outcome = ImportResult::Unchanged; break;
+    case IngestStatus::Invalid:
+    case IngestStatus::Refused: r.outcome = ImportResult::Failed; break;
+    }
+    if (r.outcome == ImportResult::Failed) {
+        r.detail = report.status == IngestStatus::Refused
+                       ? QStringLiteral("Nothing of this file was stored. To store it in place of the "
+                                        "stored match, tick “Replace changed matches” and load it again.")
+                       : QStringLiteral("Nothing of this file was stored.");
+        return r;
+    }
+    if (const auto summary = repo.matchSummary(report.matchId)) {
+        r.matchDate = QString::fromStdString(summary->date);
+        r.detail = QStringLiteral("%1 · %2 v %3 · %4 events")
+                       .arg(r.matchId, dateText(summary->date),
+                            QString::fromStdString(summary->opponent), QLocale().toString(report.events));
+    }
+    if (r.outcome == ImportResult::Unchanged)
+        r.detail += QStringLiteral(" · this very file is already in the club file");
+    return r;
+}
+
+QString plural(int n, const QString& one, const QString& many) {
+    return n == 1 ? QStringLiteral("1 %1").arg(one) : QStringLiteral("%1 %2").arg(n).arg(many);
+}
+
+} // namespace
+
+ImportView::ImportView(QObject* parent) : SessionClient(parent), m_results(new ImportResultModel(this)) {}
+
+ImportView::~ImportView() {
+    if (!m_thread) return;
+    m_cancel->store(true);
+    m_thread->wait();
+    delete m_thread;
+}
+
+QString ImportView::progressText() const {
+    if (!m_running) return {};
+    if (cancelling()) return tr("Cancelling after %1 …").arg(m_currentFile);
+    return tr("%1 of %2 files · %3").arg(m_done).arg(total()).arg(m_currentFile);
+}
+
+void ImportView::setReplace(bool replace) {
+    if (replace == m_replace) return;
+    m_replace = replace;
+    emit replaceChanged();
+}
+
+bool ImportView::hasFailures() const { return m_results->countOf(ImportResult::Failed) > 0; }
+
+void ImportView::refresh() {
+    const ClubSession* s = session();
+    const QString file = s && s->isOpen() ? s->clubFile() : QString();
+    const bool can = !file.isEmpty() && file != QStringLiteral(":memory:");
+    if (can == m_canLoad && file == m_clubFile) return;
+    m_canLoad = can;
+    m_clubFile = file;
+    emit canLoadChanged();
+}
+
+void ImportView::setSummary(const QString& text) {
+    m_summary = text;
+    emit summaryChanged();
+}
+
+QStringList ImportView::expandPaths(const QStringList& paths) {
+    QStringList out;
+    for (const QString& path : paths) {
+        const QFileInfo info(path);
+        if (!info.isDir()) {
+            out << path;
+            continue;
+        }
+        QStringList inside;
+        QDirIterator it(path, {QStringLiteral("*.json")}, QDir::Files | QDir::Readable,
+                        QDirIterator::Subdirectories);
+        while (it.hasNext()) inside << it.next();
+        std::sort(inside.begin(), inside.end());
+        out << inside;
+    }
+    return out;
+}
+
+bool ImportView::loadUrls(const QList<QUrl>& urls) {
+    QStringList paths;
+    QStringList notLocal;
+    for (const QUrl& url : urls) {
+        if (url.isLocalFile()) paths << url.toLocalFile();
+        else notLocal << url.toString();
+    }
+    if (paths.isEmpty() && !notLocal.isEmpty()) {
+        setSummary(tr("Only files on this computer can be loaded, not %1.").arg(notLocal.join(QStringLiteral(", "))));
+        return false;
+    }
+    return loadPaths(paths);
+}
+
+bool ImportView::loadPaths(const QStringList& given) {
+    if (m_running) {
+        setSummary(tr("Still loading the previous files: wait for them, or cancel, then try again."));
+        return false;
+    }
+    ClubSession* s = session();
+    if (!s || !s->isOpen()) {
+        setSummary(tr("No club file is open, so there is nowhere to store matches."));
+        return false;
+    }
+    if (!m_canLoad) {
+        setSummary(tr("This club file is not a file on disk, so matches cannot be loaded into it."));
+        return false;
+    }
+    const QStringList paths = expandPaths(given);
+    if (paths.isEmpty()) {
+        setSummary(tr("No match files there: a match file is a .json file (see docs/match.schema.json)."));
+        return false;
+    }
+
+    m_results->clear();
+    m_paths = paths;
+    m_done = 0;
+    m_currentFile = QFileInfo(paths.front()).fileName();
+    m_latestMatchId.clear();
+    m_latestMatchText.clear();
+    m_summary.clear();
+    emit summaryChanged();
+    m_cancel = std::make_shared<std::atomic<bool>>(false);
+    m_running = true;
+    emit runningChanged();
+    emit progressChanged();
+
+    IngestOptions options;
+    options.replace = m_replace;
+    // The worker opens its own connection: an SQLite connection must stay on one thread.
+    const std::string file = QFile::encodeName(s->clubFile()).toStdString();
+    m_thread = QThread::create([this, cancel = m_cancel, file, paths, options] {
+        QString fault;
+        std::unique_ptr<ClubRepository> repo;
+        try {
+            repo = std::make_unique<ClubRepository>(file);
+        } catch (const std::exception& e) {
+            fault = QString::fromUtf8(e.what());
+        }
+        for (int i = 0; repo && i < paths.size() && !cancel->load(); ++i) {
+            const QString name = QFileInfo(paths[i]).fileName();
+            QMetaObject::invokeMethod(this, [this, i, name] { fileStarted(i, name); }, Qt::QueuedConnection);
+            const ImportResult result = ingestOne(*repo, paths[i], options);
+            QMetaObject::invokeMethod(this, [this, result] { fileDone(result); }, Qt::QueuedConnection);
+        }
+        QMetaObject::invokeMethod(this, [this, fault] { workerDone(fault); }, Qt::QueuedConnection);
+    });
+    m_thread->setObjectName(QStringLiteral("match import"));
+    m_thread->start();
+    return true;
+}
+
+void ImportView::cancel() {
+    if (!m_running || !m_cancel || m_cancel->load()) return;
+    m_cancel->store(true);
+    emit progressChanged();
+}
+
+void ImportView::fileStarted(int index, const QString& name) {
+    Q_UNUSED(index);
+    m_currentFile = name;
+    emit progressChanged();
+}
+
+void ImportView::fileDone(ImportResult result) {
+    if (!result.problems.isEmpty())
+        qCInfo(lcDesktop).noquote() << "not loaded:" << result.problems.join(QStringLiteral("; "));
+    m_results->append(std::move(result));
+    ++m_done;
+    emit progressChanged();
+}
+
+void ImportView::workerDone(const QString& fault) {
+    m_thread->wait();
+    delete m_thread;
+    m_thread = nullptr;
+    const bool cancelled = m_cancel->load();
+    for (int i = m_results->count(); i < m_paths.size(); ++i) {
+        ImportResult r;
+        r.path = m_paths[i];
+        r.fileName = QFileInfo(r.path).fileName();
+        r.outcome = ImportResult::NotLoaded;
+        r.detail = fault.isEmpty() ? tr("Not loaded: the load was cancelled before this file.")
+                                   : tr("Not loaded: the club file could not be opened.");
+        m_results->append(std::move(r));
+    }
+
+    // The newest match this load stored, for "open its debrief".
+    const ImportResult* latest = nullptr;
+    for (const ImportResult& r : m_results->rows()) {
+        if (r.outcome != ImportResult::Stored && r.outcome != ImportResult::Replaced) continue;
+        if (!latest || r.matchDate > latest->matchDate) latest = &r;
+    }
+    if (latest) {
+        m_latestMatchId = latest->matchId;
+        m_latestMatchText = latest->detail;
+    }
+
+    const int stored = m_results->countOf(ImportResult::Stored);
+    const int replaced = m_results->countOf(ImportResult::Replaced);
+    const int unchanged = m_results->countOf(ImportResult::Unchanged);
+    const int failed = m_results->countOf(ImportResult::Failed);
+    const int notLoaded = m_results->countOf(ImportResult::NotLoaded);
+    QStringList parts;
+    if (stored > 0) parts << tr("%1 stored").arg(stored);
+    if (replaced > 0) parts << tr("%1 replaced").arg(replaced);
+    if (unchanged > 0) parts << tr("%1 unchanged").arg(unchanged);
+    if (failed > 0) parts << tr("%1 failed").arg(failed);
+    if (notLoaded > 0) parts << tr("%1 not loaded").arg(notLoaded);
+    QString summary;
+    if (!fault.isEmpty())
+        summary = tr("Could not open the club file to load into it: %1").arg(fault);
+    else if (cancelled)
+        summary = tr("Cancelled after %1 of %2: %3.")
+                      .arg(m_done)
+                      .arg(plural(total(), tr("file"), tr("files")), parts.join(QStringLiteral(", ")));
+    else
+        summary = tr("Loaded %1: %2.").arg(plural(total(), tr("file"), tr("files")), parts.join(QStringLiteral(", ")));
+    if (failed > 0)
+        summary += QStringLiteral(" ") + (failed == 1 ? tr("Nothing of the failed file was stored; its problems are listed below.")
+                                                   : tr("Nothing of the failed files was stored; their problems are listed below."));
+
+    m_running = false;
+    m_currentFile.clear();
+    m_summary = summary;
+    if ((stored > 0 || replaced > 0) && session()) session()->reload();
+    emit progressChanged();
+    emit runningChanged();
+    emit summaryChanged();
+    emit finished();
+}
+
+} // namespace pitchloop::desktop

@@ -1,0 +1,203 @@
+pragma ComponentBehavior: Bound
+import QtQuick
+import QtQuick.Controls
+import QtQuick.Layouts
+import Pitchloop
+
+// A focus's follow-up review: before and after with their intervals, the change and its test,
+// the training time, the control chart, and the staff's verdict (which closes the focus and
+// stores these numbers with it). The verdict's text lives in the controller.
+Card {
+    id: root
+
+    required property FocusView view
+
+    title: qsTr("Follow-up review")
+
+    component Line: Label {
+        Layout.fillWidth: true
+        color: Theme.text
+        wrapMode: Text.WordWrap
+        font.pixelSize: Theme.fontSmall + 1
+    }
+    component KeyEntry: Row {
+        id: entry
+        property alias text: label.text
+        default property alias swatch: holder.data
+        spacing: Theme.gapSmall
+        Item {
+            id: holder
+            width: 18
+            height: 14
+            anchors.verticalCenter: parent.verticalCenter
+        }
+        Label {
+            id: label
+            anchors.verticalCenter: parent.verticalCenter
+            color: Theme.textMuted
+            font.pixelSize: Theme.fontSmall
+        }
+    }
+
+    Label {
+        visible: !root.view.hasReview
+        Layout.fillWidth: true
+        text: root.view.reviewProblem
+        color: Theme.text
+        wrapMode: Text.WordWrap
+    }
+
+    RowLayout {
+        visible: root.view.hasReview
+        spacing: Theme.margin
+        FigureTile {
+            value: root.view.beforeValueText
+            caption: qsTr("before the start")
+        }
+        Label {
+            text: "→"
+            font.pixelSize: Theme.fontHeading
+            color: Theme.textMuted
+        }
+        FigureTile {
+            value: root.view.afterValueText
+            caption: qsTr("from the start on")
+        }
+    }
+    Line { visible: root.view.hasReview; text: root.view.beforeText }
+    Line { visible: root.view.hasReview; text: root.view.afterText }
+    Line { visible: root.view.hasReview; text: root.view.changeText; font.bold: true }
+    Line { visible: root.view.hasReview; text: root.view.testText }
+    Line { visible: root.view.hasReview; text: root.view.beliefText }
+    Line { visible: root.view.hasReview; text: root.view.trainingText; color: Theme.textMuted }
+
+    Label {
+        visible: root.view.hasReview
+        Layout.fillWidth: true
+        Layout.topMargin: Theme.gap
+        text: root.view.chartTitle
+        color: Theme.textMuted
+        font.pixelSize: Theme.fontSmall
+        font.bold: true
+        wrapMode: Text.WordWrap
+    }
+    ControlChart {
+        visible: root.view.hasReview
+        Layout.fillWidth: true
+        Layout.preferredHeight: 230
+        chart: root.view.chart
+    }
+    Flow {
+        visible: root.view.hasReview
+        Layout.fillWidth: true
+        spacing: Theme.gapLarge
+        KeyEntry {
+            text: qsTr("match value")
+            Rectangle { width: 8; height: 8; radius: 4; color: "#3b4352"; anchors.centerIn: parent }
+        }
+        KeyEntry {
+            text: qsTr("centre line")
+            Rectangle { width: 18; height: 2; color: "#7c8594"; anchors.centerIn: parent }
+        }
+        KeyEntry {
+            text: qsTr("3σ limits")
+            Row {
+                anchors.centerIn: parent
+                spacing: 3
+                Repeater {
+                    model: 3
+                    Rectangle { width: 4; height: 2; color: Theme.text }
+                }
+            }
+        }
+        KeyEntry {
+            text: qsTr("EWMA")
+            Rectangle { width: 18; height: 3; color: Theme.accent; anchors.centerIn: parent }
+        }
+        KeyEntry {
+            text: qsTr("beyond a limit, better side")
+            StateMarker { zoneState: ZoneState.OnTarget; size: 13; anchors.centerIn: parent }
+        }
+        KeyEntry {
+            text: qsTr("worse side")
+            StateMarker { zoneState: ZoneState.Slipped; size: 13; anchors.centerIn: parent }
+        }
+    }
+    Line { visible: root.view.hasReview; text: root.view.chartReadingText }
+    Label {
+        visible: root.view.reviewSourceText.length > 0
+        Layout.fillWidth: true
+        text: root.view.reviewSourceText
+        color: Theme.textMuted
+        font.pixelSize: Theme.fontSmall
+        wrapMode: Text.WordWrap
+    }
+
+    // The verdict
+    Label {
+        visible: root.view.closed
+        Layout.fillWidth: true
+        Layout.topMargin: Theme.gap
+        text: root.view.verdictText
+        font.bold: true
+        color: Theme.text
+        wrapMode: Text.WordWrap
+    }
+    ColumnLayout {
+        visible: root.view.canRecordVerdict
+        Layout.fillWidth: true
+        Layout.topMargin: Theme.gap
+        spacing: Theme.gapSmall
+        Label {
+            text: qsTr("The staff's verdict (closes the focus and stores these numbers with it)")
+            color: Theme.textMuted
+            font.pixelSize: Theme.fontSmall
+            font.bold: true
+        }
+        Flow {
+            Layout.fillWidth: true
+            spacing: Theme.gapSmall
+            Repeater {
+                model: root.view.verdictOptions
+                delegate: RadioButton {
+                    required property var modelData
+                    text: modelData.text
+                    checked: root.view.verdictChoice === modelData.value
+                    onClicked: root.view.verdictChoice = modelData.value
+                }
+            }
+        }
+        RowLayout {
+            Layout.fillWidth: true
+            spacing: Theme.gap
+            TextField {
+                objectName: "verdictNote"
+                Layout.fillWidth: true
+                Layout.preferredWidth: 3
+                text: root.view.verdictNote
+                placeholderText: qsTr("what the staff saw, in a line")
+                onTextEdited: root.view.verdictNote = text
+            }
+            TextField {
+                objectName: "verdictBy"
+                Layout.fillWidth: true
+                Layout.preferredWidth: 2
+                text: root.view.verdictBy
+                placeholderText: qsTr("recorded by")
+                onTextEdited: root.view.verdictBy = text
+            }
+            Button {
+                text: qsTr("Record verdict")
+                highlighted: true
+                onClicked: root.view.recordVerdict()
+            }
+        }
+        Label {
+            visible: root.view.verdictProblem.length > 0
+            Layout.fillWidth: true
+            text: "▲ " + root.view.verdictProblem
+            color: Theme.error
+            wrapMode: Text.WordWrap
+        }
+    }
+}

@@ -1,0 +1,268 @@
+pragma ComponentBehavior: Bound
+import QtQuick
+import QtQuick.Controls
+import QtQuick.Dialogs
+import QtQuick.Layouts
+import Pitchloop
+
+// The club's settings: which club file is open (and opening another), the zone grid, how zones
+// are judged (window, interval, thresholds, false discovery rate) and the intensity cap of each
+// microcycle day. A save is checked first and can be undone.
+Page {
+    id: root
+
+    required property ClubSession session
+
+    background: Rectangle { color: Theme.window }
+
+    SettingsView {
+        id: settings
+        session: root.session
+    }
+
+    Shortcut {
+        sequence: "Ctrl+S"
+        enabled: root.visible
+        onActivated: settings.save()
+    }
+    Shortcut {
+        sequence: "Ctrl+Z"
+        enabled: root.visible && settings.canUndo
+        onActivated: settings.undo()
+    }
+
+    FileDialog {
+        id: openDialog
+        title: qsTr("Open another club file")
+        fileMode: FileDialog.OpenFile
+        nameFilters: [qsTr("Club files (*.sqlite *.db)"), qsTr("All files (*)")]
+        onAccepted: settings.openClubFile(selectedFile)
+    }
+
+    ColumnLayout {
+        anchors.fill: parent
+        anchors.margins: Theme.margin
+        spacing: Theme.gap + 2
+
+        RowLayout {
+            Layout.fillWidth: true
+            spacing: Theme.gap
+            ColumnLayout {
+                Layout.fillWidth: true
+                spacing: 0
+                Label {
+                    text: qsTr("Settings")
+                    font.pixelSize: Theme.fontTitle
+                    font.bold: true
+                    color: Theme.text
+                }
+                Label {
+                    Layout.fillWidth: true
+                    text: settings.ruleText
+                    color: Theme.textMuted
+                    wrapMode: Text.WordWrap
+                }
+            }
+            Button {
+                text: qsTr("Undo last save  (Ctrl+Z)")
+                enabled: settings.canUndo
+                onClicked: settings.undo()
+            }
+            Button {
+                text: qsTr("Revert")
+                enabled: settings.edited
+                onClicked: settings.revert()
+            }
+            Button {
+                text: qsTr("Save settings  (Ctrl+S)")
+                highlighted: true
+                enabled: root.session.isOpen
+                onClicked: settings.save()
+            }
+        }
+
+        Label {
+            visible: settings.problems.length > 0
+            Layout.fillWidth: true
+            text: qsTr("Problem: %1").arg(settings.problems)
+            color: Theme.error
+            wrapMode: Text.WordWrap
+        }
+        Label {
+            visible: settings.message.length > 0
+            Layout.fillWidth: true
+            text: settings.message
+            color: Theme.text
+            wrapMode: Text.WordWrap
+        }
+
+        RowLayout {
+            Layout.fillWidth: true
+            Layout.fillHeight: true
+            spacing: Theme.gapLarge
+
+            ColumnLayout {
+                Layout.fillWidth: true
+                Layout.fillHeight: true
+                spacing: Theme.gapLarge
+
+                Card {
+                    title: qsTr("Club file")
+                    Layout.fillWidth: true
+                    RowLayout {
+                        Layout.fillWidth: true
+                        spacing: Theme.gap
+                        Label {
+                            Layout.fillWidth: true
+                            text: root.session.clubFile.length > 0 ? root.session.clubFile : qsTr("No club file is open.")
+                            color: Theme.text
+                            elide: Text.ElideMiddle
+                        }
+                        Button {
+                            text: qsTr("Open another club file…")
+                            onClicked: openDialog.open()
+                        }
+                    }
+                    Label {
+                        Layout.fillWidth: true
+                        text: (root.session.demo ? qsTr("This is the demo club (invented data). ") : "")
+                              + qsTr("A club file opened here opens again at the next start, unless --db or $PITCHLOOP_DB names another.")
+                        color: Theme.textMuted
+                        font.pixelSize: Theme.fontSmall
+                        wrapMode: Text.WordWrap
+                    }
+                    Label {
+                        Layout.topMargin: Theme.gap
+                        text: qsTr("Zone grid: %1").arg(settings.gridText)
+                        color: Theme.text
+                    }
+                    Label {
+                        Layout.fillWidth: true
+                        text: qsTr("Fixed for this club file: its tallies, targets and focuses are stored zone by zone on this grid.")
+                        color: Theme.textMuted
+                        font.pixelSize: Theme.fontSmall
+                        wrapMode: Text.WordWrap
+                    }
+                }
+
+                Card {
+                    title: qsTr("How zones are judged (docs/statistics.md)")
+                    Layout.fillWidth: true
+                    Layout.fillHeight: true
+
+                    SettingsRow {
+                        Layout.fillWidth: true
+                        label: qsTr("Judged window")
+                        explanation: qsTr("The matches a debrief judges, ending at the match.")
+                        defaultText: settings.windowDefault
+                        ComboBox {
+                            Layout.preferredWidth: 190
+                            model: [qsTr("Last N matches"), qsTr("Season so far"), qsTr("EWMA"), qsTr("This match alone")]
+                            currentIndex: settings.windowKind
+                            onActivated: index => settings.windowKind = index
+                        }
+                        Label {
+                            visible: settings.windowKind === 0 || settings.windowKind === 2
+                            text: settings.windowKind === 0 ? qsTr("N") : qsTr("λ")
+                            color: Theme.textMuted
+                        }
+                        TextField {
+                            visible: settings.windowKind === 0
+                            Layout.preferredWidth: 64
+                            text: settings.windowNText
+                            onTextEdited: settings.windowNText = text
+                        }
+                        TextField {
+                            visible: settings.windowKind === 2
+                            Layout.preferredWidth: 64
+                            text: settings.lambdaText
+                            onTextEdited: settings.lambdaText = text
+                        }
+                    }
+                    SettingsRow {
+                        Layout.fillWidth: true
+                        label: qsTr("Interval level")
+                        explanation: qsTr("Confidence of the interval around every value; Wilson or Jeffreys for rates (counts: exact Poisson).")
+                        defaultText: settings.levelDefault
+                        TextField {
+                            Layout.preferredWidth: 90
+                            text: settings.levelText
+                            onTextEdited: settings.levelText = text
+                        }
+                        ComboBox {
+                            Layout.preferredWidth: 190
+                            model: [qsTr("Wilson (rates)"), qsTr("Jeffreys (rates)")]
+                            currentIndex: settings.intervalMethod
+                            onActivated: index => settings.intervalMethod = index
+                        }
+                    }
+                    SettingsRow {
+                        Layout.fillWidth: true
+                        label: qsTr("Off-target threshold")
+                        explanation: qsTr("Off target when P(true value on the wrong side of the target) reaches this; chosen by simulation to keep false flags rare.")
+                        defaultText: settings.offDefault
+                        TextField {
+                            Layout.preferredWidth: 90
+                            text: settings.offThresholdText
+                            onTextEdited: settings.offThresholdText = text
+                        }
+                    }
+                    SettingsRow {
+                        Layout.fillWidth: true
+                        label: qsTr("Watch threshold")
+                        explanation: qsTr("On watch when P(short of the watch line: the target moved by its margin) reaches this.")
+                        defaultText: settings.watchDefault
+                        TextField {
+                            Layout.preferredWidth: 90
+                            text: settings.watchThresholdText
+                            onTextEdited: settings.watchThresholdText = text
+                        }
+                    }
+                    SettingsRow {
+                        Layout.fillWidth: true
+                        label: qsTr("False discovery rate")
+                        explanation: qsTr("With it on, an off-target flag must also pass Benjamini–Hochberg at q among all judged zones.")
+                        defaultText: settings.fdrDefault
+                        CheckBox {
+                            text: settings.fdr ? qsTr("On") : qsTr("Off")
+                            checked: settings.fdr
+                            onToggled: settings.fdr = checked
+                        }
+                        Label {
+                            text: qsTr("q")
+                            color: Theme.textMuted
+                        }
+                        TextField {
+                            Layout.preferredWidth: 90
+                            text: settings.fdrQText
+                            onTextEdited: settings.fdrQText = text
+                        }
+                    }
+                    Item { Layout.fillHeight: true }
+                }
+            }
+
+            Card {
+                title: qsTr("Intensity cap per microcycle day")
+                Layout.preferredWidth: 430
+                Layout.fillHeight: true
+
+                Label {
+                    Layout.fillWidth: true
+                    text: qsTr("The highest drill intensity the planner may choose each day: 1 recovery, 2 light, 3 moderate, 4 high, 5 maximal; 0 means no session. Common practice, no published source. Congested weeks take the lower cap of their two days.")
+                    color: Theme.textMuted
+                    font.pixelSize: Theme.fontSmall
+                    wrapMode: Text.WordWrap
+                }
+                Repeater {
+                    model: settings.caps
+                    delegate: CapEditDelegate {
+                        Layout.fillWidth: true
+                        onEdited: (row, text) => settings.caps.setText(row, text)
+                    }
+                }
+                Item { Layout.fillHeight: true }
+            }
+        }
+    }
+}
