@@ -185,6 +185,7 @@ ApplicationWindow {
                 id: debriefPage
                 session: root.session
                 onOpenZone: (metricId, band, lane, matchId) => root.openZone(metricId, band, lane, matchId)
+                onOpenFocus: (metricId, band, lane, matchId) => root.openFocus(metricId, band, lane, matchId)
             }
             ZonePage {
                 id: zonePage

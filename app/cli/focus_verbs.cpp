@@ -9,7 +9,6 @@
 #include <SQLiteCpp/Statement.h>
 #include <nlohmann/json.hpp>
 
-#include <chrono>
 #include <cmath>
 #include <cstdio>
 

@@ -66,15 +66,22 @@ void MatchDebrief::clear() {
     m_betterText.clear();
     m_windowText.clear();
     m_judgedText.clear();
+}
+
+void MatchDebrief::clearModels() {
     m_matchMap->clear();
     m_windowMap->clear();
     m_items->reset({});
+    m_itemsSeason.reset();
 }
 
 void MatchDebrief::refresh() {
+    // The models are kept until the new numbers are in, so a metric switch updates them in
+    // place instead of rebuilding every delegate (docs/performance.md, "Desktop app").
     clear();
     ClubSession* s = session();
     if (!s || !s->isOpen() || s->matchSummaries().empty()) {
+        clearModels();
         emit changed();
         return;
     }
@@ -83,6 +90,7 @@ void MatchDebrief::refresh() {
     const auto season = s->seasonOf(match->id);
     const auto focal = season ? season->indexOf(match->id) : std::nullopt;
     if (!focal) {
+        clearModels();
         emit changed();
         return;
     }
@@ -98,6 +106,7 @@ void MatchDebrief::refresh() {
     const MetricSpec* metric = s->metricSpec(m_metricId.toStdString());
     if (!metric) metric = s->metricSpec(defaultMetric(debriefed, s->metricSpecs()));
     if (!metric) {
+        clearModels();
         emit changed();
         return;
     }
@@ -172,15 +181,19 @@ void MatchDebrief::refresh() {
 
     if (m_hasTargets) {
         const QString phrase = windowPhrase(windows.judged);
-        auto rows = debriefRows(tr("Slipped over %1").arg(phrase), debriefed.slippedInWindow,
-                                s->metricsById(), debriefed.previousMatchId, true);
-        auto inMatchOnly = debriefRows(tr("Slipped in this match alone"), debriefed.slippedInMatch,
-                                       s->metricsById(), debriefed.previousMatchId, false);
-        auto watch = debriefRows(tr("On watch over %1").arg(phrase), debriefed.watched, s->metricsById(),
-                                 debriefed.previousMatchId, false);
-        rows.insert(rows.end(), inMatchOnly.begin(), inMatchOnly.end());
-        rows.insert(rows.end(), watch.begin(), watch.end());
-        m_items->reset(std::move(rows));
+        if (season != m_itemsSeason || *focal != m_itemsFocal) {
+            m_itemsSeason = season;
+            m_itemsFocal = *focal;
+            auto rows = debriefRows(tr("Slipped over %1").arg(phrase), debriefed.slippedInWindow,
+                                    s->metricsById(), debriefed.previousMatchId, true);
+            auto inMatchOnly = debriefRows(tr("Slipped in this match alone"), debriefed.slippedInMatch,
+                                           s->metricsById(), debriefed.previousMatchId, false);
+            auto watch = debriefRows(tr("On watch over %1").arg(phrase), debriefed.watched, s->metricsById(),
+                                     debriefed.previousMatchId, false);
+            rows.insert(rows.end(), inMatchOnly.begin(), inMatchOnly.end());
+            rows.insert(rows.end(), watch.begin(), watch.end());
+            m_items->reset(std::move(rows));
+        }
         m_judgedText = tr("%1 zones with targets judged over %2, %3 with too little data. If every "
                           "true value sat exactly on its target, chance alone would flag about %4. Flags are "
                           "evidence for the staff to weigh, not verdicts.")
@@ -188,6 +201,9 @@ void MatchDebrief::refresh() {
                            .arg(phrase)
                            .arg(debriefed.tooLittleData)
                            .arg(QLocale().toString(debriefed.chanceFlags, 'f', 1));
+    } else {
+        m_items->reset({});
+        m_itemsSeason.reset();
     }
     emit changed();
 }

@@ -5,11 +5,14 @@
 #include "sessionclient.h"
 
 #include <QString>
+
+#include <memory>
 #include <QtQml/qqmlregistration.h>
 
 namespace pitchloop::desktop {
 
 class DebriefListModel;
+class SeasonData;
 class PitchGeometry;
 class ZoneMapModel;
 
@@ -78,12 +81,17 @@ protected:
 
 private:
     void clear();
+    void clearModels();
 
     QString m_matchId;
     QString m_metricId;
     int m_selectedBand = 0;
     int m_selectedLane = 0;
     QString m_selectionFor; ///< match and metric the selection was made for
+    /// The season and match the debrief list was built for: it does not depend on the metric,
+    /// so a metric switch keeps it (the season object is replaced when the club file reloads).
+    std::shared_ptr<const SeasonData> m_itemsSeason;
+    std::size_t m_itemsFocal = 0;
     int m_matchRow = -1;
     int m_metricRow = -1;
     bool m_hasTargets = false;

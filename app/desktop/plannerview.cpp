@@ -501,7 +501,7 @@ void PlannerView::showPlan() {
             row.main = b.role == BlockRole::Main;
             row.drillId = b.drillId;
             row.title = qs(b.title);
-            row.minutes = b.minutes + (b.role == BlockRole::Main ? 1 : 0);
+            row.minutes = b.minutes;
             row.minutesText = tr("%1 min").arg(b.minutes);
             row.intensity = b.intensity;
             row.intensityText = intensityText(b.intensity);

@@ -49,10 +49,17 @@ QString wholePitchLine(const ZoneStatus& s, MetricKind kind) {
 ZoneMapModel::ZoneMapModel(QObject* parent) : QAbstractListModel(parent) {}
 
 void ZoneMapModel::reset(Header header, std::vector<ZoneCell> cells) {
-    beginResetModel();
     m_header = std::move(header);
-    m_cells = std::move(cells);
-    endResetModel();
+    if (!cells.empty() && cells.size() == m_cells.size()) {
+        // Same grid (a metric switch): update the cells in place, so the views keep their
+        // delegates and only redraw.
+        m_cells = std::move(cells);
+        emit dataChanged(index(0), index(count() - 1));
+    } else {
+        beginResetModel();
+        m_cells = std::move(cells);
+        endResetModel();
+    }
     emit changed();
 }
 

@@ -36,8 +36,8 @@ ColumnLayout {
         default property alias content: inner.data
         // A modest preferred width, so long wrapped texts never widen the form beyond its card.
         Layout.preferredWidth: 200
-        readonly property var messages: [root.view.fieldErrors[name] ?? "", root.view.fieldErrors[otherName] ?? ""]
-                                        .filter(m => m.length > 0)
+        readonly property string first: root.view.fieldErrors[name] ?? ""
+        readonly property string second: otherName.length > 0 ? (root.view.fieldErrors[otherName] ?? "") : ""
         Layout.fillWidth: true
         spacing: 2
         ColumnLayout {
@@ -46,9 +46,11 @@ ColumnLayout {
             spacing: 2
         }
         Label {
-            visible: field.messages.length > 0
+            visible: field.first.length > 0 || field.second.length > 0
             Layout.fillWidth: true
-            text: field.messages.map(m => "▲ " + m).join("\n")
+            text: (field.first.length > 0 ? "▲ " + field.first : "")
+                  + (field.first.length > 0 && field.second.length > 0 ? "\n" : "")
+                  + (field.second.length > 0 ? "▲ " + field.second : "")
             color: Theme.error
             font.pixelSize: Theme.fontSmall
             wrapMode: Text.WordWrap

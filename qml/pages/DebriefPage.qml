@@ -13,6 +13,7 @@ Page {
     required property ClubSession session
 
     signal openZone(string metricId, int band, int lane, string matchId)
+    signal openFocus(string metricId, int band, int lane, string matchId)
 
     function showMatch(matchId: string) {
         debrief.matchId = matchId
@@ -145,6 +146,11 @@ Page {
                       : qsTr("Pick a zone for its trend")
                 enabled: debrief.selectedBand > 0
                 onClicked: root.openZone(debrief.metricId, debrief.selectedBand, debrief.selectedLane, debrief.matchId)
+            }
+            Button {
+                text: qsTr("Open a focus on it…")
+                enabled: debrief.selectedBand > 0
+                onClicked: root.openFocus(debrief.metricId, debrief.selectedBand, debrief.selectedLane, debrief.matchId)
             }
         }
 
