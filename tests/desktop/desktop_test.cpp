@@ -5,6 +5,7 @@
 // The club: the first seven matches of the demo season (sample-club/matches) and its targets
 // (sample-club/targets.json), ingested into a temporary club file.
 
+#include "modelcheck.h"
 #include "clubsession.h"
 #include "debrieflistmodel.h"
 #include "display.h"
@@ -42,22 +43,13 @@ Q_IMPORT_QML_PLUGIN(PitchloopPlugin)
 using namespace pitchloop;
 using namespace pitchloop::desktop;
 
+using pitchloop::desktop::testing::watch;
+using pitchloop::desktop::testing::role;
+
 namespace {
 
 constexpr int kMatches = 7;
 const QString kSource = QStringLiteral(PITCHLOOP_SOURCE_DIR);
-
-std::unique_ptr<QAbstractItemModelTester> watch(QAbstractItemModel* m) {
-    return std::make_unique<QAbstractItemModelTester>(
-        m, QAbstractItemModelTester::FailureReportingMode::QtTest);
-}
-
-QVariant role(const QAbstractItemModel& m, int row, const QByteArray& name) {
-    const auto roles = m.roleNames();
-    for (auto it = roles.begin(); it != roles.end(); ++it)
-        if (it.value() == name) return m.data(m.index(row, 0), it.key());
-    return {};
-}
 
 /// The model's own status of one zone after match `focal` of the test season.
 model::ZoneStatus referenceStatus(const model::ClubRepository& repo, std::size_t focal,

@@ -6,6 +6,7 @@
 //
 // The club: an empty club file with the demo club's drill book (sample-club/drills.json).
 
+#include "modelcheck.h"
 #include "clubsession.h"
 #include "drillbookview.h"
 #include "drillbrowse.h"
@@ -31,21 +32,12 @@ Q_IMPORT_QML_PLUGIN(PitchloopPlugin)
 using namespace pitchloop;
 using namespace pitchloop::desktop;
 
+using pitchloop::desktop::testing::watch;
+using pitchloop::desktop::testing::role;
+
 namespace {
 
 const QString kSource = QStringLiteral(PITCHLOOP_SOURCE_DIR);
-
-std::unique_ptr<QAbstractItemModelTester> watch(QAbstractItemModel* m) {
-    return std::make_unique<QAbstractItemModelTester>(
-        m, QAbstractItemModelTester::FailureReportingMode::QtTest);
-}
-
-QVariant role(const QAbstractItemModel& m, int row, const QByteArray& name) {
-    const auto roles = m.roleNames();
-    for (auto it = roles.begin(); it != roles.end(); ++it)
-        if (it.value() == name) return m.data(m.index(row, 0), it.key());
-    return {};
-}
 
 /// The ids a list model shows, in order.
 std::vector<std::int64_t> shownIds(const DrillListModel& m) {

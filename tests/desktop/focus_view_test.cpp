@@ -8,6 +8,7 @@
 // The club: the demo season's matches, targets and drill book (sample-club/), ingested into a
 // temporary club file.
 
+#include "modelcheck.h"
 #include "clubsession.h"
 #include "controlchartmodel.h"
 #include "display.h"
@@ -44,23 +45,14 @@ Q_IMPORT_QML_PLUGIN(PitchloopPlugin)
 using namespace pitchloop;
 using namespace pitchloop::desktop;
 
+using pitchloop::desktop::testing::watch;
+using pitchloop::desktop::testing::role;
+
 namespace {
 
 const QString kSource = QStringLiteral(PITCHLOOP_SOURCE_DIR);
 const QString kToday = QStringLiteral("2026-12-01"); // well after the review point of the focus
 const std::string kMetric = "pre_shot_passes_against";
-
-std::unique_ptr<QAbstractItemModelTester> watch(QAbstractItemModel* m) {
-    return std::make_unique<QAbstractItemModelTester>(
-        m, QAbstractItemModelTester::FailureReportingMode::QtTest);
-}
-
-QVariant role(const QAbstractItemModel& m, int row, const QByteArray& name) {
-    const auto roles = m.roleNames();
-    for (auto it = roles.begin(); it != roles.end(); ++it)
-        if (it.value() == name) return m.data(m.index(row, 0), it.key());
-    return {};
-}
 
 bool sameNumber(double a, double b) { return (std::isnan(a) && std::isnan(b)) || std::abs(a - b) < 1e-12; }
 

@@ -9,6 +9,7 @@
 // focus (tests/desktop/plannerclub.h); "today" is Tue 29 Sep 2026 ($PITCHLOOP_TODAY), MD-4
 // before the match of Sat 3 Oct (sample-club/fixtures.csv).
 
+#include "modelcheck.h"
 #include "appclock.h"
 #include "calendar.h"
 #include "clubsession.h"
@@ -46,16 +47,13 @@ Q_IMPORT_QML_PLUGIN(PitchloopPlugin)
 using namespace pitchloop;
 using namespace pitchloop::desktop;
 
+using pitchloop::desktop::testing::watch;
+
 namespace {
 
 const QString kSource = QStringLiteral(PITCHLOOP_SOURCE_DIR);
 const std::string kSquad = "First team";
 constexpr int kPlanTimeoutMs = 30000;
-
-std::unique_ptr<QAbstractItemModelTester> watch(QAbstractItemModel* m) {
-    return std::make_unique<QAbstractItemModelTester>(
-        m, QAbstractItemModelTester::FailureReportingMode::QtTest);
-}
 
 /// The calendar text with its folded lines joined again (RFC 5545 §3.1), one line an entry.
 QStringList unfold(const QByteArray& bytes) {

@@ -4,6 +4,7 @@
 // opening another club file remembers it, and the remembered file wins at the next start while
 // it exists. The caps model runs under QAbstractItemModelTester.
 
+#include "modelcheck.h"
 #include "clubsession.h"
 #include "intensitycapmodel.h"
 #include "plannerclub.h"
@@ -35,14 +36,11 @@ Q_IMPORT_QML_PLUGIN(PitchloopPlugin)
 using namespace pitchloop;
 using namespace pitchloop::desktop;
 
+using pitchloop::desktop::testing::watch;
+
 namespace {
 
 const QString kSource = QStringLiteral(PITCHLOOP_SOURCE_DIR);
-
-std::unique_ptr<QAbstractItemModelTester> watch(QAbstractItemModel* m) {
-    return std::make_unique<QAbstractItemModelTester>(
-        m, QAbstractItemModelTester::FailureReportingMode::QtTest);
-}
 
 bool sameFlags(const model::FlagSettings& a, const model::FlagSettings& b) {
     return a.level == b.level && a.rateInterval == b.rateInterval && a.window == b.window &&

@@ -8,6 +8,7 @@
 // and demo matches 7–10 moved one year back (ids KB-2025-07…10, dates in 2025) as season
 // 2025-26, with two invented 2025-26 targets.
 
+#include "modelcheck.h"
 #include "clubsession.h"
 #include "display.h"
 #include "ingest.h"
@@ -37,6 +38,9 @@ Q_IMPORT_QML_PLUGIN(PitchloopPlugin)
 using namespace pitchloop;
 using namespace pitchloop::desktop;
 
+using pitchloop::desktop::testing::watch;
+using pitchloop::desktop::testing::role;
+
 namespace {
 
 const QString kSource = QStringLiteral(PITCHLOOP_SOURCE_DIR);
@@ -44,17 +48,6 @@ const std::string kSquad = "First team";
 
 QString demoMatch(int n) {
     return QStringLiteral("%1/sample-club/matches/KB-2026-%2.json").arg(kSource).arg(n, 2, 10, QLatin1Char('0'));
-}
-
-std::unique_ptr<QAbstractItemModelTester> watch(QAbstractItemModel* m) {
-    return std::make_unique<QAbstractItemModelTester>(m, QAbstractItemModelTester::FailureReportingMode::QtTest);
-}
-
-QVariant role(const QAbstractItemModel& m, int row, const QByteArray& name) {
-    const auto roles = m.roleNames();
-    for (auto it = roles.begin(); it != roles.end(); ++it)
-        if (it.value() == name) return m.data(m.index(row, 0), it.key());
-    return {};
 }
 
 /// The row of a zone in the editor's zone list, -1 when absent.
