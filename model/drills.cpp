@@ -589,6 +589,15 @@ Drill readBody(const std::string& body, std::int64_t id) {
     }
 }
 
+/// A version written on another grid shows its zones on the club's grid (mapZones); the
+/// stored body is left as the coach wrote it.
+void onClubGrid(Drill& d, const std::string& storedGrid, const ZoneGrid& clubGrid) {
+    const auto grid = ZoneGrid::parse(storedGrid);
+    if (!grid || *grid == clubGrid || d.zones.empty()) return;
+    d.zonesGrid = grid->name();
+    d.zones = mapZones(d.zones, *grid, clubGrid);
+}
+
 } // namespace
 
 DrillBook::DrillBook(ClubRepository& repo) : m_repo(repo) {}
@@ -615,13 +624,14 @@ void DrillBook::addVersion(std::int64_t id, const Drill& drill, const std::strin
                            const std::string& now) {
     SQLite::Statement ins(m_repo.database(),
                           "INSERT INTO drill_version(drill_id, body, title, search_text, "
-                          "edited_by, edited_at) VALUES (?, ?, ?, ?, ?, ?)");
+                          "edited_by, edited_at, grid) VALUES (?, ?, ?, ?, ?, ?, ?)");
     ins.bind(1, id);
     ins.bind(2, json(drill).dump());
     ins.bind(3, drill.title);
     ins.bind(4, drillSearchText(drill));
     ins.bind(5, who);
     ins.bind(6, now);
+    ins.bind(7, grid().name()); // zones are validated on the club's grid
     ins.exec();
 }
 
@@ -671,7 +681,7 @@ std::vector<Drill> DrillBook::query(const std::string& where, const std::vector<
     return guarded("cannot read drills", [&] {
         std::string sql =
             "SELECT d.id, d.created_at, d.deleted_at IS NOT NULL, v.body, v.edited_by, "
-            "v.edited_at, (SELECT count(*) FROM drill_version c WHERE c.drill_id = d.id) "
+            "v.edited_at, (SELECT count(*) FROM drill_version c WHERE c.drill_id = d.id), v.grid "
             "FROM drill d JOIN drill_version v ON v.id = "
             "(SELECT max(l.id) FROM drill_version l WHERE l.drill_id = d.id) WHERE 1 " +
             where;
@@ -685,9 +695,11 @@ std::vector<Drill> DrillBook::query(const std::string& where, const std::vector<
         for (const auto& w : words)
             q.bind(++n, w);
         std::vector<Drill> out;
+        const ZoneGrid clubGrid = grid();
         while (q.executeStep()) {
             const std::int64_t drillId = q.getColumn(0).getInt64();
             Drill d = readBody(q.getColumn(3).getString(), drillId);
+            onClubGrid(d, q.getColumn(7).getString(), clubGrid);
             d.id = drillId;
             d.createdAt = q.getColumn(1).getString();
             d.deleted = q.getColumn(2).getInt() != 0;
@@ -711,11 +723,13 @@ std::vector<Drill> DrillBook::history(std::int64_t id) const {
         std::vector<Drill> out;
         SQLite::Statement q(m_repo.database(),
                             "SELECT d.created_at, d.deleted_at IS NOT NULL, v.body, v.edited_by, "
-                            "v.edited_at FROM drill_version v JOIN drill d ON d.id = v.drill_id "
+                            "v.edited_at, v.grid FROM drill_version v JOIN drill d ON d.id = v.drill_id "
                             "WHERE v.drill_id = ? ORDER BY v.id");
         q.bind(1, id);
+        const ZoneGrid clubGrid = grid();
         while (q.executeStep()) {
             Drill d = readBody(q.getColumn(2).getString(), id);
+            onClubGrid(d, q.getColumn(5).getString(), clubGrid);
             d.id = id;
             d.createdAt = q.getColumn(0).getString();
             d.deleted = q.getColumn(1).getInt() != 0;

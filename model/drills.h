@@ -58,6 +58,9 @@ struct Drill {
     std::string editedBy;  ///< who wrote this version
     int versionCount = 0;  ///< versions so far (in a history: up to and including this one)
     bool deleted = false;  ///< removed from the book (restorable)
+    /// When this version was written on another zone grid (its name, e.g. "equal:6x5"), and
+    /// `zones` are its zones read on the club's grid (mapZones); empty otherwise.
+    std::string zonesGrid;
 
     bool hasArea() const { return areaLengthM != 0 || areaWidthM != 0; }
     /// Same content (every field a coach writes); the book-keeping fields are not compared.

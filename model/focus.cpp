@@ -237,8 +237,8 @@ std::int64_t FocusStore::open(const Focus& f, const std::string& now) {
             throw StorageError("no season " + f.season + " for squad " + f.squad);
         SQLite::Statement ins(db, "INSERT INTO focus(season_id, metric_id, zones, "
                                   "opened_after_match, start_date, review_after_matches, "
-                                  "review_on, evidence, note, opened_by, opened_at) "
-                                  "VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)");
+                                  "review_on, evidence, note, opened_by, opened_at, grid) "
+                                  "VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)");
         ins.bind(1, season.getColumn(0).getInt64());
         ins.bind(2, f.metric);
         ins.bind(3, zonesJson(f.zones).dump());
@@ -251,6 +251,7 @@ std::int64_t FocusStore::open(const Focus& f, const std::string& now) {
         ins.bind(9, f.note);
         ins.bind(10, f.openedBy);
         ins.bind(11, now);
+        ins.bind(12, m_repo.tallyGrid().name()); // the zones were picked on the club's grid
         ins.exec();
         const std::int64_t id = db.getLastInsertRowid();
         SQLite::Statement link(db, "INSERT INTO focus_drill(focus_id, drill_id, linked_at) "
@@ -271,7 +272,7 @@ namespace {
 const char* kFocusSelect =
     "SELECT f.id, sq.name, se.name, f.metric_id, f.zones, f.opened_after_match, f.start_date, "
     "f.review_after_matches, f.review_on, f.evidence, f.note, f.opened_by, f.opened_at, "
-    "f.closed_at, f.verdict, f.verdict_note FROM focus f JOIN season se ON se.id = f.season_id "
+    "f.closed_at, f.verdict, f.verdict_note, f.grid FROM focus f JOIN season se ON se.id = f.season_id "
     "JOIN squad sq ON sq.id = se.squad_id ";
 
 std::string text(const SQLite::Column& c) { return c.isNull() ? std::string{} : c.getString(); }
@@ -280,6 +281,7 @@ std::string text(const SQLite::Column& c) { return c.isNull() ? std::string{} : 
 std::vector<Focus> FocusStore::list() const {
     return guarded("cannot read focuses", [&] {
         auto& db = m_repo.database();
+        const ZoneGrid clubGrid = m_repo.tallyGrid();
         std::vector<Focus> out;
         SQLite::Statement q(db, std::string(kFocusSelect) + "ORDER BY f.id");
         while (q.executeStep()) {
@@ -300,6 +302,8 @@ std::vector<Focus> FocusStore::list() const {
             f.closedAt = text(q.getColumn(13));
             f.verdict = text(q.getColumn(14));
             f.verdictNote = text(q.getColumn(15));
+            const auto grid = ZoneGrid::parse(q.getColumn(16).getString());
+            f.grid = grid ? *grid : clubGrid;
             out.push_back(std::move(f));
         }
         SQLite::Statement d(db, "SELECT drill_id FROM focus_drill WHERE focus_id = ? ORDER BY linked_at, drill_id");

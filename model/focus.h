@@ -39,6 +39,9 @@ struct Focus {
     std::string verdict;          ///< empty while open
     std::string verdictNote;
     std::vector<std::int64_t> drills;
+    /// The grid `zones` are on: the club's grid when the focus was opened (FocusStore sets
+    /// it). After a grid change it differs from the club's; reviews count on this one.
+    ZoneGrid grid;
 };
 
 /// Open, due for review (the review point is reached), or closed.

@@ -37,9 +37,18 @@ std::vector<PlanFocus> openPlanFocuses(ClubRepository& repo, const std::string& 
                             "', which is no longer defined; left out");
             continue;
         }
+        Focus onGrid = f;
+        if (f.grid != grid) {
+            // Opened before the club changed its grid: planned on the zones its zones fall
+            // in now, as the drills' zones are read; its review still counts on its own grid.
+            onGrid.zones = mapZones(f.zones, f.grid, grid);
+            onGrid.grid = grid;
+            notes.push_back("focus " + std::to_string(f.id) + " was opened on " + f.grid.name() +
+                            "; planned on its zones read on " + grid.name());
+        }
         const auto statuses =
             computeStatus(tallies, *focal, {*metric}, targets, grid, {settings.window}, settings);
-        auto p = planFocus(f, *metric, statuses, settings.window, grid);
+        auto p = planFocus(onGrid, *metric, statuses, settings.window, grid);
         if (!p) {
             notes.push_back("focus " + std::to_string(f.id) +
                             " has no target in force in its zones; left out");

@@ -1,5 +1,6 @@
 #include "repository.h"
 
+#include "gridchange.h"
 #include "problem.h"
 
 #include <SQLiteCpp/Backup.h>
@@ -203,6 +204,26 @@ CREATE TABLE session_focus(
   focus_id INTEGER NOT NULL REFERENCES focus(id) ON DELETE CASCADE,
   minutes INTEGER NOT NULL,
   PRIMARY KEY(session_id, focus_id)) WITHOUT ROWID;
+)sql",
+    // 6: the grid each zone-bearing record was written on, so the club's grid can change
+    // (docs/storage.md, "Changing the zone grid"). Whole-pitch targets ('') belong to no grid.
+    R"sql(
+ALTER TABLE target ADD COLUMN grid TEXT NOT NULL DEFAULT '';
+UPDATE target SET grid = COALESCE((SELECT value FROM setting WHERE key = 'tally_grid'),
+                                  'equal:6x5') WHERE band <> 0 OR lane <> 0;
+ALTER TABLE focus ADD COLUMN grid TEXT NOT NULL DEFAULT '';
+UPDATE focus SET grid = COALESCE((SELECT value FROM setting WHERE key = 'tally_grid'),
+                                 'equal:6x5');
+ALTER TABLE drill_version ADD COLUMN grid TEXT NOT NULL DEFAULT '';
+UPDATE drill_version SET grid = COALESCE((SELECT value FROM setting WHERE key = 'tally_grid'),
+                                         'equal:6x5');
+CREATE TABLE grid_change(
+  id INTEGER PRIMARY KEY,
+  from_grid TEXT NOT NULL,
+  to_grid TEXT NOT NULL,
+  changed_by TEXT NOT NULL,
+  changed_at TEXT NOT NULL,
+  summary TEXT NOT NULL DEFAULT '');
 )sql",
 };
 
@@ -832,18 +853,23 @@ std::vector<Target> ClubRepository::targets(const std::string& squad,
     return guarded("cannot read targets", [&] {
         std::vector<Target> out;
         SQLite::Statement q(*m_db, std::string(kTargetSelect) +
-                                       "WHERE sq.name = ? AND se.name = ? ORDER BY t.id");
+                                       "WHERE sq.name = ? AND se.name = ? AND "
+                                       "(t.grid = '' OR t.grid = ?) ORDER BY t.id");
         q.bind(1, squad);
         q.bind(2, season);
+        q.bind(3, tallyGrid().name());
         while (q.executeStep()) out.push_back(readTarget(q));
         return out;
     });
 }
 
-std::vector<Target> ClubRepository::allTargets() const {
+std::vector<Target> ClubRepository::allTargets(const std::optional<ZoneGrid>& grid) const {
+    const std::string name = (grid ? *grid : tallyGrid()).name();
     return guarded("cannot read targets", [&] {
         std::vector<Target> out;
-        SQLite::Statement q(*m_db, std::string(kTargetSelect) + "ORDER BY t.id");
+        SQLite::Statement q(*m_db, std::string(kTargetSelect) +
+                                       "WHERE t.grid = '' OR t.grid = ? ORDER BY t.id");
+        q.bind(1, name);
         while (q.executeStep()) out.push_back(readTarget(q));
         return out;
     });
@@ -852,35 +878,60 @@ std::vector<Target> ClubRepository::allTargets() const {
 std::vector<std::int64_t> ClubRepository::addTargets(const std::vector<Target>& versions,
                                                      const std::string& now) {
     return guarded("cannot save targets", [&] {
-        std::vector<std::int64_t> ids;
         SQLite::Transaction tx(*m_db);
-        SQLite::Statement ins(*m_db,
-                              "INSERT INTO target(season_id, metric_id, band, lane, direction, "
-                              "value, watch_margin, min_sample, author, rationale, "
-                              "effective_from, recorded_at, retired) "
-                              "VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)");
-        for (const Target& t : versions) {
-            const std::int64_t season = findOrMakeSeason(*m_db, t.key.squad, t.key.season);
-            ins.reset();
-            ins.bind(1, season);
-            ins.bind(2, t.key.metric);
-            ins.bind(3, t.key.band);
-            ins.bind(4, t.key.lane);
-            ins.bind(5, std::string(toString(t.direction)));
-            ins.bind(6, t.value);
-            ins.bind(7, t.watchMargin);
-            ins.bind(8, static_cast<std::int64_t>(t.minSample));
-            ins.bind(9, t.author);
-            ins.bind(10, t.rationale);
-            ins.bind(11, t.effectiveFrom);
-            ins.bind(12, t.recordedAt.empty() ? now : t.recordedAt);
-            ins.bind(13, t.retired ? 1 : 0);
-            ins.exec();
-            ids.push_back(m_db->getLastInsertRowid());
-        }
+        auto ids = insertTargets(versions, now);
         tx.commit();
         return ids;
     });
+}
+
+std::vector<std::int64_t> ClubRepository::insertTargets(const std::vector<Target>& versions,
+                                                        const std::string& now) {
+    std::vector<std::int64_t> ids;
+    const std::string grid = tallyGrid().name();
+    SQLite::Statement ins(*m_db,
+                          "INSERT INTO target(season_id, metric_id, band, lane, direction, "
+                          "value, watch_margin, min_sample, author, rationale, "
+                          "effective_from, recorded_at, retired, grid) "
+                          "VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)");
+    for (const Target& t : versions) {
+        const std::int64_t season = findOrMakeSeason(*m_db, t.key.squad, t.key.season);
+        ins.reset();
+        ins.bind(1, season);
+        ins.bind(2, t.key.metric);
+        ins.bind(3, t.key.band);
+        ins.bind(4, t.key.lane);
+        ins.bind(5, std::string(toString(t.direction)));
+        ins.bind(6, t.value);
+        ins.bind(7, t.watchMargin);
+        ins.bind(8, static_cast<std::int64_t>(t.minSample));
+        ins.bind(9, t.author);
+        ins.bind(10, t.rationale);
+        ins.bind(11, t.effectiveFrom);
+        ins.bind(12, t.recordedAt.empty() ? now : t.recordedAt);
+        ins.bind(13, t.retired ? 1 : 0);
+        ins.bind(14, t.key.band == 0 && t.key.lane == 0 ? std::string() : grid);
+        ins.exec();
+        ids.push_back(m_db->getLastInsertRowid());
+    }
+    return ids;
+}
+
+SeasonTallies ClubRepository::seasonTallies(const std::string& squad, const std::string& season,
+                                            const ZoneGrid& grid) const {
+    if (grid == tallyGrid()) return seasonTallies(squad, season);
+    SeasonTallies out = seasonTallies(squad, season);
+    const auto specs = metrics();
+    for (auto& [metric, perMatch] : out.byMetric)
+        perMatch.assign(out.matchIds.size(), MatchTally(static_cast<std::size_t>(grid.zoneCount())));
+    for (std::size_t i = 0; i < out.matchIds.size(); ++i) {
+        const auto match = loadMatch(out.matchIds[i]);
+        if (!match) continue;
+        const MatchFacts facts(*match);
+        for (const auto& spec : specs)
+            out.byMetric[spec.id][i] = computeTally(facts, spec, grid);
+    }
+    return out;
 }
 
 SeasonTallies ClubRepository::seasonTallies(const std::string& squad,
@@ -977,6 +1028,65 @@ void ClubRepository::saveFlagSettings(const FlagSettings& f) {
         put("flags.window", f.window.name());
         tx.commit();
         return 0;
+    });
+}
+
+int ClubRepository::changeGrid(const ZoneGrid& to, const std::string& by,
+                               const std::string& now,
+                               const std::function<void(int, int)>& progress) {
+    const ZoneGrid from = tallyGrid();
+    if (from == to) return 0;
+    if (by.find_first_not_of(" \t\r\n") == std::string::npos)
+        throw StorageError("cannot change the zone grid: say who changes it");
+    const std::vector<MetricSpec> specs = metrics();
+    const TargetCarry carry = carryTargets(allTargets(from), allTargets(to), from, to);
+    return guarded("cannot change the zone grid", [&] {
+        SQLite::Transaction tx(*m_db);
+        SQLite::Statement set(*m_db, "UPDATE setting SET value = ? WHERE key = 'tally_grid'");
+        set.bind(1, to.name());
+        if (set.exec() == 0) {
+            SQLite::Statement ins(*m_db, "INSERT INTO setting(key, value) VALUES ('tally_grid', ?)");
+            ins.bind(1, to.name());
+            ins.exec();
+        }
+        // From here on tallyGrid() reads `to` inside this transaction.
+        std::vector<std::pair<std::int64_t, std::string>> rows;
+        SQLite::Statement q(*m_db, "SELECT id, code FROM match ORDER BY date, code");
+        while (q.executeStep())
+            rows.emplace_back(q.getColumn(0).getInt64(), q.getColumn(1).getString());
+        m_db->exec("DELETE FROM tally");
+        int done = 0;
+        for (const auto& [row, code] : rows) {
+            writeTallies(row, *loadMatch(code), specs);
+            if (progress) progress(++done, static_cast<int>(rows.size()));
+        }
+        insertTargets(carry.versions, now);
+        SQLite::Statement log(*m_db, "INSERT INTO grid_change(from_grid, to_grid, changed_by, "
+                                     "changed_at, summary) VALUES (?, ?, ?, ?, ?)");
+        log.bind(1, from.name());
+        log.bind(2, to.name());
+        log.bind(3, by);
+        log.bind(4, now);
+        log.bind(5, std::to_string(rows.size()) + " matches counted again; " +
+                        std::to_string(carry.versions.size()) + " target versions carried to " +
+                        std::to_string(carry.zonesCarried) + " zones; " +
+                        std::to_string(carry.zonesKept) + " zones kept their earlier targets");
+        log.exec();
+        tx.commit();
+        return static_cast<int>(carry.versions.size());
+    });
+}
+
+std::vector<ClubRepository::GridChange> ClubRepository::gridChanges() const {
+    return guarded("cannot read grid changes", [&] {
+        std::vector<GridChange> out;
+        SQLite::Statement q(*m_db, "SELECT from_grid, to_grid, changed_by, changed_at, summary "
+                                   "FROM grid_change ORDER BY id");
+        while (q.executeStep())
+            out.push_back({q.getColumn(0).getString(), q.getColumn(1).getString(),
+                           q.getColumn(2).getString(), q.getColumn(3).getString(),
+                           q.getColumn(4).getString()});
+        return out;
     });
 }
 

@@ -11,6 +11,7 @@
 
 #include <cstdint>
 #include <filesystem>
+#include <functional>
 #include <memory>
 #include <optional>
 #include <string>
@@ -56,7 +57,7 @@ struct TallyRow {
 /// Owns the SQLite connection; returns domain structs. Throws StorageError on faults.
 class ClubRepository {
 public:
-    static constexpr int kSchemaVersion = 5;
+    static constexpr int kSchemaVersion = 6;
 
     /// Opens (creating when missing) and migrates the club file. ":memory:" works for tests.
     explicit ClubRepository(const std::string& file);
@@ -109,8 +110,10 @@ public:
     void ensureSeason(const std::string& squad, const std::string& season);
     /// Every stored target version of a season (all metrics and zones), oldest first.
     std::vector<Target> targets(const std::string& squad, const std::string& season) const;
-    /// Every stored target version in the club file.
-    std::vector<Target> allTargets() const;
+    /// Every stored target version in the club file, on `grid` (the club's grid when not
+    /// given) or for the whole pitch. Versions set on another grid stay stored; targets()
+    /// leaves them out as well.
+    std::vector<Target> allTargets(const std::optional<ZoneGrid>& grid = std::nullopt) const;
     /// Records new target versions in one transaction; never changes an existing version.
     /// `recordedAt` is filled with `now` when empty. Returns their version ids.
     std::vector<std::int64_t> addTargets(const std::vector<Target>& versions,
@@ -119,10 +122,33 @@ public:
     /// The season of a match up to its last stored match: match ids and dates in date order,
     /// and dense tallies per metric; `focal` is set to the match's index.
     SeasonTallies seasonTallies(const std::string& squad, const std::string& season) const;
+    /// The same on `grid`: the stored tallies when it is the club's grid, else counted from
+    /// the stored events (a focus opened on an earlier grid is reviewed on its own zones).
+    SeasonTallies seasonTallies(const std::string& squad, const std::string& season,
+                                const ZoneGrid& grid) const;
 
     /// Flag settings stored in the club file (defaults where unset).
     FlagSettings flagSettings() const;
     void saveFlagSettings(const FlagSettings& settings);
+
+    /// Moves the club to another zone grid in one transaction (docs/storage.md, "Changing
+    /// the zone grid"): every match's tallies are counted again on `to`, per-zone target
+    /// versions are carried to the zones of `to` that have none there yet (carryTargets), the
+    /// setting changes and a grid_change row records who did it. Focuses keep the grid they
+    /// were opened on and drill zones are read on the club's grid (both store their grid).
+    /// `progress(done, total)` is called after each match. Returns the number of target
+    /// versions carried. Changing to the grid in use does nothing and returns 0.
+    int changeGrid(const ZoneGrid& to, const std::string& by, const std::string& now,
+                   const std::function<void(int, int)>& progress = {});
+    /// Grid changes so far, oldest first.
+    struct GridChange {
+        std::string from;
+        std::string to;
+        std::string by;
+        std::string at;
+        std::string summary;
+    };
+    std::vector<GridChange> gridChanges() const;
 
     /// Online backup of the whole club file to `target`.
     void backupTo(const std::string& target) const;
@@ -137,6 +163,8 @@ public:
 private:
     void writeTallies(std::int64_t matchRowId, const Match& match,
                       const std::vector<MetricSpec>& specs);
+    std::vector<std::int64_t> insertTargets(const std::vector<Target>& versions,
+                                            const std::string& now);
     std::unique_ptr<SQLite::Database> m_db;
 };
 

@@ -89,3 +89,71 @@ Zone ZoneLocator::zoneOf(Point p) const {
 }
 
 } // namespace pitchloop::model
+
+namespace pitchloop::model {
+
+namespace {
+
+double overlap1d(double a0, double a1, double b0, double b1) {
+    return std::max(0.0, std::min(a1, b1) - std::max(a0, b0));
+}
+
+double zoneArea(Zone z, const ZoneGrid& g, const Pitch& pitch) {
+    const auto b = g.bandEdges(pitch);
+    const auto l = g.laneEdges(pitch);
+    return (b[static_cast<std::size_t>(z.band)] - b[static_cast<std::size_t>(z.band - 1)]) *
+           (l[static_cast<std::size_t>(z.lane)] - l[static_cast<std::size_t>(z.lane - 1)]);
+}
+
+} // namespace
+
+double overlapArea(Zone a, const ZoneGrid& ga, Zone b, const ZoneGrid& gb, const Pitch& pitch) {
+    const auto ab = ga.bandEdges(pitch), al = ga.laneEdges(pitch);
+    const auto bb = gb.bandEdges(pitch), bl = gb.laneEdges(pitch);
+    auto at = [](const std::vector<double>& v, int i) { return v[static_cast<std::size_t>(i)]; };
+    return overlap1d(at(ab, a.band - 1), at(ab, a.band), at(bb, b.band - 1), at(bb, b.band)) *
+           overlap1d(at(al, a.lane - 1), at(al, a.lane), at(bl, b.lane - 1), at(bl, b.lane));
+}
+
+std::vector<Zone> mapZones(const std::vector<Zone>& zones, const ZoneGrid& from,
+                           const ZoneGrid& to, const Pitch& pitch) {
+    if (from == to) return zones;
+    std::vector<bool> picked(static_cast<std::size_t>(to.zoneCount()), false);
+    for (int i = 0; i < to.zoneCount(); ++i) {
+        const Zone t = to.zoneAt(i);
+        double inside = 0;
+        for (const Zone& s : zones) inside += overlapArea(t, to, s, from, pitch);
+        if (inside >= 0.5 * zoneArea(t, to, pitch) * (1 - 1e-9)) picked[static_cast<std::size_t>(i)] = true;
+    }
+    for (const Zone& s : zones) {
+        double covered = 0;
+        for (int i = 0; i < to.zoneCount(); ++i)
+            if (picked[static_cast<std::size_t>(i)])
+                covered += overlapArea(s, from, to.zoneAt(i), to, pitch);
+        if (covered >= 0.5 * zoneArea(s, from, pitch) * (1 - 1e-9)) continue;
+        // The zone of `to` holding most of `s`.
+        int best = 0;
+        double bestArea = -1;
+        for (int i = 0; i < to.zoneCount(); ++i) {
+            const double a = overlapArea(s, from, to.zoneAt(i), to, pitch);
+            if (a > bestArea * (1 + 1e-9) + 1e-12) {
+                best = i;
+                bestArea = a;
+            }
+        }
+        picked[static_cast<std::size_t>(best)] = true;
+    }
+    std::vector<Zone> out;
+    for (int i = 0; i < to.zoneCount(); ++i)
+        if (picked[static_cast<std::size_t>(i)]) out.push_back(to.zoneAt(i));
+    return out;
+}
+
+std::string describeGrid(const ZoneGrid& grid) {
+    const std::string size = std::to_string(grid.bands()) + " bands × " +
+                             std::to_string(grid.lanes()) + " lanes";
+    return grid.kind() == ZoneGrid::Kind::Markings ? size + " cut at the area lines"
+                                                   : size + " of equal size";
+}
+
+} // namespace pitchloop::model

@@ -90,3 +90,25 @@ inline constexpr double kEdgeToleranceM = 1e-6;
 int binOf(double v, const std::vector<double>& edges);
 
 } // namespace pitchloop::model
+
+namespace pitchloop::model {
+
+// Moving between grids ------------------------------------------------------------------------
+// Zones of two grids are compared by area on one pitch. Equal grids cut the pitch in fixed
+// proportions, so the pitch size does not change their overlaps; markings lanes depend on the
+// width, and the default Pitch{} (105 × 68 m) is used for them.
+
+/// Area in m² of zone `a` of grid `ga` that lies inside zone `b` of grid `gb` on `pitch`.
+double overlapArea(Zone a, const ZoneGrid& ga, Zone b, const ZoneGrid& gb,
+                   const Pitch& pitch = Pitch{});
+
+/// `zones` of `from` read on `to`: every zone of `to` lying at least half inside them, plus,
+/// for a zone of `from` less than half covered by those, the zone of `to` holding most of it. In
+/// band-major order without repeats; empty stays empty (a drill for the whole pitch).
+std::vector<Zone> mapZones(const std::vector<Zone>& zones, const ZoneGrid& from,
+                           const ZoneGrid& to, const Pitch& pitch = Pitch{});
+
+/// "6 bands × 5 lanes of equal size" / "6 bands × 5 lanes cut at the area lines".
+std::string describeGrid(const ZoneGrid& grid);
+
+} // namespace pitchloop::model

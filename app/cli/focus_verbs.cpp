@@ -225,7 +225,9 @@ int FocusVerbs::runShow(ClubRepository& repo, std::ostream& out, std::ostream& e
         return kExitBadInput;
     }
     const auto season = repo.seasonTallies(f->squad, f->season);
-    out << "Focus " << f->id << ": " << f->metric << " in " << zonesText(f->zones) << "\n"
+    out << "Focus " << f->id << ": " << f->metric << " in " << zonesText(f->zones)
+        << (f->grid == repo.tallyGrid() ? "" : " of " + f->grid.name() + " (the grid it was opened on)")
+        << "\n"
         << "  " << f->squad << " " << f->season << ", opened by " << f->openedBy << " after "
         << f->openedAfterMatch << ", training from " << f->startDate << "\n"
         << "  state " << toString(focusState(*f, matchesSince(season, f->startDate), today()))
@@ -300,8 +302,9 @@ int FocusVerbs::runReview(ClubRepository& repo, std::ostream& out, std::ostream&
     }
     const int kBefore = m_before > 0 ? m_before : f->reviewAfterMatches;
     const int kAfter = m_after > 0 ? m_after : f->reviewAfterMatches;
-    const auto season = repo.seasonTallies(f->squad, f->season);
-    const auto result = computeReview(*f, *metric, season, repo.tallyGrid(), kBefore, kAfter, m_level);
+    // A focus keeps the grid it was opened on; its review counts on that grid.
+    const auto season = repo.seasonTallies(f->squad, f->season, f->grid);
+    const auto result = computeReview(*f, *metric, season, f->grid, kBefore, kAfter, m_level);
     if (!result.review) {
         err << "error: focus " << f->id << ": " << result.problem << "\n";
         return kExitBadInput;

@@ -1,5 +1,6 @@
 #include "commands.h"
 #include "debrief.h"
+#include "gridchange.h"
 #include "format.h"
 #include "verbs.h"
 
@@ -93,6 +94,12 @@ StatusVerbs::StatusVerbs(CLI::App& app) {
                               "fdr | fdr_q")
         ->required();
     m_settingsSet->add_option("value", m_value)->required();
+    m_settingsGrid = m_settings->add_subcommand(
+        "grid", "Show the zone grid and its changes, or move the club to another grid");
+    m_settingsGrid->add_option("grid", m_grid,
+                               "equal:BxL (e.g. equal:6x5) or markings:B (lanes at the area lines)");
+    m_settingsGrid->add_option("--by", m_by, "Who changes it (required to change)");
+    m_settingsGrid->add_flag("--preview", m_preview, "Say what would change; write nothing");
 }
 
 bool StatusVerbs::chosen() const {
@@ -324,7 +331,36 @@ int StatusVerbs::runDebrief(ClubRepository& repo, std::ostream& out, std::ostrea
     return kExitOk;
 }
 
+int StatusVerbs::runGrid(ClubRepository& repo, std::ostream& out, std::ostream& err) {
+    const ZoneGrid current = repo.tallyGrid();
+    if (m_grid.empty()) {
+        out << "grid  " << current.name() << "   (" << describeGrid(current) << ")\n";
+        for (const auto& c : repo.gridChanges())
+            out << "  " << c.at << "  " << c.from << " -> " << c.to << " by " << c.by << ": "
+                << c.summary << "\n";
+        return kExitOk;
+    }
+    const auto to = ZoneGrid::parse(m_grid);
+    if (!to) {
+        err << "error: settings grid " << m_grid
+            << ": expected equal:BxL (e.g. equal:6x5) or markings:B, with 1–20 bands and lanes\n";
+        return kExitBadInput;
+    }
+    const GridChangePreview preview = previewGridChange(repo, *to);
+    out << (m_preview ? "Moving" : "Moved") << " from " << current.name() << " to " << to->name()
+        << (m_preview ? " would do this:\n" : ":\n");
+    for (const auto& line : preview.lines) out << "  - " << line << "\n";
+    if (m_preview || current == *to) return kExitOk;
+    if (m_by.find_first_not_of(" \t") == std::string::npos) {
+        err << "error: settings grid " << m_grid << ": --by: say who changes the grid\n";
+        return kExitBadInput;
+    }
+    repo.changeGrid(*to, m_by, nowUtc());
+    return kExitOk;
+}
+
 int StatusVerbs::runSettings(ClubRepository& repo, std::ostream& out, std::ostream& err) {
+    if (m_settingsGrid->parsed()) return runGrid(repo, out, err);
     FlagSettings f = repo.flagSettings();
     if (m_settingsSet->parsed()) {
         auto number = parseNumber(m_value);
@@ -355,7 +391,9 @@ int StatusVerbs::runSettings(ClubRepository& repo, std::ostream& out, std::ostre
         }
         repo.saveFlagSettings(f);
     }
-    out << "level            " << num(f.level) << "   (confidence of intervals)\n"
+    out << "grid             " << repo.tallyGrid().name() << "   (" << describeGrid(repo.tallyGrid())
+        << "; change with: pitchloop settings grid)\n"
+        << "level            " << num(f.level) << "   (confidence of intervals)\n"
         << "interval         " << (f.rateInterval == IntervalMethod::Jeffreys ? "jeffreys" : "wilson")
         << "   (for rates; counts use the exact Poisson interval)\n"
         << "window           " << f.window.name() << "   (the window a debrief judges)\n"

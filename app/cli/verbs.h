@@ -90,12 +90,16 @@ private:
     int runStatus(model::ClubRepository& repo, std::ostream& out, std::ostream& err);
     int runDebrief(model::ClubRepository& repo, std::ostream& out, std::ostream& err);
     int runSettings(model::ClubRepository& repo, std::ostream& out, std::ostream& err);
+    int runGrid(model::ClubRepository& repo, std::ostream& out, std::ostream& err);
 
     CLI::App* m_status = nullptr;
     CLI::App* m_debrief = nullptr;
     CLI::App* m_settings = nullptr;
     CLI::App* m_settingsShow = nullptr;
     CLI::App* m_settingsSet = nullptr;
+    CLI::App* m_settingsGrid = nullptr;
+    std::string m_by;
+    bool m_preview = false;
     std::string m_match;
     std::vector<std::string> m_windows;
     std::vector<std::string> m_metrics;

@@ -82,6 +82,8 @@ void ClubAgenda::refresh() {
         QString zones;
         for (const auto& z : f.zones)
             zones += (zones.isEmpty() ? QString() : QStringLiteral(", ")) + zoneText(z.band, z.lane);
+        if (!zones.isEmpty() && f.grid != s->grid())
+            zones += tr(" (on %1)").arg(QString::fromStdString(f.grid.name()));
         const auto dueDate = reviewDueDate(f, fixtures.list(f.squad, f.season));
         const QString when = due ? tr("review due") + (dueDate ? tr(" since %1").arg(dateText(*dueDate)) : QString())
                                  : (dueDate ? tr("review on %1").arg(dateText(*dueDate))

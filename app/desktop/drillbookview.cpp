@@ -273,7 +273,12 @@ void DrillBookView::refreshSelection() {
                 .arg(current->versionCount)
                 .arg(compactDateText(current->editedAt.substr(0, 10)),
                      QString::fromStdString(current->editedBy),
-                     compactDateText(current->createdAt.substr(0, 10)));
+                     compactDateText(current->createdAt.substr(0, 10))) +
+            (current->zonesGrid.empty()
+                 ? QString()
+                 : tr(" Its zones were drawn on %1 and are shown where they fall on the club's "
+                      "grid; saving stores them on it.")
+                       .arg(QString::fromStdString(current->zonesGrid)));
     } else {
         m_versions->reset({});
         m_selectedDeleted = false;

@@ -178,7 +178,8 @@ void FocusView::refreshList() {
         FocusRow r;
         r.focusId = f.id;
         r.title = metricName(f.metric);
-        r.zonesText = focusZonesText(f.zones, grid);
+        r.zonesText = focusZonesText(f.zones, f.grid);
+        if (f.grid != grid) r.zonesText += tr(" (%1)").arg(qs(f.grid.name()));
         r.phase = phaseOf(state);
         r.phaseText = phaseWords(state, f.verdict);
         const MatchSummary* match = session()->summary(f.openedAfterMatch);
@@ -262,7 +263,10 @@ void FocusView::refreshDetail() {
     const Focus& f = *focus;
     const std::string day = today().toStdString();
     const auto season = session()->seasonOf(f.openedAfterMatch);
-    const SeasonTallies tallies = season ? season->tallies() : repo->seasonTallies(f.squad, f.season);
+    // A focus opened on an earlier grid is reviewed on its own zones, counted from the events.
+    const bool ownGrid = f.grid != session()->grid();
+    const SeasonTallies tallies = season && !ownGrid ? season->tallies()
+                                                     : repo->seasonTallies(f.squad, f.season, f.grid);
     const int since = matchesSince(tallies, f.startDate);
     const FocusState state = focusState(f, since, day);
     const MetricSpec* metric = session()->metricSpec(f.metric);
@@ -271,7 +275,9 @@ void FocusView::refreshDetail() {
 
     m_focusMetric = f.metric;
     m_title = metricName(f.metric);
-    m_zonesText = focusZonesText(f.zones, session()->grid());
+    m_zonesText = focusZonesText(f.zones, f.grid);
+    if (ownGrid)
+        m_zonesText += tr(" (on the %1 grid it was opened on)").arg(qs(f.grid.name()));
     m_phase = phaseOf(state);
     m_phaseText = phaseWords(state, f.verdict);
     m_closed = state == FocusState::Closed;
@@ -330,7 +336,7 @@ void FocusView::refreshDetail() {
         const int k = f.reviewAfterMatches;
         // On a review date the after window is the matches played so far (up to K).
         const int kAfter = !f.reviewOn.empty() && day >= f.reviewOn && since >= 1 ? std::min(k, since) : k;
-        const ReviewResult result = computeReview(f, *metric, tallies, session()->grid(), k, kAfter);
+        const ReviewResult result = computeReview(f, *metric, tallies, f.grid, k, kAfter);
         if (!result.review) {
             m_reviewProblem = tr("The review cannot be computed yet: %1.").arg(qs(result.problem));
         } else {

@@ -19,6 +19,11 @@ Page {
         id: settings
         session: root.session
     }
+    GridChangeView {
+        id: gridView
+        objectName: "gridView"
+        session: root.session
+    }
 
     Shortcut {
         sequence: "Ctrl+S"
@@ -133,15 +138,10 @@ Page {
                     }
                     Label {
                         Layout.topMargin: Theme.gap
+                        Layout.fillWidth: true
                         text: qsTr("Zone grid: %1").arg(settings.gridText)
                         color: Theme.text
-                    }
-                    Label {
-                        Layout.fillWidth: true
-                        text: qsTr("Fixed for this club file: its tallies, targets and focuses are stored zone by zone on this grid.")
-                        color: Theme.textMuted
-                        font.pixelSize: Theme.fontSmall
-                        wrapMode: Text.WordWrap
+                        elide: Text.ElideRight
                     }
                 }
 
@@ -242,26 +242,42 @@ Page {
                 }
             }
 
-            Card {
-                title: qsTr("Intensity cap per microcycle day")
-                Layout.preferredWidth: 430
+            ScrollView {
+                id: rightColumn
+                Layout.preferredWidth: 450
                 Layout.fillHeight: true
+                contentWidth: availableWidth
+                clip: true
 
-                Label {
-                    Layout.fillWidth: true
-                    text: qsTr("The highest drill intensity the planner may choose each day: 1 recovery, 2 light, 3 moderate, 4 high, 5 maximal; 0 means no session. Common practice, no published source. Congested weeks take the lower cap of their two days.")
-                    color: Theme.textMuted
-                    font.pixelSize: Theme.fontSmall
-                    wrapMode: Text.WordWrap
-                }
-                Repeater {
-                    model: settings.caps
-                    delegate: CapEditDelegate {
+                ColumnLayout {
+                    width: rightColumn.availableWidth
+                    spacing: Theme.gapLarge
+
+                    Card {
+                        title: qsTr("Intensity cap per microcycle day")
                         Layout.fillWidth: true
-                        onEdited: (row, text) => settings.caps.setText(row, text)
+
+                        Label {
+                            Layout.fillWidth: true
+                            text: qsTr("The highest drill intensity the planner may choose each day: 1 recovery, 2 light, 3 moderate, 4 high, 5 maximal; 0 means no session. Common practice, no published source. Congested weeks take the lower cap of their two days.")
+                            color: Theme.textMuted
+                            font.pixelSize: Theme.fontSmall
+                            wrapMode: Text.WordWrap
+                        }
+                        Repeater {
+                            model: settings.caps
+                            delegate: CapEditDelegate {
+                                Layout.fillWidth: true
+                                onEdited: (row, text) => settings.caps.setText(row, text)
+                            }
+                        }
+                    }
+
+                    GridChangeCard {
+                        Layout.fillWidth: true
+                        view: gridView
                     }
                 }
-                Item { Layout.fillHeight: true }
             }
         }
     }

@@ -132,3 +132,41 @@ TEST_CASE("focus and review refuse bad input and change nothing", "[cli]") {
     CHECK(dataSnapshot(club.db) == opened);
     refused({"review", "1", "--after", "2", "--before", "9"}, "(1 missing)");
 }
+
+TEST_CASE("after a grid change a focus keeps its zones and its review's numbers", "[cli]") {
+    DemoClub club(13);
+    REQUIRE(cli({"--db", club.db, "focus", "open", "--match", "KB-2026-08", "--metric",
+                 "pre_shot_passes_against", "--zone", "2,5", "--by", "D. Arkwright"})
+                .code == 0);
+    const auto before = cli({"--db", club.db, "review", "1", "--format", "json"});
+    REQUIRE(before.code == 0);
+
+    const auto moved = cli({"--db", club.db, "settings", "grid", "markings:6", "--by", "A. Coach"});
+    INFO(moved.out << moved.err);
+    REQUIRE(moved.code == 0);
+    CHECK(contains(moved.out, "1 focuses keep the zones they were opened on"));
+
+    // Counted from the events on the focus's own grid: the same numbers to the last digit.
+    const auto after = cli({"--db", club.db, "review", "1", "--format", "json"});
+    REQUIRE(after.code == 0);
+    CHECK(nlohmann::json::parse(after.out) == nlohmann::json::parse(before.out));
+    const auto show = cli({"--db", club.db, "focus", "show", "1"});
+    CHECK(contains(show.out, "of equal:6x5 (the grid it was opened on)"));
+
+    // The rest of the loop works on the new grid.
+    const auto debrief = cli({"--db", club.db, "debrief", "KB-2026-13"});
+    CHECK(debrief.code == 0);
+    const auto status = cli({"--db", club.db, "status", "KB-2026-13", "--format", "csv"});
+    CHECK(status.code == 0);
+    CHECK(contains(status.out, "pre_shot_passes_against"));
+    REQUIRE(cli({"--db", club.db, "fixtures", "import",
+                 sourcePath("sample-club/fixtures.csv").string()})
+                .code == 0);
+    REQUIRE(cli({"--db", club.db, "drills", "import",
+                 sourcePath("sample-club/drills.json").string()})
+                .code == 0);
+    const auto plan = cli({"--db", club.db, "plan", "2026-11-10", "--minutes", "90", "--players", "18"});
+    INFO(plan.out << plan.err);
+    CHECK(plan.code == 0);
+    CHECK(contains(plan.out + plan.err, "was opened on equal:6x5"));
+}

@@ -617,3 +617,44 @@ TEST_CASE("the demo season: the left-side leak is off target early and eases lat
     CHECK(at20["state"] != "off_target");
     CHECK(at20["p_miss"].get<double>() < 0.5);
 }
+
+TEST_CASE("settings grid previews, changes and logs a grid change; bad grids exit 2", "[cli]") {
+    Today today("2026-07-26");
+    Workspace w;
+    REQUIRE(w.run({"ingest", minimalPath(), w.secondMatch()}).code == 0);
+    REQUIRE(w.run({"targets", "set", "--metric", "pass_completion", "--zone", "2,5", "--value",
+                   "0.8", "--min-sample", "5", "--author", "R. Tamsin", "--from", "2026-07-01"})
+                .code == 0);
+    const auto shown = w.run({"settings", "grid"});
+    CHECK(shown.code == 0);
+    CHECK(contains(shown.out, "grid  equal:6x5   (6 bands × 5 lanes of equal size)"));
+
+    const std::string before = dataSnapshot(w.db);
+    const auto preview = w.run({"settings", "grid", "equal:3x5", "--preview"});
+    INFO(preview.out << preview.err);
+    CHECK(preview.code == 0);
+    CHECK(contains(preview.out, "Moving from equal:6x5 to equal:3x5 would do this:"));
+    CHECK(contains(preview.out, "(2 matches)"));
+    CHECK(contains(preview.out, "1 zone targets"));
+    CHECK(dataSnapshot(w.db) == before);
+
+    for (const std::vector<std::string>& bad :
+         {std::vector<std::string>{"settings", "grid", "equal:6by5", "--by", "A. Coach"},
+          {"settings", "grid", "markings:0", "--by", "A. Coach"},
+          {"settings", "grid", "equal:3x5"}}) {
+        const auto r = w.run(bad);
+        INFO(bad[2]);
+        CHECK(r.code == 2);
+        CHECK(contains(r.err, "error: settings grid " + bad[2] + ": "));
+        CHECK(dataSnapshot(w.db) == before);
+    }
+
+    const auto changed = w.run({"settings", "grid", "equal:3x5", "--by", "A. Coach"});
+    CHECK(changed.code == 0);
+    CHECK(contains(changed.out, "Moved from equal:6x5 to equal:3x5:"));
+    CHECK(contains(w.run({"settings", "show"}).out, "grid             equal:3x5   "));
+    const auto list = w.run({"targets", "list", "--season", "2026-27"});
+    CHECK(contains(list.out, "band 1 lane 5"));
+    const auto log = w.run({"settings", "grid"});
+    CHECK(contains(log.out, "equal:6x5 -> equal:3x5 by A. Coach: 2 matches counted again"));
+}
