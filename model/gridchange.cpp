@@ -91,31 +91,43 @@ GridChangePreview previewGridChange(ClubRepository& repo, const ZoneGrid& to) {
     for (const Drill& d : DrillBook(repo).list(true))
         if (!d.zones.empty()) ++p.drillsWithZones;
 
+    auto count = [](int n, const char* one, const char* many) {
+        return std::to_string(n) + " " + (n == 1 ? one : many);
+    };
     p.lines.push_back("Every match's tallies are counted again on " + describeGrid(to) + " (" +
-                      std::to_string(p.matches) + " matches).");
-    if (p.targets.zonesCarried > 0)
-        p.lines.push_back(std::to_string(p.targets.zonesCarried) +
-                          " zone targets (season, metric and zone) take the targets of the old "
-                          "zone covering most of them: " +
-                          std::to_string(p.targets.versions.size()) +
-                          " versions, each noting where it came from. Check them on the targets "
-                          "page.");
-    if (p.targets.zonesKept > 0)
-        p.lines.push_back(std::to_string(p.targets.zonesKept) +
-                          " zone targets set earlier on this grid come back as they were.");
-    if (p.targets.zonesCarried == 0 && p.targets.zonesKept == 0)
+                      count(p.matches, "match", "matches") + ").");
+    const int carried = p.targets.zonesCarried;
+    if (carried > 0)
+        p.lines.push_back(count(carried, "zone target (season, metric and zone) takes",
+                                "zone targets (season, metric and zone) take") +
+                          " the targets of the old zone covering most of " +
+                          (carried == 1 ? "it: " : "them: ") +
+                          count(static_cast<int>(p.targets.versions.size()), "version", "versions") +
+                          ", each noting where it came from. Check them on the targets page.");
+    const int kept = p.targets.zonesKept;
+    if (kept > 0)
+        p.lines.push_back(count(kept, "zone target set earlier on this grid comes",
+                                "zone targets set earlier on this grid come") +
+                          " back as " + (kept == 1 ? "it was." : "they were."));
+    if (carried == 0 && kept == 0)
         p.lines.push_back("No per-zone targets to move; whole-pitch targets stay as they are.");
     else
         p.lines.push_back("Targets set on " + p.from.name() +
                           " stay in the club file and come back if the grid is changed back.");
     if (p.focusesOnOtherGrids > 0)
-        p.lines.push_back(std::to_string(p.focusesOnOtherGrids) +
-                          " focuses keep the zones they were opened on; their reviews are counted "
-                          "from the match events on that grid.");
+        p.lines.push_back(p.focusesOnOtherGrids == 1
+                              ? "1 focus keeps the zones it was opened on; its review is counted "
+                                "from the match events on that grid."
+                              : std::to_string(p.focusesOnOtherGrids) +
+                                    " focuses keep the zones they were opened on; their reviews "
+                                    "are counted from the match events on that grid.");
     if (p.drillsWithZones > 0)
-        p.lines.push_back(std::to_string(p.drillsWithZones) +
-                          " drill notes are shown on the new zones their areas fall in; their "
-                          "text is not changed.");
+        p.lines.push_back(p.drillsWithZones == 1
+                              ? "1 drill note is shown on the new zones its area falls in; its "
+                                "text is not changed."
+                              : std::to_string(p.drillsWithZones) +
+                                    " drill notes are shown on the new zones their areas fall "
+                                    "in; their text is not changed.");
     return p;
 }
 

@@ -144,7 +144,7 @@ TEST_CASE("after a grid change a focus keeps its zones and its review's numbers"
     const auto moved = cli({"--db", club.db, "settings", "grid", "markings:6", "--by", "A. Coach"});
     INFO(moved.out << moved.err);
     REQUIRE(moved.code == 0);
-    CHECK(contains(moved.out, "1 focuses keep the zones they were opened on"));
+    CHECK(contains(moved.out, "1 focus keeps the zones it was opened on"));
 
     // Counted from the events on the focus's own grid: the same numbers to the last digit.
     const auto after = cli({"--db", club.db, "review", "1", "--format", "json"});

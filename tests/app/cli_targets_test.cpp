@@ -635,7 +635,7 @@ TEST_CASE("settings grid previews, changes and logs a grid change; bad grids exi
     CHECK(preview.code == 0);
     CHECK(contains(preview.out, "Moving from equal:6x5 to equal:3x5 would do this:"));
     CHECK(contains(preview.out, "(2 matches)"));
-    CHECK(contains(preview.out, "1 zone targets"));
+    CHECK(contains(preview.out, "1 zone target (season, metric and zone) takes the targets of the old zone covering most of it: 1 version,"));
     CHECK(dataSnapshot(w.db) == before);
 
     for (const std::vector<std::string>& bad :

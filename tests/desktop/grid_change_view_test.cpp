@@ -85,7 +85,7 @@ void GridChangeViewTest::choiceShowsWhatWouldChange() {
     QVERIFY(choice.count() >= 1);
     const QString preview = view.previewLines().join(QLatin1Char('\n'));
     QVERIFY2(preview.contains(QStringLiteral("(8 matches)")), qPrintable(preview));
-    QVERIFY2(preview.contains(QStringLiteral("1 focuses keep the zones they were opened on")), qPrintable(preview));
+    QVERIFY2(preview.contains(QStringLiteral("1 focus keeps the zones it was opened on")), qPrintable(preview));
     QVERIFY(!view.canChange()); // no name yet
     view.setBy(QStringLiteral("A. Coach"));
     QVERIFY(view.canChange());
