@@ -1003,7 +1003,8 @@ FlagSettings ClubRepository::flagSettings() const {
     });
 }
 
-void ClubRepository::saveFlagSettings(const FlagSettings& f) {
+void ClubRepository::saveFlagSettings(const FlagSettings& f,
+                                      const std::vector<std::pair<std::string, std::string>>& more) {
     guarded("cannot save settings", [&] {
         SQLite::Transaction tx(*m_db);
         SQLite::Statement q(*m_db, "INSERT INTO setting(key, value) VALUES (?, ?) "
@@ -1026,6 +1027,7 @@ void ClubRepository::saveFlagSettings(const FlagSettings& f) {
         put("flags.fdr_q", num(f.fdrQ));
         put("flags.interval", f.rateInterval == IntervalMethod::Jeffreys ? "jeffreys" : "wilson");
         put("flags.window", f.window.name());
+        for (const auto& [key, value] : more) put(key.c_str(), value);
         tx.commit();
         return 0;
     });

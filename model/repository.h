@@ -15,6 +15,7 @@
 #include <memory>
 #include <optional>
 #include <string>
+#include <utility>
 #include <vector>
 
 namespace SQLite {
@@ -129,7 +130,10 @@ public:
 
     /// Flag settings stored in the club file (defaults where unset).
     FlagSettings flagSettings() const;
-    void saveFlagSettings(const FlagSettings& settings);
+    /// Writes the flag settings and, in the same transaction, the `more` settings given as
+    /// key and value (e.g. FixtureStore::capsSetting), so a settings page saves all or nothing.
+    void saveFlagSettings(const FlagSettings& settings,
+                          const std::vector<std::pair<std::string, std::string>>& more = {});
 
     /// Moves the club to another zone grid in one transaction (docs/storage.md, "Changing
     /// the zone grid"): every match's tallies are counted again on `to`, per-zone target

@@ -185,6 +185,10 @@ IntensityCaps FixtureStore::caps() const {
     });
 }
 
+std::pair<std::string, std::string> FixtureStore::capsSetting(const IntensityCaps& caps) {
+    return {kCapsKey, capsToJson(caps)};
+}
+
 void FixtureStore::saveCaps(const IntensityCaps& caps) {
     SQLite::Database& db = m_repo.database();
     guarded("cannot save settings", [&] {

@@ -9,6 +9,7 @@
 #include <cstdint>
 #include <optional>
 #include <string>
+#include <utility>
 #include <vector>
 
 namespace pitchloop::model {
@@ -45,6 +46,9 @@ class FixtureStore {
     /// The club's intensity caps (setting `microcycle.caps`; the defaults while unset).
     IntensityCaps caps() const;
     void saveCaps(const IntensityCaps& caps);
+    /// The caps as the (key, value) of the setting saveCaps writes, to save them together with
+    /// other settings (ClubRepository::saveFlagSettings).
+    static std::pair<std::string, std::string> capsSetting(const IntensityCaps& caps);
 
   private:
     ClubRepository& m_repo;

@@ -260,8 +260,8 @@ bool SettingsView::write(const Stored& values) {
         return false;
     }
     try {
-        FixtureStore(*repo).saveCaps(values.caps);
-        repo->saveFlagSettings(values.flags);
+        // One transaction: the flags and the caps are saved together or not at all.
+        repo->saveFlagSettings(values.flags, {FixtureStore::capsSetting(values.caps)});
     } catch (const std::exception& e) {
         setResult(tr("The settings were not saved: %1").arg(QString::fromUtf8(e.what())), {});
         return false;

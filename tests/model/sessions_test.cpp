@@ -150,6 +150,29 @@ TEST_CASE("intensity caps are editable and kept in the club file", "[sessions][f
     CHECK(FixtureStore(repo).caps().before(4) == 4);
 }
 
+TEST_CASE("flag settings and caps are saved together or not at all", "[sessions][storage]") {
+    ClubRepository repo(":memory:");
+    FixtureStore store(repo);
+    FlagSettings flags;
+    flags.level = 0.8;
+    IntensityCaps caps;
+    caps.beforeMatch[3] = 3;
+    repo.saveFlagSettings(flags, {FixtureStore::capsSetting(caps)});
+    CHECK(repo.flagSettings().level == 0.8);
+    CHECK(store.caps() == caps);
+
+    // A fault on the caps row (a trigger stands in for a full disk) leaves the flags unsaved too.
+    repo.database().exec("CREATE TRIGGER refuse BEFORE UPDATE ON setting WHEN "
+                         "new.key = 'microcycle.caps' BEGIN SELECT RAISE(ABORT, 'disk full'); END");
+    FlagSettings next = flags;
+    next.level = 0.95;
+    IntensityCaps nextCaps = caps;
+    nextCaps.beforeMatch[3] = 1;
+    CHECK_THROWS_AS(repo.saveFlagSettings(next, {FixtureStore::capsSetting(nextCaps)}), StorageError);
+    CHECK(repo.flagSettings().level == 0.8);
+    CHECK(store.caps() == caps);
+}
+
 TEST_CASE("a planned session is saved with its blocks and minutes per focus, and a review "
           "reads the minutes back",
           "[sessions][planner]") {
