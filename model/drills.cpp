@@ -138,6 +138,16 @@ void to_json(json& j, const Drill& d) {
     j = contentJson<json>(d);
 }
 
+std::vector<std::string> changedFields(const Drill& before, const Drill& after) {
+    const json a = before, b = after;
+    std::vector<std::string> out;
+    for (auto it = b.begin(); it != b.end(); ++it)
+        if (!a.contains(it.key()) || a[it.key()] != it.value()) out.push_back(it.key());
+    for (auto it = a.begin(); it != a.end(); ++it)
+        if (!b.contains(it.key())) out.push_back(it.key());
+    return out;
+}
+
 void from_json(const json& j, Drill& d) {
     d.title = j.at("title").get<std::string>();
     d.purpose = j.value("purpose", std::string());

@@ -73,6 +73,11 @@ void to_json(nlohmann::json& j, const Drill& d);
 /// User files go through parseDrillFile, which reports problems instead.
 void from_json(const nlohmann::json& j, Drill& d);
 
+/// The content fields that differ between two versions, by drills-file key ("title",
+/// "duration_min", "players", "area_m", "zones", ...): changed or added keys in alphabetical
+/// order, then keys the later version no longer has.
+std::vector<std::string> changedFields(const Drill& before, const Drill& after);
+
 /// Checks a drill's content: title and author given, 1–180 minutes, intensity 1–5, 1–40
 /// players with min ≤ max, area (when given) 1–120 × 1–90 m, known metric ids, zones inside
 /// `grid`, texts well-formed UTF-8 (any script or emoji is fine and is kept byte for byte).

@@ -192,17 +192,6 @@ bool parseArea(const std::string& text, double& length, double& width) {
     return number(s.substr(0, x), length) && number(s.substr(x + 1), width);
 }
 
-/// The fields that differ between two versions, by file key.
-std::vector<std::string> changedFields(const Drill& before, const Drill& after) {
-    const nlohmann::json a = before, b = after;
-    std::vector<std::string> out;
-    for (auto it = b.begin(); it != b.end(); ++it)
-        if (!a.contains(it.key()) || a[it.key()] != it.value()) out.push_back(it.key());
-    for (auto it = a.begin(); it != a.end(); ++it)
-        if (!b.contains(it.key())) out.push_back(it.key());
-    return out;
-}
-
 } // namespace
 
 void DrillVerbs::addFieldFlags(CLI::App* sub) {

@@ -263,7 +263,7 @@ void DrillBookView::refreshSelection() {
     if (current) {
         std::vector<Drill> history = DrillBook(*repo).history(m_selectedId);
         std::reverse(history.begin(), history.end()); // newest first
-        m_versions->reset(std::move(history), [this](const std::string& id) { return metricName(id); });
+        m_versions->resetVersions(std::move(history), [this](const std::string& id) { return metricName(id); });
         m_selectedDeleted = current->deleted;
         m_editorTitle = tr("Drill %1 · %2").arg(m_selectedId).arg(QString::fromStdString(current->title));
         m_editorDetail =

@@ -4,6 +4,8 @@
 
 #include <QLocale>
 
+#include <map>
+
 namespace pitchloop::desktop {
 
 using namespace pitchloop::model;
@@ -37,6 +39,46 @@ void DrillListModel::reset(std::vector<Drill> drills, MetricName metricName) {
     const int before = count();
     beginResetModel();
     m_rows = std::move(drills);
+    m_changes.clear();
+    m_metricName = std::move(metricName);
+    endResetModel();
+    if (before != count()) emit countChanged();
+}
+
+namespace {
+
+/// A drills-file key in the words of the editor's fields.
+QString fieldWords(const std::string& key) {
+    static const std::map<std::string, const char*> words{
+        {"title", "title"},           {"purpose", "purpose"},
+        {"organisation", "organisation"}, {"coaching_points", "coaching points"},
+        {"duration_min", "minutes"},  {"intensity", "intensity"},
+        {"players", "players"},       {"area_m", "area"},
+        {"equipment", "equipment"},   {"metrics", "metrics"},
+        {"zones", "zones"},           {"tags", "tags"},
+        {"author", "author"}};
+    const auto it = words.find(key);
+    return it == words.end() ? QString::fromStdString(key) : QString::fromLatin1(it->second);
+}
+
+} // namespace
+
+void DrillListModel::resetVersions(std::vector<Drill> newestFirst, MetricName metricName) {
+    std::vector<QString> changes;
+    for (std::size_t i = 0; i < newestFirst.size(); ++i) {
+        if (i + 1 == newestFirst.size()) {
+            changes.push_back(newestFirst[i].versionCount == 1 ? tr("First version") : QString());
+            continue;
+        }
+        QStringList fields;
+        for (const auto& key : changedFields(newestFirst[i + 1], newestFirst[i])) fields << fieldWords(key);
+        changes.push_back(fields.isEmpty() ? tr("No change in content")
+                                           : tr("Changed: %1").arg(fields.join(QStringLiteral(", "))));
+    }
+    const int before = count();
+    beginResetModel();
+    m_rows = std::move(newestFirst);
+    m_changes = std::move(changes);
     m_metricName = std::move(metricName);
     endResetModel();
     if (before != count()) emit countChanged();
@@ -110,6 +152,10 @@ QVariant DrillListModel::data(const QModelIndex& index, int role) const {
             .arg(intensityText(d.intensity), playersText(d.playersMin, d.playersMax));
     case EditedByRole: return text(d.editedBy);
     case EditedDateTextRole: return compactDateText(d.editedAt.substr(0, 10));
+    case ChangesTextRole:
+        return static_cast<std::size_t>(index.row()) < m_changes.size()
+                   ? m_changes[static_cast<std::size_t>(index.row())]
+                   : QString();
     default: return {};
     }
 }
@@ -124,7 +170,7 @@ QHash<int, QByteArray> DrillListModel::roleNames() const {
             {EditedTextRole, "editedText"}, {VersionRole, "version"},
             {DeletedRole, "deleted"},       {DetailTextRole, "detailText"},
             {EditedByRole, "editedBy"},     {EditedDateTextRole, "editedDateText"},
-            {WorksOnTextRole, "worksOnText"}};
+            {WorksOnTextRole, "worksOnText"}, {ChangesTextRole, "changesText"}};
 }
 
 } // namespace pitchloop::desktop

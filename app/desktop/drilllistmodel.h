@@ -39,6 +39,9 @@ public:
         EditedByRole,     ///< who wrote this version
         EditedDateTextRole, ///< "2 Oct 2026"
         WorksOnTextRole,  ///< metric names and tags in one line
+        /// In a list of one drill's versions: "First version" or "Changed: title, minutes"
+        /// against the version before it; empty in other lists.
+        ChangesTextRole,
     };
     Q_ENUM(Role)
 
@@ -48,6 +51,8 @@ public:
     explicit DrillListModel(QObject* parent = nullptr);
 
     void reset(std::vector<model::Drill> drills, MetricName metricName = {});
+    /// One drill's versions, newest first; each row also says what it changed.
+    void resetVersions(std::vector<model::Drill> newestFirst, MetricName metricName = {});
     int count() const { return static_cast<int>(m_rows.size()); }
     const model::Drill* at(int row) const;
     /// Row of a drill id, -1 when absent.
@@ -67,6 +72,7 @@ private:
     QString tagsText(const model::Drill& d) const;
 
     std::vector<model::Drill> m_rows;
+    std::vector<QString> m_changes; ///< per row, for a list of versions
     MetricName m_metricName;
 };
 

@@ -312,6 +312,7 @@ Page {
                         required property string editedBy
                         required property string title
                         required property string detailText
+                        required property string changesText
                         required property int version
                         width: ListView.view.width
                         leftPadding: Theme.gapSmall
@@ -332,7 +333,8 @@ Page {
                             }
                             Label {
                                 Layout.fillWidth: true
-                                text: qsTr("by %1").arg(entry.editedBy)
+                                text: entry.changesText.length > 0 ? qsTr("by %1 · %2").arg(entry.editedBy).arg(entry.changesText)
+                                                                   : qsTr("by %1").arg(entry.editedBy)
                                 font.pixelSize: Theme.fontSmall
                                 color: Theme.text
                                 elide: Text.ElideRight

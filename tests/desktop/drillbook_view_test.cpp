@@ -230,6 +230,8 @@ void DrillBookViewTest::addEditAndUndo() {
     QCOMPARE(stored->editedBy, std::string("R. Tamsin"));
     QCOMPARE(view.versions()->rowCount(), 2);
     QCOMPARE(role(*view.versions(), 0, "version").toInt(), 2); // newest first
+    QCOMPARE(role(*view.versions(), 0, "changesText").toString(), QStringLiteral("Changed: minutes"));
+    QCOMPARE(role(*view.versions(), 1, "changesText").toString(), QStringLiteral("First version"));
     QVERIFY(view.canUndo());
     QVERIFY(view.undoText().contains(QStringLiteral("edit")));
 

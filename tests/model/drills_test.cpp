@@ -326,6 +326,10 @@ TEST_CASE("add, edit and history keep every version", "[drills]") {
 
     const auto history = book.history(added.id);
     REQUIRE(history.size() == 2);
+    // What the second version changed, by drills-file key (alphabetical).
+    CHECK(changedFields(history[0], history[1]) ==
+          std::vector<std::string>{"coaching_points", "intensity"});
+    CHECK(changedFields(history[1], history[1]).empty());
     CHECK(history[0].sameContent(d));
     CHECK(history[0].editedBy == "L. Farrant");
     CHECK(history[0].editedAt == kNow);
