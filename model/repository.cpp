@@ -1,5 +1,6 @@
 #include "repository.h"
 
+#include "clock.h"
 #include "gridchange.h"
 #include "problem.h"
 
@@ -228,16 +229,6 @@ CREATE TABLE grid_change(
 };
 
 static_assert(std::size(kMigrations) == ClubRepository::kSchemaVersion);
-
-std::string nowUtc() {
-    const auto now = std::chrono::system_clock::now();
-    const std::time_t tt = std::chrono::system_clock::to_time_t(now);
-    std::tm tm{};
-    gmtime_r(&tt, &tm);
-    char buf[32];
-    std::strftime(buf, sizeof buf, "%Y-%m-%dT%H:%M:%SZ", &tm);
-    return buf;
-}
 
 template <typename F>
 auto guarded(const char* what, F&& f) -> decltype(f()) {
@@ -596,7 +587,7 @@ void ClubRepository::storeMatch(const Match& match, const SourceFile& source,
         else ins.bind(13, info.extra);
         ins.bind(14, source.name);
         ins.bind(15, source.hash);
-        ins.bind(16, source.ingestedAt.empty() ? nowUtc() : source.ingestedAt);
+        ins.bind(16, source.ingestedAt.empty() ? systemNowUtcIso() : source.ingestedAt);
         ins.exec();
         const std::int64_t row = m_db->getLastInsertRowid();
 

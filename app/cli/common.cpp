@@ -1,12 +1,12 @@
 #include "common.h"
 
+#include "clock.h"
+
 #include <nlohmann/json.hpp>
 
-#include <chrono>
 #include <cmath>
 #include <cstdio>
 #include <cstdlib>
-#include <ctime>
 #include <filesystem>
 
 namespace pitchloop::cli {
@@ -34,27 +34,9 @@ std::unique_ptr<ClubRepository> openClub(const Globals& g) {
     return std::make_unique<ClubRepository>(g.db);
 }
 
-namespace {
-std::string formatUtc(const char* pattern) {
-    const std::time_t tt = std::chrono::system_clock::to_time_t(std::chrono::system_clock::now());
-    std::tm tm{};
-    gmtime_r(&tt, &tm);
-    char buf[40];
-    std::strftime(buf, sizeof buf, pattern, &tm);
-    return buf;
-}
-} // namespace
+std::string today() { return model::todayIso(); }
 
-std::string today() {
-    if (const char* env = std::getenv("PITCHLOOP_TODAY"); env && isIsoDate(env)) return env;
-    return formatUtc("%Y-%m-%d");
-}
-
-std::string nowUtc() {
-    if (const char* env = std::getenv("PITCHLOOP_TODAY"); env && isIsoDate(env))
-        return std::string(env) + "T12:00:00Z";
-    return formatUtc("%Y-%m-%dT%H:%M:%SZ");
-}
+std::string nowUtc() { return model::nowUtcIso(); }
 
 std::optional<double> parseNumber(const std::string& text) {
     if (text.empty()) return std::nullopt;

@@ -1,6 +1,7 @@
 #pragma once
-// "Today" and "now" for the desktop app, with $PITCHLOOP_TODAY overriding the clock as it does
-// for the command line, so demos and tests can replay a season. model/ never reads the clock.
+// "Today" and "now" for the desktop app: model/clock, shared with the command line, with
+// $PITCHLOOP_TODAY overriding the clock so demos and tests can replay a season. Computations in
+// model/ take the day as a parameter; only these entry points read the clock.
 
 #include <string>
 
