@@ -1,5 +1,7 @@
 #include "display.h"
 
+#include "focus.h"
+
 #include <QDate>
 #include <QLocale>
 
@@ -67,6 +69,18 @@ QString targetText(MetricKind kind, const std::optional<Target>& target) {
 QString zoneText(int band, int lane) {
     if (band == 0 && lane == 0) return QStringLiteral("Whole pitch");
     return QStringLiteral("Band %1 · lane %2").arg(band).arg(lane);
+}
+
+QString verdictWord(const std::string& verdict) {
+    const auto v = verdictFromString(verdict);
+    if (!v) return QString::fromStdString(verdict);
+    switch (*v) {
+    case Verdict::Worked: return QStringLiteral("worked");
+    case Verdict::Partly: return QStringLiteral("partly");
+    case Verdict::NoChange: return QStringLiteral("no change");
+    case Verdict::CantTell: return QStringLiteral("can't tell");
+    }
+    return {};
 }
 
 QString stateText(FlagState state) {

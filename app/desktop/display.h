@@ -26,6 +26,8 @@ QString sampleText(model::MetricKind kind, const model::WindowSum& sum, const mo
 QString targetText(model::MetricKind kind, const std::optional<model::Target>& target);
 /// "Band 5 · lane 1", or "Whole pitch" for band 0, lane 0.
 QString zoneText(int band, int lane);
+/// A focus's verdict in words: "worked", "partly", "no change", "can't tell".
+QString verdictWord(const std::string& verdict);
 /// The state in our own words: "Slipped", "Watch", "On target", "Too little data", "No target".
 QString stateText(model::FlagState state);
 /// How sure a flag is: "P(miss) 0.64", empty when not judged.

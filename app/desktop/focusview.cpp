@@ -33,18 +33,6 @@ namespace {
 
 QString qs(const std::string& s) { return QString::fromStdString(s); }
 
-QString verdictWord(const std::string& verdict) {
-    const auto v = verdictFromString(verdict);
-    if (!v) return qs(verdict);
-    switch (*v) {
-    case Verdict::Worked: return FocusView::tr("worked");
-    case Verdict::Partly: return FocusView::tr("partly");
-    case Verdict::NoChange: return FocusView::tr("no change");
-    case Verdict::CantTell: return FocusView::tr("can't tell");
-    }
-    return {};
-}
-
 int phaseOf(FocusState s) {
     switch (s) {
     case FocusState::Open: return FocusPhase::Open;

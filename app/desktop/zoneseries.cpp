@@ -1,6 +1,7 @@
 #include "zoneseries.h"
 
 #include "clubsession.h"
+#include "focus.h"
 #include "metriclistmodel.h"
 #include "pitchgeometry.h"
 #include "seriesmodel.h"
@@ -9,6 +10,7 @@
 
 #include <QLocale>
 
+#include <algorithm>
 #include <cmath>
 #include <limits>
 
@@ -63,6 +65,8 @@ void ZoneSeries::clear() {
     m_summaryCertainty.clear();
     m_summaryMatchText.clear();
     m_summaryEwmaText.clear();
+    m_focusSpans.clear();
+    m_focusLines.clear();
     m_series->reset({}, {}, {});
     m_map->clear();
 }
@@ -84,7 +88,22 @@ void ZoneSeries::refresh() {
     }
     const MetricSpec* metric = s->metricSpec(m_metricId.toStdString());
     if (!metric) {
-        // Open on the most certain flag of the match, if any.
+        // Open on the latest open focus of the season, where the staff's attention is.
+        const auto focuses = FocusStore(*s->repository()).list();
+        for (auto it = focuses.rbegin(); it != focuses.rend() && !metric; ++it) {
+            if (!it->closedAt.empty() || it->squad != season->squad() || it->season != season->season() ||
+                it->zones.empty())
+                continue;
+            const auto zones = it->grid == s->grid() ? it->zones : mapZones(it->zones, it->grid, s->grid());
+            if (zones.empty()) continue;
+            metric = s->metricSpec(it->metric);
+            const bool whole = static_cast<int>(it->zones.size()) == it->grid.zoneCount();
+            m_band = whole ? 0 : zones.front().band;
+            m_lane = whole ? 0 : zones.front().lane;
+        }
+    }
+    if (!metric) {
+        // Else on the most certain flag of the match, if any.
         const Debrief& debriefed = season->debriefAt(*focal);
         for (const auto* list : {&debriefed.slippedInWindow, &debriefed.slippedInMatch, &debriefed.watched}) {
             if (list->empty()) continue;
@@ -134,6 +153,7 @@ void ZoneSeries::refresh() {
 
     // The series: one point per match of the season.
     std::vector<SeriesPoint> points;
+    std::vector<std::string> rowDates; ///< the date of each point
     std::vector<double> axisValues;
     const auto& tallies = season->tallies();
     for (std::size_t t = 0; t < season->size(); ++t) {
@@ -167,7 +187,9 @@ void ZoneSeries::refresh() {
         p.certaintyText = certaintyText(b->pMiss);
         for (double v : {p.value, p.low, p.high, p.ewma, p.target}) axisValues.push_back(v);
         points.push_back(std::move(p));
+        rowDates.push_back(tallies.dates[t]);
     }
+    showFocuses(*metric, season->squad(), season->season(), rowDates);
     m_hasSeries = !points.empty();
     const ScaleDomain axis = scaleDomain(kind, axisValues);
     m_series->reset(std::move(points), axis, scaleLabels(kind, axis));
@@ -213,6 +235,43 @@ void ZoneSeries::refresh() {
     }
     m_map->reset(std::move(header), zoneCells(zones, kind, domain));
     emit changed();
+}
+
+void ZoneSeries::showFocuses(const MetricSpec& metric, const std::string& squad,
+                             const std::string& seasonName, const std::vector<std::string>& rowDates) {
+    ClubRepository* repo = session()->repository();
+    const ZoneGrid& grid = session()->grid();
+    int shown = 0;
+    for (const Focus& f : FocusStore(*repo).list()) {
+        if (f.squad != squad || f.season != seasonName || f.metric != metric.id) continue;
+        // A focus from an earlier grid is read on the club's grid, as the planner reads it.
+        const std::vector<Zone> zones = f.grid == grid ? f.zones : mapZones(f.zones, f.grid, grid);
+        const bool whole = static_cast<int>(f.zones.size()) == f.grid.zoneCount() && f.grid.zoneCount() > 1;
+        const bool here = (m_band == 0 && m_lane == 0)
+                              ? whole
+                              : !whole && std::find(zones.begin(), zones.end(), Zone{m_band, m_lane}) != zones.end();
+        if (!here) continue;
+        const std::string closedOn = f.closedAt.substr(0, 10);
+        int startRow = -1, endRow = -1;
+        for (std::size_t r = 0; r < rowDates.size(); ++r) {
+            if (startRow < 0 && rowDates[r] >= f.startDate) startRow = static_cast<int>(r);
+            if (!closedOn.empty() && rowDates[r] <= closedOn) endRow = static_cast<int>(r);
+        }
+        const QString label = QStringLiteral("F%1").arg(++shown);
+        if (startRow >= 0)
+            m_focusSpans.append(QVariantMap{{QStringLiteral("label"), label},
+                                            {QStringLiteral("startRow"), startRow},
+                                            {QStringLiteral("endRow"), closedOn.empty() ? -1 : endRow},
+                                            {QStringLiteral("closed"), !closedOn.empty()}});
+        const QString state = closedOn.empty()
+                                  ? tr("open")
+                                  : tr("closed %1: %2").arg(compactDateText(closedOn), verdictWord(f.verdict));
+        m_focusLines << tr("%1 · focus #%2 after %3 by %4, trained from %5 · %6")
+                            .arg(label)
+                            .arg(f.id)
+                            .arg(QString::fromStdString(f.openedAfterMatch), QString::fromStdString(f.openedBy),
+                                 compactDateText(f.startDate), state);
+    }
 }
 
 } // namespace pitchloop::desktop

@@ -1,11 +1,18 @@
 #pragma once
 // One zone's trend for one metric over a season (the zone page): each match's value, the judged
-// window's value and interval, the EWMA and the target in force, match by match.
+// window's value and interval, the EWMA and the target in force, match by match, and the
+// focuses the zone has had.
 
+#include "metricspec.h"
 #include "sessionclient.h"
 
 #include <QString>
+#include <QStringList>
+#include <QVariantList>
 #include <QtQml/qqmlregistration.h>
+
+#include <string>
+#include <vector>
 
 namespace pitchloop::desktop {
 
@@ -15,8 +22,9 @@ class ZoneMapModel;
 
 /// Inputs: metricId, band and lane (0, 0: the whole pitch), and
 /// matchId (empty: the latest match), whose season is drawn and whose judged window the
-/// summary and the zone picker show. Until a metric is chosen, the page opens on the zone of
-/// the chosen match's most certain flag (else the first metric's whole pitch).
+/// summary and the zone picker show. Until a metric is chosen, the page opens on the latest
+/// open focus of that season (its metric and first zone), else on the zone of the chosen
+/// match's most certain flag, else on the first metric's whole pitch.
 class ZoneSeries : public pitchloop::desktop::SessionClient {
     Q_OBJECT
     Q_MOC_INCLUDE("pitchgeometry.h")
@@ -51,6 +59,11 @@ class ZoneSeries : public pitchloop::desktop::SessionClient {
     /// "This match alone: 42.0% · n = 143" and "EWMA, λ 0.30: 41.8%" at the chosen match.
     Q_PROPERTY(QString summaryMatchText READ summaryMatchText NOTIFY changed)
     Q_PROPERTY(QString summaryEwmaText READ summaryEwmaText NOTIFY changed)
+    /// The focuses this zone has had for this metric in the season, on the chart: a list of
+    /// {label: "F1", startRow, endRow (-1 while open), closed}; rows index the series.
+    Q_PROPERTY(QVariantList focusSpans READ focusSpans NOTIFY changed)
+    /// The same in words, one focus a line ("F1 · #1 opened after KB-2026-08 by … · closed …").
+    Q_PROPERTY(QStringList focusLines READ focusLines NOTIFY changed)
     Q_PROPERTY(pitchloop::desktop::SeriesModel* series READ series CONSTANT)
     Q_PROPERTY(pitchloop::desktop::ZoneMapModel* map READ map CONSTANT)
     Q_PROPERTY(pitchloop::desktop::PitchGeometry* geometry READ geometry CONSTANT)
@@ -89,6 +102,8 @@ public:
     QString summaryCertainty() const { return m_summaryCertainty; }
     QString summaryMatchText() const { return m_summaryMatchText; }
     QString summaryEwmaText() const { return m_summaryEwmaText; }
+    QVariantList focusSpans() const { return m_focusSpans; }
+    QStringList focusLines() const { return m_focusLines; }
     SeriesModel* series() const { return m_series; }
     ZoneMapModel* map() const { return m_map; }
     PitchGeometry* geometry() const { return m_geometry; }
@@ -102,6 +117,9 @@ protected:
 
 private:
     void clear();
+    /// The season's focuses on this metric and zone, placed on the series' rows.
+    void showFocuses(const model::MetricSpec& metric, const std::string& squad,
+                     const std::string& seasonName, const std::vector<std::string>& rowDates);
 
     QString m_metricId;
     int m_band = 0;
@@ -128,6 +146,8 @@ private:
     QString m_summaryCertainty;
     QString m_summaryMatchText;
     QString m_summaryEwmaText;
+    QVariantList m_focusSpans;
+    QStringList m_focusLines;
     SeriesModel* m_series;
     ZoneMapModel* m_map;
     PitchGeometry* m_geometry;

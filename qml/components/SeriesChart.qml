@@ -14,6 +14,9 @@ Item {
     property string windowText
     property string ewmaText
     property string levelText
+    /// Focuses on this zone: [{label, startRow, endRow (-1 while open), closed}], drawn as a
+    /// line where the training started and a strip along the top while it ran.
+    property var focusSpans: []
 
     readonly property real plotLeft: 58
     readonly property real plotRight: width - 16
@@ -108,6 +111,29 @@ Item {
                 drawing = true
             }
             ctx.stroke()
+            // Focuses: a line where the training started, a strip while it ran, a label.
+            const spans = root.focusSpans
+            for (let f = 0; f < spans.length; ++f) {
+                const span = spans[f]
+                const x0 = root.xOf(span.startRow) - root.slot / 2
+                const x1 = span.endRow >= 0 ? root.xOf(span.endRow) + root.slot / 2 : root.plotRight
+                const y = root.plotTop + f * 16
+                ctx.fillStyle = Qt.rgba(0.04, 0.36, 0.6, 0.14)
+                ctx.fillRect(x0, y, Math.max(1, x1 - x0), 14)
+                ctx.strokeStyle = Theme.accent
+                ctx.lineWidth = 1.5
+                ctx.setLineDash([2, 3])
+                ctx.beginPath()
+                ctx.moveTo(Math.round(x0) + 0.5, root.plotTop)
+                ctx.lineTo(Math.round(x0) + 0.5, root.plotBottom)
+                ctx.stroke()
+                ctx.setLineDash([])
+                ctx.fillStyle = Theme.accent
+                ctx.textAlign = "left"
+                ctx.textBaseline = "middle"
+                ctx.font = "bold " + Theme.fontSmall + "px '" + Theme.fontFamily + "'"
+                ctx.fillText(span.label + (span.closed ? "" : " →"), x0 + 4, y + 7)
+            }
             // Each match's own value.
             const values = s.values
             for (let k = 0; k < n; ++k) {
@@ -125,7 +151,7 @@ Item {
 
     // Everything the drawing reads; a change repaints.
     readonly property var drawn: [series.values, series.lows, series.highs, series.ewmas,
-                                  series.targets, series.axisLabels, focalRow, width, height]
+                                  series.targets, series.axisLabels, focalRow, focusSpans, width, height]
     onDrawnChanged: canvas.requestPaint()
 
     // The judged state after every match, and the dates below it.

@@ -168,6 +168,7 @@ Page {
                 Layout.fillHeight: true
                 series: trend.series
                 focalRow: trend.focalRow
+                focusSpans: trend.focusSpans
                 windowText: trend.windowText
                 ewmaText: trend.ewmaText
                 levelText: trend.levelText
@@ -176,6 +177,15 @@ Page {
                 windowText: trend.windowText
                 ewmaText: trend.ewmaText
                 levelText: trend.levelText
+            }
+            Label {
+                Layout.fillWidth: true
+                text: trend.focusLines.length > 0
+                      ? qsTr("Focuses on this zone and metric:\n%1").arg(trend.focusLines.join("\n"))
+                      : qsTr("No focus has worked on this zone for this metric this season.")
+                color: Theme.textMuted
+                font.pixelSize: Theme.fontSmall
+                wrapMode: Text.WordWrap
             }
         }
     }

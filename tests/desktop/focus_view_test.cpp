@@ -23,6 +23,7 @@
 #include "sessions.h"
 #include "targets.h"
 #include "zonemapmodel.h"
+#include "zoneseries.h"
 
 #include <QAbstractItemModelTester>
 #include <QDir>
@@ -76,6 +77,7 @@ private slots:
     void reviewAgainstModel();
     void linkAndUnlink();
     void verdictClosesTheFocus();
+    void zoneTrendShowsTheFocus();
     void emptyClub();
 
 private:
@@ -404,6 +406,42 @@ void FocusViewTest::verdictClosesTheFocus() {
     QVERIFY(!view.recordVerdict());
     QVERIFY(!view.linkDrill(view.linked()->idAt(0)));
     QVERIFY(view.verdictNote().isEmpty()); // the form was cleared once recorded
+}
+
+void FocusViewTest::zoneTrendShowsTheFocus() {
+    // The zone trend page lists the focuses its zone has had for its metric and marks on the
+    // series the match where the training started and, once closed, the last one before.
+    const auto f = storedFocus();
+    QVERIFY(f);
+    QVERIFY(!f->closedAt.empty()); // closed by the verdict test
+    QVERIFY(!f->zones.empty());
+    const model::Zone zone = f->zones.front();
+    ZoneSeries trend;
+    trend.setSession(&m_session);
+    trend.select(QString::fromStdString(f->metric), zone.band, zone.lane);
+    QVERIFY2(trend.errorString().isEmpty(), qPrintable(trend.errorString()));
+    QCOMPARE(trend.focusLines().size(), 1);
+    const QString line = trend.focusLines().front();
+    QVERIFY2(line.startsWith(QStringLiteral("F1 · focus #%1 after %2").arg(f->id).arg(QString::fromStdString(f->openedAfterMatch))),
+             qPrintable(line));
+    QVERIFY2(line.contains(QStringLiteral("closed")), qPrintable(line));
+    QCOMPARE(trend.focusSpans().size(), 1);
+    const QVariantMap span = trend.focusSpans().front().toMap();
+    // The first match on or after the start date, counted in the season's matches.
+    const auto season = m_reference->seasonTallies(f->squad, f->season);
+    int expectedStart = -1;
+    for (std::size_t i = 0; i < season.dates.size() && expectedStart < 0; ++i)
+        if (season.dates[i] >= f->startDate) expectedStart = static_cast<int>(i);
+    QCOMPARE(span.value(QStringLiteral("startRow")).toInt(), expectedStart);
+    QVERIFY(span.value(QStringLiteral("closed")).toBool());
+    QVERIFY(span.value(QStringLiteral("endRow")).toInt() >= expectedStart - 1);
+
+    // Another zone, or another metric in the same zone, had no focus.
+    trend.select(QString::fromStdString(f->metric), zone.band, zone.lane == 1 ? 2 : 1);
+    QVERIFY(trend.focusLines().isEmpty());
+    QVERIFY(trend.focusSpans().isEmpty());
+    trend.select(QString::fromStdString(f->metric == "regain_5s" ? "press_rate" : "regain_5s"), zone.band, zone.lane);
+    QVERIFY(trend.focusLines().isEmpty());
 }
 
 void FocusViewTest::emptyClub() {
