@@ -236,6 +236,7 @@ void GridChangeView::workerDone(const QString& fault, int carried, bool isUndo) 
     emit progressChanged();
     if (ClubSession* s = session(); s && fault.isEmpty()) s->reload(); // every page recomputes
     else update();
+    if (isUndo && fault.isEmpty()) resetChoice(); // the choice shows the grid in use again
     emit finished();
 }
 

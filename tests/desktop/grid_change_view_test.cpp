@@ -147,6 +147,8 @@ void GridChangeViewTest::changeRunsAndUndoMovesBack() {
     QVERIFY(versionIds(m_reference->targets("First team", "2026-27")) == versionIds(targetsBefore));
     QVERIFY(!view.canUndo());
     QCOMPARE(view.history().size(), 2);
+    QCOMPARE(view.chosenName(), QStringLiteral("equal:6x5")); // the choice follows the undo
+    QVERIFY(view.previewLines().isEmpty());
 }
 
 void GridChangeViewTest::changeWithoutANameWritesNothing() {
