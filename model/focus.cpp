@@ -77,10 +77,24 @@ FocusState focusState(const Focus& f, int matchesSinceStart, const std::string& 
     return FocusState::Open;
 }
 
-int matchesSince(const SeasonTallies& season, const std::string& startDate) {
+int matchesSince(const SeasonTallies& season, const std::string& startDate,
+                 const std::string& until) {
     int n = 0;
-    for (const auto& d : season.dates) n += d >= startDate;
+    for (const auto& d : season.dates) n += d >= startDate && (until.empty() || d <= until);
     return n;
+}
+
+SeasonTallies playedBy(const SeasonTallies& season, const std::string& lastDay) {
+    // Dates are in order: keep the leading run on or before lastDay.
+    std::size_t n = 0;
+    while (n < season.dates.size() && season.dates[n] <= lastDay) ++n;
+    if (n == season.dates.size()) return season;
+    SeasonTallies out;
+    out.matchIds.assign(season.matchIds.begin(), season.matchIds.begin() + static_cast<std::ptrdiff_t>(n));
+    out.dates.assign(season.dates.begin(), season.dates.begin() + static_cast<std::ptrdiff_t>(n));
+    for (const auto& [metric, perMatch] : season.byMetric)
+        out.byMetric[metric].assign(perMatch.begin(), perMatch.begin() + static_cast<std::ptrdiff_t>(n));
+    return out;
 }
 
 std::string dayAfter(const std::string& iso) {

@@ -47,8 +47,14 @@ struct Focus {
 /// Open, due for review (the review point is reached), or closed.
 FocusState focusState(const Focus& f, int matchesSinceStart, const std::string& today);
 
-/// Matches of the season played on or after `startDate` (ISO dates compare as text).
-int matchesSince(const SeasonTallies& season, const std::string& startDate);
+/// Matches of the season played on or after `startDate` and, when `until` is given, on or
+/// before it (today: a match dated later has not been played). ISO dates compare as text.
+int matchesSince(const SeasonTallies& season, const std::string& startDate,
+                 const std::string& until = {});
+
+/// The season's matches played on or before `lastDay` (a match dated later has not been
+/// played yet: a review computed today never looks at it).
+SeasonTallies playedBy(const SeasonTallies& season, const std::string& lastDay);
 
 /// The calendar day after an ISO date (a focus's default start: the day after its match).
 std::string dayAfter(const std::string& isoDate);

@@ -195,7 +195,7 @@ int FocusVerbs::runList(ClubRepository& repo, std::ostream& out) {
     nlohmann::json list = nlohmann::json::array();
     for (const auto& f : store.list()) {
         const auto season = repo.seasonTallies(f.squad, f.season);
-        const int since = matchesSince(season, f.startDate);
+        const int since = matchesSince(season, f.startDate, day);
         const FocusState state = focusState(f, since, day);
         if (m_format == "json") {
             list.push_back({{"id", f.id}, {"metric", f.metric}, {"state", toString(state)},
@@ -230,7 +230,7 @@ int FocusVerbs::runShow(ClubRepository& repo, std::ostream& out, std::ostream& e
         << "\n"
         << "  " << f->squad << " " << f->season << ", opened by " << f->openedBy << " after "
         << f->openedAfterMatch << ", training from " << f->startDate << "\n"
-        << "  state " << toString(focusState(*f, matchesSince(season, f->startDate), today()))
+        << "  state " << toString(focusState(*f, matchesSince(season, f->startDate, today()), today()))
         << "; review after " << f->reviewAfterMatches << " matches"
         << (f->reviewOn.empty() ? "" : " or on " + f->reviewOn) << "\n";
     if (!f->note.empty()) out << "  note: " << f->note << "\n";
@@ -303,7 +303,8 @@ int FocusVerbs::runReview(ClubRepository& repo, std::ostream& out, std::ostream&
     const int kBefore = m_before > 0 ? m_before : f->reviewAfterMatches;
     const int kAfter = m_after > 0 ? m_after : f->reviewAfterMatches;
     // A focus keeps the grid it was opened on; its review counts on that grid.
-    const auto season = repo.seasonTallies(f->squad, f->season, f->grid);
+    // Only matches played by today count.
+    const auto season = playedBy(repo.seasonTallies(f->squad, f->season, f->grid), today());
     const auto result = computeReview(*f, *metric, season, f->grid, kBefore, kAfter, m_level);
     if (!result.review) {
         err << "error: focus " << f->id << ": " << result.problem << "\n";

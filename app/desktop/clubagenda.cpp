@@ -74,7 +74,8 @@ void ClubAgenda::refresh() {
         if (f.squad != squad || !f.closedAt.empty()) continue;
         int since = 0;
         for (const auto& m : matches)
-            since += m.squad == f.squad && m.season == f.season && m.date >= f.startDate;
+            since += m.squad == f.squad && m.season == f.season && m.date >= f.startDate &&
+                     m.date <= today; // a match dated after today has not been played
         const bool due = focusState(f, since, today) == FocusState::DueForReview;
         ++m_open;
         m_due += due;

@@ -1,11 +1,15 @@
 #include "clubsession.h"
 
+#include "appclock.h"
+
 #include "logging.h"
 #include "matchlistmodel.h"
 #include "metriclistmodel.h"
 
 #include <QDir>
 #include <QFileInfo>
+
+#include <algorithm>
 
 #include <exception>
 
@@ -88,7 +92,22 @@ void ClubSession::reload() {
 }
 
 QString ClubSession::latestMatchId() const {
-    return m_matches.empty() ? QString() : QString::fromStdString(m_matches.back().id);
+    const MatchSummary* m = latestPlayed();
+    return m ? QString::fromStdString(m->id) : QString();
+}
+
+const MatchSummary* ClubSession::latestPlayed() const {
+    if (m_matches.empty()) return nullptr;
+    const std::string today = todayIso();
+    for (auto it = m_matches.rbegin(); it != m_matches.rend(); ++it)
+        if (it->date <= today) return &*it;
+    return &m_matches.back();
+}
+
+int ClubSession::matchesAfterToday() const {
+    const std::string today = todayIso();
+    return static_cast<int>(std::count_if(m_matches.begin(), m_matches.end(),
+                                          [&](const MatchSummary& m) { return m.date > today; }));
 }
 
 const MatchSummary* ClubSession::summary(const std::string& matchId) const {

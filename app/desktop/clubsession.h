@@ -34,6 +34,7 @@ class ClubSession : public QObject {
     Q_PROPERTY(bool demo READ isDemo NOTIFY opened)
     Q_PROPERTY(int matchCount READ matchCount NOTIFY opened)
     Q_PROPERTY(QString latestMatchId READ latestMatchId NOTIFY opened)
+    Q_PROPERTY(int matchesAfterToday READ matchesAfterToday NOTIFY opened)
     Q_PROPERTY(QString errorString READ errorString NOTIFY errorStringChanged)
     Q_PROPERTY(pitchloop::desktop::MatchListModel* matches READ matches CONSTANT)
     Q_PROPERTY(pitchloop::desktop::MetricListModel* metrics READ metrics CONSTANT)
@@ -52,7 +53,14 @@ public:
     QString clubFile() const { return m_file; }
     bool isDemo() const { return m_demo; }
     int matchCount() const { return static_cast<int>(m_matches.size()); }
+    /// The id of latestPlayed().
     QString latestMatchId() const;
+    /// The latest stored match dated on or before today: a match dated later (invented demo
+    /// data, or a date typed wrong) is not "the last match". The latest of all when every match
+    /// is later; nullptr without matches.
+    const model::MatchSummary* latestPlayed() const;
+    /// Stored matches dated after today.
+    int matchesAfterToday() const;
     QString errorString() const { return m_error; }
     MatchListModel* matches() const { return m_matchModel; }
     MetricListModel* metrics() const { return m_metricModel; }

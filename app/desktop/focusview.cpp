@@ -161,7 +161,7 @@ void FocusView::refreshList() {
         const Focus& f = *it;
         const auto season = session()->seasonOf(f.openedAfterMatch);
         const SeasonTallies tallies = season ? season->tallies() : repo->seasonTallies(f.squad, f.season);
-        const int since = matchesSince(tallies, f.startDate);
+        const int since = matchesSince(tallies, f.startDate, day);
         const FocusState state = focusState(f, since, day);
         FocusRow r;
         r.focusId = f.id;
@@ -255,7 +255,7 @@ void FocusView::refreshDetail() {
     const bool ownGrid = f.grid != session()->grid();
     const SeasonTallies tallies = season && !ownGrid ? season->tallies()
                                                      : repo->seasonTallies(f.squad, f.season, f.grid);
-    const int since = matchesSince(tallies, f.startDate);
+    const int since = matchesSince(tallies, f.startDate, day);
     const FocusState state = focusState(f, since, day);
     const MetricSpec* metric = session()->metricSpec(f.metric);
     const MetricKind kind = metric ? metric->kind() : MetricKind::Rate;
@@ -324,7 +324,8 @@ void FocusView::refreshDetail() {
         const int k = f.reviewAfterMatches;
         // On a review date the after window is the matches played so far (up to K).
         const int kAfter = !f.reviewOn.empty() && day >= f.reviewOn && since >= 1 ? std::min(k, since) : k;
-        const ReviewResult result = computeReview(f, *metric, tallies, f.grid, k, kAfter);
+        // Only matches played by today count (the club file may hold later-dated ones).
+        const ReviewResult result = computeReview(f, *metric, playedBy(tallies, day), f.grid, k, kAfter);
         if (!result.review) {
             m_reviewProblem = tr("The review cannot be computed yet: %1.").arg(qs(result.problem));
         } else {
@@ -643,7 +644,7 @@ void FocusView::beginDraft() {
             setStatus(tr("A focus opens from a match: load matches into the club file first."));
             return false;
         }
-        const MatchSummary& match = s->matchSummaries().back();
+        const MatchSummary& match = *s->latestPlayed();
         const auto season = s->seasonOf(match.id);
         const auto focal = season ? season->indexOf(match.id) : std::nullopt;
         if (focal) {

@@ -40,7 +40,7 @@ void SeasonOverview::refresh() {
         emit changed();
         return;
     }
-    const MatchSummary& last = s->matchSummaries().back();
+    const MatchSummary& last = *s->latestPlayed(); // not a match dated after today
     m_lastMatchId = QString::fromStdString(last.id);
     m_lastDateText = dateText(last.date);
     m_lastOpponent = QString::fromStdString(last.opponent);

@@ -79,7 +79,7 @@ void ZoneSeries::refresh() {
         return;
     }
     const MatchSummary* match = s->summary(m_matchId.toStdString());
-    if (!match) match = &s->matchSummaries().back();
+    if (!match) match = s->latestPlayed();
     const auto season = s->seasonOf(match->id);
     const auto focal = season ? season->indexOf(match->id) : std::nullopt;
     if (!focal) {

@@ -80,6 +80,9 @@ Page {
                 Label {
                     text: overview.hasMatches
                           ? qsTr("%1 · %2 matches stored").arg(overview.squadText).arg(overview.seasonMatchCount)
+                            + (root.session.matchesAfterToday > 0
+                               ? qsTr(" · %1 dated after today, left out of “last match”").arg(root.session.matchesAfterToday)
+                               : "")
                           : qsTr("No matches stored yet")
                     color: Theme.textMuted
                 }

@@ -262,10 +262,11 @@ void FocusViewTest::listAndTrainingMinutes() {
     view.setToday(QStringLiteral("2026-09-28")); // the day before the planned session
     view.setSession(&m_session);
     QCOMPARE(view.focuses()->rowCount(), 1);
-    // The club file holds the whole demo season, so the review point (5 matches from the
-    // start) is passed whatever "today" says; the progress counts at most the 5.
+    // The club file holds the whole demo season, but a match dated after "today" has not been
+    // played: on 28 Sep none of the matches from the 27 Sep start counts yet.
     QCOMPARE(role(*view.focuses(), 0, "progressText").toString(),
-             QStringLiteral("5 of 5 matches played since %1").arg(compactDateText("2026-09-27")));
+             QStringLiteral("0 of 5 matches played since %1").arg(compactDateText("2026-09-27")));
+    QCOMPARE(role(*view.focuses(), 0, "phase").toInt(), static_cast<int>(FocusPhase::Open));
     QCOMPARE(role(*view.focuses(), 0, "minutesText").toString(),
              QStringLiteral("0 min of training so far")); // the session is after "today"
 
@@ -275,6 +276,9 @@ void FocusViewTest::listAndTrainingMinutes() {
     QCOMPARE(minutes, 25);
     QCOMPARE(role(*view.focuses(), 0, "minutesText").toString(),
              QStringLiteral("%1 min of training so far").arg(minutes));
+    // By 1 Dec the review point is passed; the progress counts at most the 5.
+    QCOMPARE(role(*view.focuses(), 0, "progressText").toString(),
+             QStringLiteral("5 of 5 matches played since %1").arg(compactDateText("2026-09-27")));
     // The state is model::focusState's.
     const auto season = m_reference->seasonTallies("First team", "2026-27");
     QVERIFY(model::focusState(*f, model::matchesSince(season, f->startDate), kToday.toStdString()) ==
@@ -284,6 +288,14 @@ void FocusViewTest::listAndTrainingMinutes() {
     QCOMPARE(role(*view.focuses(), 0, "title").toString(),
              QString::fromStdString(m_reference->metric(kMetric)->name));
     QCOMPARE(view.listText(), QStringLiteral("0 open · 1 due for review · 0 closed"));
+
+    // On the day after the start no match after it has been played: the review waits, even
+    // though the club file holds later-dated matches.
+    view.setToday(QStringLiteral("2026-09-28"));
+    QVERIFY(view.select(m_focusId));
+    QVERIFY(!view.hasReview());
+    QVERIFY2(view.reviewProblem().startsWith(QStringLiteral("The review cannot be computed yet")),
+             qPrintable(view.reviewProblem()));
 }
 
 void FocusViewTest::reviewAgainstModel() {

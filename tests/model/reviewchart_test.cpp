@@ -189,6 +189,16 @@ TEST_CASE("a focus's dates: matches since its start and the day after its match"
     SeasonFixture s(ZoneGrid{}, kDates);
     CHECK(matchesSince(s.season, "2026-08-22") == 5); // 22 Aug itself counts
     CHECK(matchesSince(s.season, "2026-09-20") == 0);
+    // Until today: a match dated after it has not been played yet.
+    CHECK(matchesSince(s.season, "2026-08-22", "2026-08-29") == 2);
+    CHECK(matchesSince(s.season, "2026-08-22", "2026-08-21") == 0);
+    // The matches played by a day: the leading run of dates on or before it, every metric cut.
+    s.addMetric("regain_5s");
+    const SeasonTallies played = playedBy(s.season, "2026-08-29");
+    CHECK(played.matchIds == std::vector<std::string>{"M1", "M2", "M3", "M4"});
+    CHECK(played.byMetric.at("regain_5s").size() == 4);
+    CHECK(playedBy(s.season, "2027-01-01").matchIds.size() == s.season.matchIds.size());
+    CHECK(playedBy(s.season, "2026-01-01").matchIds.empty());
     CHECK(dayAfter("2026-09-26") == "2026-09-27");
     CHECK(dayAfter("2026-12-31") == "2027-01-01");
     CHECK(dayAfter("2028-02-28") == "2028-02-29"); // a leap year
