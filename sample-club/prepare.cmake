@@ -30,7 +30,9 @@ club(drills import ${here}/drills.json)
 club(fixtures import ${here}/fixtures.csv)
 
 # The story's focus: opened after match 8 on the slipped left-back zone, with three of the
-# drill book's drills for it (ids 6, 7 and 9 in drills.json's order).
+# drill book's drills for it (ids 6, 7 and 9 in drills.json's order). The focus and the week's
+# sessions are written as on Sun 27 Sep 2026, the day after that match ($PITCHLOOP_TODAY).
+set(ENV{PITCHLOOP_TODAY} 2026-09-27)
 club(focus list --format json)
 string(STRIP "${club_out}" focuses)
 if(focuses STREQUAL "[]")
@@ -52,4 +54,5 @@ if(sessions STREQUAL "[]")
              --by "D. Arkwright (head coach)")
     endforeach()
 endif()
+unset(ENV{PITCHLOOP_TODAY})
 message(STATUS "demo club ready: ${CLUB}")
