@@ -21,6 +21,7 @@
 #include "zonemapmodel.h"
 #include "zoneseries.h"
 #include "zonestate.h"
+#include "testmain.h"
 
 #include <QAbstractItemModelTester>
 #include <QFile>
@@ -563,13 +564,7 @@ void DesktopTest::pitchHoverShowsNumbers() {
 }
 
 int main(int argc, char* argv[]) {
-    if (!qEnvironmentVariableIsSet("QT_QPA_PLATFORM")) qputenv("QT_QPA_PLATFORM", "offscreen");
-    if (!qEnvironmentVariableIsSet("QT_QUICK_BACKEND")) qputenv("QT_QUICK_BACKEND", "software");
-    QGuiApplication app(argc, argv);
-    QLocale::setDefault(QLocale(QLocale::English, QLocale::UnitedKingdom)); // texts checked below
-    QQuickStyle::setStyle(QStringLiteral("Fusion"));
-    DesktopTest test;
-    return QTest::qExec(&test, argc, argv);
+    return pitchloop::desktop::testing::runDesktopTest<DesktopTest>(argc, argv, "desktop_tests");
 }
 
 #include "desktop_test.moc"

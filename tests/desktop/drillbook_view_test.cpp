@@ -13,6 +13,7 @@
 #include "drillform.h"
 #include "drilllistmodel.h"
 #include "repository.h"
+#include "testmain.h"
 
 #include <QAbstractItemModelTester>
 #include <QFile>
@@ -375,12 +376,7 @@ void DrillBookViewTest::emptyClub() {
 }
 
 int main(int argc, char* argv[]) {
-    if (!qEnvironmentVariableIsSet("QT_QPA_PLATFORM")) qputenv("QT_QPA_PLATFORM", "offscreen");
-    QGuiApplication app(argc, argv);
-    QLocale::setDefault(QLocale(QLocale::English, QLocale::UnitedKingdom)); // texts checked below
-    QQuickStyle::setStyle(QStringLiteral("Fusion"));
-    DrillBookViewTest test;
-    return QTest::qExec(&test, argc, argv);
+    return pitchloop::desktop::testing::runDesktopTest<DrillBookViewTest>(argc, argv, "drillbook_view_tests");
 }
 
 #include "drillbook_view_test.moc"

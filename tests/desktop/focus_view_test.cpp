@@ -24,6 +24,7 @@
 #include "targets.h"
 #include "zonemapmodel.h"
 #include "zoneseries.h"
+#include "testmain.h"
 
 #include <QAbstractItemModelTester>
 #include <QDir>
@@ -473,12 +474,7 @@ void FocusViewTest::emptyClub() {
 }
 
 int main(int argc, char* argv[]) {
-    if (!qEnvironmentVariableIsSet("QT_QPA_PLATFORM")) qputenv("QT_QPA_PLATFORM", "offscreen");
-    QGuiApplication app(argc, argv);
-    QLocale::setDefault(QLocale(QLocale::English, QLocale::UnitedKingdom)); // texts checked below
-    QQuickStyle::setStyle(QStringLiteral("Fusion"));
-    FocusViewTest test;
-    return QTest::qExec(&test, argc, argv);
+    return pitchloop::desktop::testing::runDesktopTest<FocusViewTest>(argc, argv, "focus_view_tests");
 }
 
 #include "focus_view_test.moc"

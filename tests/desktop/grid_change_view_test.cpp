@@ -10,6 +10,7 @@
 #include "plannerclub.h"
 #include "repository.h"
 #include "uicheck.h"
+#include "testmain.h"
 
 #include <QCoreApplication>
 #include <QDir>
@@ -208,16 +209,7 @@ void GridChangeViewTest::pageDrawsTheCard() {
 }
 
 int main(int argc, char* argv[]) {
-    if (!qEnvironmentVariableIsSet("QT_QPA_PLATFORM")) qputenv("QT_QPA_PLATFORM", "offscreen");
-    if (!qEnvironmentVariableIsSet("QT_QUICK_BACKEND")) qputenv("QT_QUICK_BACKEND", "software");
-    QGuiApplication app(argc, argv);
-    QCoreApplication::setOrganizationName(QStringLiteral("PitchloopTest"));
-    QCoreApplication::setApplicationName(QStringLiteral("grid_change_view_tests"));
-    QLocale::setDefault(QLocale(QLocale::English, QLocale::UnitedKingdom));
-    QQuickStyle::setStyle(QStringLiteral("Fusion"));
-    WarningCounter::install();
-    GridChangeViewTest test;
-    return QTest::qExec(&test, argc, argv);
+    return pitchloop::desktop::testing::runDesktopTest<GridChangeViewTest>(argc, argv, "grid_change_view_tests");
 }
 
 #include "grid_change_view_test.moc"

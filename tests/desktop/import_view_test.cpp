@@ -12,6 +12,7 @@
 #include "importview.h"
 #include "ingest.h"
 #include "repository.h"
+#include "testmain.h"
 
 #include <QAbstractItemModelTester>
 #include <QDir>
@@ -294,11 +295,7 @@ void ImportViewTest::refusesWithoutAFileOnDisk() {
 }
 
 int main(int argc, char* argv[]) {
-    if (!qEnvironmentVariableIsSet("QT_QPA_PLATFORM")) qputenv("QT_QPA_PLATFORM", "offscreen");
-    QGuiApplication app(argc, argv);
-    QLocale::setDefault(QLocale(QLocale::English, QLocale::UnitedKingdom));
-    ImportViewTest test;
-    return QTest::qExec(&test, argc, argv);
+    return pitchloop::desktop::testing::runDesktopTest<ImportViewTest>(argc, argv, "import_view_tests");
 }
 
 #include "import_view_test.moc"

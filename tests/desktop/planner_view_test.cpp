@@ -21,6 +21,7 @@
 #include "planweekmodel.h"
 #include "plannerclub.h"
 #include "uicheck.h"
+#include "testmain.h"
 
 #include <QAbstractItemModelTester>
 #include <QDate>
@@ -523,16 +524,7 @@ void PlannerViewTest::emptyClub() {
 }
 
 int main(int argc, char* argv[]) {
-    if (!qEnvironmentVariableIsSet("QT_QPA_PLATFORM")) qputenv("QT_QPA_PLATFORM", "offscreen");
-    if (!qEnvironmentVariableIsSet("QT_QUICK_BACKEND")) qputenv("QT_QUICK_BACKEND", "software");
-    QGuiApplication app(argc, argv);
-    QGuiApplication::setOrganizationName(QStringLiteral("PitchloopTest"));
-    QGuiApplication::setApplicationName(QStringLiteral("planner_view_tests"));
-    QLocale::setDefault(QLocale(QLocale::English, QLocale::UnitedKingdom));
-    QQuickStyle::setStyle(QStringLiteral("Fusion"));
-    WarningCounter::install();
-    PlannerViewTest test;
-    return QTest::qExec(&test, argc, argv);
+    return pitchloop::desktop::testing::runDesktopTest<PlannerViewTest>(argc, argv, "planner_view_tests");
 }
 
 #include "planner_view_test.moc"

@@ -11,6 +11,7 @@
 #include "settingsview.h"
 #include "startup.h"
 #include "uicheck.h"
+#include "testmain.h"
 
 #include <QAbstractItemModelTester>
 #include <QCoreApplication>
@@ -377,16 +378,7 @@ void SettingsViewTest::rememberedClubFileWinsAtStart() {
 }
 
 int main(int argc, char* argv[]) {
-    if (!qEnvironmentVariableIsSet("QT_QPA_PLATFORM")) qputenv("QT_QPA_PLATFORM", "offscreen");
-    if (!qEnvironmentVariableIsSet("QT_QUICK_BACKEND")) qputenv("QT_QUICK_BACKEND", "software");
-    QGuiApplication app(argc, argv);
-    QCoreApplication::setOrganizationName(QStringLiteral("PitchloopTest"));
-    QCoreApplication::setApplicationName(QStringLiteral("settings_view_tests"));
-    QLocale::setDefault(QLocale(QLocale::English, QLocale::UnitedKingdom));
-    QQuickStyle::setStyle(QStringLiteral("Fusion"));
-    WarningCounter::install();
-    SettingsViewTest test;
-    return QTest::qExec(&test, argc, argv);
+    return pitchloop::desktop::testing::runDesktopTest<SettingsViewTest>(argc, argv, "settings_view_tests");
 }
 
 #include "settings_view_test.moc"

@@ -19,6 +19,7 @@
 #include "targetsview.h"
 #include "targetzonemodel.h"
 #include "zonemapmodel.h"
+#include "testmain.h"
 
 #include <QAbstractItemModelTester>
 #include <QFile>
@@ -447,11 +448,7 @@ void TargetsViewTest::formNumbers() {
 }
 
 int main(int argc, char* argv[]) {
-    if (!qEnvironmentVariableIsSet("QT_QPA_PLATFORM")) qputenv("QT_QPA_PLATFORM", "offscreen");
-    QGuiApplication app(argc, argv);
-    QLocale::setDefault(QLocale(QLocale::English, QLocale::UnitedKingdom)); // texts checked below
-    TargetsViewTest test;
-    return QTest::qExec(&test, argc, argv);
+    return pitchloop::desktop::testing::runDesktopTest<TargetsViewTest>(argc, argv, "targets_view_tests");
 }
 
 #include "targets_view_test.moc"
