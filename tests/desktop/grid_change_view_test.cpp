@@ -168,11 +168,7 @@ void GridChangeViewTest::changeWithoutANameWritesNothing() {
 void GridChangeViewTest::pageDrawsTheCard() {
     const int warningsBefore = WarningCounter::count();
     QQuickView window;
-    window.engine()->addImportPath(QStringLiteral("qrc:/qt/qml"));
-    window.setInitialProperties({{QStringLiteral("session"), QVariant::fromValue(&m_session)}});
-    window.setResizeMode(QQuickView::SizeRootObjectToView);
-    window.resize(1068, 800);
-    window.setSource(QUrl(QStringLiteral("qrc:/qt/qml/Pitchloop/pages/SettingsPage.qml")));
+    pitchloop::desktop::testing::loadPage(window, &m_session, "SettingsPage");
     QCOMPARE(window.status(), QQuickView::Ready);
     window.show();
     auto* view = window.rootObject()->findChild<GridChangeView*>(QStringLiteral("gridView"));

@@ -477,11 +477,7 @@ void PlannerViewTest::pageShowsTheProposal() {
     // warning. With $PITCHLOOP_SHOT_DIR set it leaves a picture there to look at.
     const int warningsBefore = WarningCounter::count();
     QQuickView window;
-    window.engine()->addImportPath(QStringLiteral("qrc:/qt/qml"));
-    window.setInitialProperties({{QStringLiteral("session"), QVariant::fromValue(&m_session)}});
-    window.setResizeMode(QQuickView::SizeRootObjectToView);
-    window.resize(1068, 800);
-    window.setSource(QUrl(QStringLiteral("qrc:/qt/qml/Pitchloop/pages/PlannerPage.qml")));
+    pitchloop::desktop::testing::loadPage(window, &m_session, "PlannerPage");
     QCOMPARE(window.status(), QQuickView::Ready);
     window.show();
     auto* view = window.rootObject()->findChild<PlannerView*>();

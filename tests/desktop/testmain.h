@@ -8,11 +8,26 @@
 #include <QCoreApplication>
 #include <QGuiApplication>
 #include <QLocale>
+#include <QQmlEngine>
 #include <QQuickStyle>
+#include <QQuickView>
 #include <QString>
 #include <QTest>
+#include <QUrl>
+#include <QVariant>
 
 namespace pitchloop::desktop::testing {
+
+/// Loads page `name` (e.g. "SettingsPage") of the Pitchloop module into `window` at 1068 × 800
+/// on `session`; the caller checks window.status() and shows it.
+template <typename Session>
+void loadPage(QQuickView& window, Session* session, const char* name) {
+    window.engine()->addImportPath(QStringLiteral("qrc:/qt/qml"));
+    window.setInitialProperties({{QStringLiteral("session"), QVariant::fromValue(session)}});
+    window.setResizeMode(QQuickView::SizeRootObjectToView);
+    window.resize(1068, 800);
+    window.setSource(QUrl(QStringLiteral("qrc:/qt/qml/Pitchloop/pages/%1.qml").arg(QString::fromLatin1(name))));
+}
 
 template <typename Test>
 int runDesktopTest(int argc, char* argv[], const char* name) {
