@@ -69,15 +69,21 @@ Debrief buildDebrief(const SeasonTallies& season, std::size_t focal,
             d.slippedInWindow.push_back(item);
             if (focal > 0 && item.before != FlagState::OffTarget) d.newSlips.push_back(item);
             break;
-        case FlagState::Watch: d.watched.push_back(item); break;
+        case FlagState::CloseToLine:
+        case FlagState::LikelyOff: d.watched.push_back(item); break;
         case FlagState::OnTarget:
-            if (item.before == FlagState::OffTarget || item.before == FlagState::Watch)
+            if (item.before == FlagState::OffTarget || item.before == FlagState::LikelyOff ||
+                item.before == FlagState::CloseToLine)
                 d.recovered.push_back(item);
             break;
         default: break;
         }
     }
     d.chanceFlags = expectedChanceFlags(judgedStatuses);
+    const int series = seriesWithTargets(targets, season.dates[focal]);
+    d.seasonChanceFlags = seasonChanceFlags(judgedStatuses, settings, series);
+    d.offThreshold = offThresholdFor(settings, series);
+    d.seriesWithTargets = series;
     for (auto* list : {&d.slippedInMatch, &d.slippedInWindow, &d.newSlips, &d.recovered, &d.watched})
         order(*list);
     return d;

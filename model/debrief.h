@@ -23,11 +23,16 @@ struct Debrief {
     std::vector<DebriefItem> slippedInMatch;  ///< off target on this match alone
     std::vector<DebriefItem> slippedInWindow; ///< off target over the window
     std::vector<DebriefItem> newSlips;        ///< off target over the window, not before
-    std::vector<DebriefItem> recovered;       ///< off target or watched before, on target now
-    std::vector<DebriefItem> watched;         ///< watch over the window
+    std::vector<DebriefItem> recovered;       ///< off, likely off or close before; on target now
+    std::vector<DebriefItem> watched;         ///< likely off or close to the line over the window
     int judged = 0;         ///< zones with a target and enough data in the window
     int tooLittleData = 0;  ///< zones with a target but too little data in the window
-    double chanceFlags = 0; ///< off-target flags chance alone would give among the judged
+    double chanceFlags = 0; ///< off-target flags chance alone would give at this one look
+    /// Zones chance alone would flag off at least once over the season among the judged (the
+    /// figure a coach is shown; bounded by the season's alarm budget).
+    double seasonChanceFlags = 0;
+    double offThreshold = 0;    ///< the threshold in force (from the alarm budget)
+    int seriesWithTargets = 0;  ///< (metric, zone) series with a target, across the board
 };
 
 /// Judges match `focal` of a season. Lists are ordered by how sure (pMiss, highest first),

@@ -58,7 +58,10 @@ std::string statusCsv(const std::string& matchId, const std::vector<ZoneStatus>&
                std::string(toString(s.state)) + ',' + csvNumber(s.pMiss) + ',' +
                (t ? std::string(toString(s.target->direction)) : "") + ',' +
                std::to_string(s.sum.matches) + ',' + csvNumber(s.pValue) + ',' +
-               (t ? csvNumber(s.chanceOff) : "") + ',' + (t ? (s.bhRejected ? "1" : "0") : "");
+               (t ? csvNumber(s.chanceOff) : "") + ',' + (t ? (s.bhRejected ? "1" : "0") : "") +
+               ',' + csvNumber(s.sum.effNum) + ',' + csvNumber(s.sum.effDen) + ',' +
+               csvNumber(s.dispersion) + ',' + (t ? csvNumber(s.offThreshold) : "") + ',' +
+               csvNumber(s.matchTail);
         out += kCrlf;
     }
     return out;

@@ -28,7 +28,8 @@ std::string csvNumber(double value);
 /// The header of statusCsv, one line without the line break.
 inline constexpr std::string_view kStatusCsvHeader =
     "match_id,metric,band,lane,window,num,den,value,low,high,level,target,state,p_miss,"
-    "direction,matches,p_value,chance_off,bh_rejected";
+    "direction,matches,p_value,chance_off,bh_rejected,effective_num,effective_den,dispersion,"
+    "off_threshold,match_tail";
 
 /// Zone statuses of one match as CSV: the header, then one record a status, each ended by
 /// CRLF as RFC 4180 asks (docs/cli.md describes the columns).

@@ -3,6 +3,7 @@
 #include <SQLiteCpp/Database.h>
 #include <SQLiteCpp/Statement.h>
 #include <SQLiteCpp/Transaction.h>
+#include <boost/math/distributions/normal.hpp>
 #include <nlohmann/json.hpp>
 
 #include <algorithm>
@@ -127,6 +128,10 @@ json evidenceZoneJson(const ZoneStatus& s) {
     put("high", s.interval.high);
     put("p_miss", s.pMiss);
     put("p_value", s.pValue);
+    put("effective_num", s.sum.effNum);
+    put("effective_den", s.sum.effDen);
+    put("dispersion", s.dispersion);
+    put("match_tail", s.matchTail);
     if (s.target) {
         j["target"] = {{"direction", toString(s.target->direction)},
                        {"value", s.target->value},
@@ -136,6 +141,7 @@ json evidenceZoneJson(const ZoneStatus& s) {
                        {"effective_from", s.target->effectiveFrom}};
         j["chance_off"] = s.chanceOff;
         j["bh_rejected"] = s.bhRejected;
+        j["off_threshold"] = s.offThreshold;
     } else {
         j["target"] = nullptr;
     }
@@ -148,10 +154,11 @@ double numberOr(const json& j, const char* key) {
 }
 
 FlagState flagStateFrom(const std::string& s) {
-    for (FlagState f : {FlagState::OnTarget, FlagState::Watch, FlagState::OffTarget,
-                        FlagState::TooLittleData, FlagState::NoTarget})
-        if (toString(f) == s) return f;
-    return FlagState::NoTarget;
+    return flagStateFromString(s).value_or(FlagState::NoTarget);
+}
+
+bool isSlipOrWatch(FlagState s) {
+    return s == FlagState::OffTarget || s == FlagState::LikelyOff || s == FlagState::CloseToLine;
 }
 
 } // namespace
@@ -170,7 +177,7 @@ FocusEvidence focusEvidence(const SeasonTallies& season, std::size_t focal,
         {Window{Window::Kind::Match, 1, 0.3}, settings.window, Window{Window::Kind::Season, 0, 0.3}},
         settings);
     json j{{"match_id", e.matchId}, {"date", e.date}, {"frozen_at", frozenAt},
-           {"zones", json::array()}};
+           {"judged_window", settings.window.name()}, {"zones", json::array()}};
     for (const auto& s : statuses) {
         const bool wanted = wholePitch ? s.band == 0
                                        : std::any_of(zones.begin(), zones.end(), [&](Zone z) {
@@ -178,8 +185,7 @@ FocusEvidence focusEvidence(const SeasonTallies& season, std::size_t focal,
                                          });
         if (!wanted) continue;
         j["zones"].push_back(evidenceZoneJson(s));
-        e.slipped |= s.window == settings.window &&
-                     (s.state == FlagState::OffTarget || s.state == FlagState::Watch);
+        e.slipped |= s.window == settings.window && isSlipOrWatch(s.state);
     }
     e.json = j.dump();
     e.zones = readEvidence(e.json, settings.window.name()).zones;
@@ -192,6 +198,7 @@ FocusEvidence readEvidence(const std::string& text, const std::string& judgedWin
     e.matchId = j.value("match_id", std::string());
     e.date = j.value("date", std::string());
     e.frozenAt = j.value("frozen_at", std::string());
+    e.judgedWindow = j.value("judged_window", std::string());
     e.json = text;
     for (const auto& z : j.at("zones")) {
         EvidenceZone ez;
@@ -221,8 +228,7 @@ FocusEvidence readEvidence(const std::string& text, const std::string& judgedWin
             target.effectiveFrom = t->value("effective_from", std::string());
             ez.target = target;
         }
-        e.slipped |= ez.window == judgedWindow &&
-                     (ez.state == FlagState::OffTarget || ez.state == FlagState::Watch);
+        e.slipped |= ez.window == judgedWindow && isSlipOrWatch(ez.state);
         e.zones.push_back(std::move(ez));
     }
     return e;
@@ -251,8 +257,8 @@ std::int64_t FocusStore::open(const Focus& f, const std::string& now) {
             throw StorageError("no season " + f.season + " for squad " + f.squad);
         SQLite::Statement ins(db, "INSERT INTO focus(season_id, metric_id, zones, "
                                   "opened_after_match, start_date, review_after_matches, "
-                                  "review_on, evidence, note, opened_by, opened_at, grid) "
-                                  "VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)");
+                                  "review_on, evidence, note, opened_by, opened_at, grid, min_change) "
+                                  "VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)");
         ins.bind(1, season.getColumn(0).getInt64());
         ins.bind(2, f.metric);
         ins.bind(3, zonesJson(f.zones).dump());
@@ -266,6 +272,8 @@ std::int64_t FocusStore::open(const Focus& f, const std::string& now) {
         ins.bind(10, f.openedBy);
         ins.bind(11, now);
         ins.bind(12, m_repo.tallyGrid().name()); // the zones were picked on the club's grid
+        if (f.minChange) ins.bind(13, *f.minChange);
+        else ins.bind(13);
         ins.exec();
         const std::int64_t id = db.getLastInsertRowid();
         SQLite::Statement link(db, "INSERT INTO focus_drill(focus_id, drill_id, linked_at) "
@@ -286,7 +294,7 @@ namespace {
 const char* kFocusSelect =
     "SELECT f.id, sq.name, se.name, f.metric_id, f.zones, f.opened_after_match, f.start_date, "
     "f.review_after_matches, f.review_on, f.evidence, f.note, f.opened_by, f.opened_at, "
-    "f.closed_at, f.verdict, f.verdict_note, f.grid FROM focus f JOIN season se ON se.id = f.season_id "
+    "f.closed_at, f.verdict, f.verdict_note, f.grid, f.min_change FROM focus f JOIN season se ON se.id = f.season_id "
     "JOIN squad sq ON sq.id = se.squad_id ";
 
 std::string text(const SQLite::Column& c) { return c.isNull() ? std::string{} : c.getString(); }
@@ -318,6 +326,7 @@ std::vector<Focus> FocusStore::list() const {
             f.verdictNote = text(q.getColumn(15));
             const auto grid = ZoneGrid::parse(q.getColumn(16).getString());
             f.grid = grid ? *grid : clubGrid;
+            if (!q.getColumn(17).isNull()) f.minChange = q.getColumn(17).getDouble();
             out.push_back(std::move(f));
         }
         SQLite::Statement d(db, "SELECT drill_id FROM focus_drill WHERE focus_id = ? ORDER BY linked_at, drill_id");
@@ -402,9 +411,93 @@ std::vector<FocusStore::StoredReview> FocusStore::reviews(std::int64_t focus) co
 
 // ---- the review ------------------------------------------------------------------------------
 
+std::string_view toString(ReviewFinding f) {
+    switch (f) {
+    case ReviewFinding::ImprovedByMinChange: return "improved_by_min_change";
+    case ReviewFinding::Improved: return "improved";
+    case ReviewFinding::NoClearChange: return "no_clear_change";
+    case ReviewFinding::Worse: return "worse";
+    case ReviewFinding::NoBaseline: return "no_baseline";
+    }
+    return "?";
+}
+
+namespace {
+
+/// The number of matches of the window that raised the flag, ending at the opening match
+/// `opened` (index): N for lastN, 1 for the match alone, every match so far for the season or
+/// an EWMA.
+std::size_t triggerLength(const std::string& window, std::size_t opened) {
+    const auto w = Window::parse(window);
+    if (!w) return 1;
+    switch (w->kind) {
+    case Window::Kind::Match: return 1;
+    case Window::Kind::LastN: return std::min<std::size_t>(static_cast<std::size_t>(w->n), opened + 1);
+    case Window::Kind::Season:
+    case Window::Kind::Ewma: return opened + 1;
+    }
+    return 1;
+}
+
+/// The judged window of stored evidence: recorded since the review stopped using it as its
+/// baseline; older evidence holds the match, the judged window and the season.
+std::string judgedWindowOf(const std::string& evidence) {
+    try {
+        const json j = json::parse(evidence);
+        if (auto w = j.value("judged_window", std::string()); !w.empty()) return w;
+        std::string found = "match";
+        for (const auto& z : j.at("zones")) {
+            const auto w = z.value("window", std::string());
+            if (w != "match" && w != "season") return w;
+            if (w == "season") found = "season";
+        }
+        return found == "season" ? "match" : found;
+    } catch (const json::exception&) {
+        return "match";
+    }
+}
+
+std::optional<Target> targetOf(const std::string& evidence) {
+    try {
+        const auto e = readEvidence(evidence, judgedWindowOf(evidence));
+        for (const auto& z : e.zones)
+            if (z.target) return z.target;
+    } catch (const json::exception&) {
+    }
+    return std::nullopt;
+}
+
+/// Value and variance of a window's value in the metric's unit, allowing for variation:
+/// Var = v(1 − v)/den_eff for rates, v/den_eff for counts, with v smoothed by half a success
+/// (so a window of 0 or 1 still has a spread).
+struct Estimate {
+    double value = kNaN;
+    double variance = kNaN;
+};
+Estimate estimateOf(const ReviewWindow& w, bool rate) {
+    Estimate e;
+    if (w.totalDen <= 0 || w.effDen <= 0) return e;
+    e.value = w.value;
+    const double effNum = w.value * w.effDen;
+    if (rate) {
+        const double p = (effNum + 0.5) / (w.effDen + 1);
+        e.variance = p * (1 - p) / w.effDen;
+    } else {
+        e.variance = (effNum + 0.5) / (w.effDen * w.effDen);
+    }
+    return e;
+}
+
+double normalCdf(double z) { return boost::math::cdf(boost::math::normal_distribution<double>(), z); }
+double normalQuantile(double p) {
+    return boost::math::quantile(boost::math::normal_distribution<double>(), p);
+}
+
+} // namespace
+
 ReviewResult computeReview(const Focus& f, const MetricSpec& metric, const SeasonTallies& season,
                            const ZoneGrid& grid, int kBefore, int kAfter, double level,
-                           double ewmaLambda) {
+                           double ewmaLambda, const ReviewOptions& options) {
     ReviewResult result;
     if (kBefore < 1 || kAfter < 1) {
         result.problem = "both windows need at least one match (before " + std::to_string(kBefore) +
@@ -420,17 +513,10 @@ ReviewResult computeReview(const Focus& f, const MetricSpec& metric, const Seaso
         result.problem = "no tallies of metric '" + metric.id + "' in season " + f.season;
         return result;
     }
+    const std::size_t kb = static_cast<std::size_t>(kBefore), ka = static_cast<std::size_t>(kAfter);
     std::vector<std::size_t> beforeAll, afterAll;
     for (std::size_t i = 0; i < season.matchIds.size(); ++i)
         (season.dates[i] < f.startDate ? beforeAll : afterAll).push_back(i);
-    const std::size_t kb = static_cast<std::size_t>(kBefore), ka = static_cast<std::size_t>(kAfter);
-    if (beforeAll.size() < kb) {
-        result.problem = "the review compares " + std::to_string(kBefore) +
-                         " matches before the start (" + f.startDate + ") with the ones after; " +
-                         f.season + " has only " + std::to_string(beforeAll.size()) + " before it (" +
-                         std::to_string(kb - beforeAll.size()) + " missing)";
-        return result;
-    }
     if (afterAll.size() < ka) {
         result.problem = "the review needs " + std::to_string(kAfter) + " matches from the start (" +
                          f.startDate + ") on; " + std::to_string(afterAll.size()) +
@@ -438,14 +524,28 @@ ReviewResult computeReview(const Focus& f, const MetricSpec& metric, const Seaso
                          " missing)";
         return result;
     }
-    const std::vector<std::size_t> beforeIdx(beforeAll.end() - static_cast<std::ptrdiff_t>(kb),
-                                             beforeAll.end());
+    // The matches that raised the flag: the judged window ending at the opening match.
+    std::vector<std::size_t> triggerIdx;
+    const auto opened = std::find(season.matchIds.begin(), season.matchIds.end(), f.openedAfterMatch);
+    if (opened != season.matchIds.end()) {
+        const std::size_t at = static_cast<std::size_t>(opened - season.matchIds.begin());
+        const std::size_t len = triggerLength(judgedWindowOf(f.evidence), at);
+        for (std::size_t i = at + 1 - len; i <= at; ++i) triggerIdx.push_back(i);
+    }
+    auto inTrigger = [&](std::size_t i) {
+        return std::find(triggerIdx.begin(), triggerIdx.end(), i) != triggerIdx.end();
+    };
+    std::vector<std::size_t> eligible;
+    for (std::size_t i : beforeAll)
+        if (!inTrigger(i)) eligible.push_back(i);
+    const std::size_t nb = std::min(kb, eligible.size());
+    const std::vector<std::size_t> beforeIdx(eligible.end() - static_cast<std::ptrdiff_t>(nb),
+                                             eligible.end());
+    std::vector<std::size_t> shownTrigger;
+    for (std::size_t i : triggerIdx)
+        if (season.dates[i] < f.startDate) shownTrigger.push_back(i);
     const std::vector<std::size_t> afterIdx(afterAll.begin(),
                                             afterAll.begin() + static_cast<std::ptrdiff_t>(ka));
-    if (beforeIdx.back() >= afterIdx.front()) {
-        result.problem = "the before and after windows overlap";
-        return result;
-    }
 
     Review r;
     r.focusId = f.id;
@@ -455,14 +555,33 @@ ReviewResult computeReview(const Focus& f, const MetricSpec& metric, const Seaso
     r.zones = f.zones;
     r.level = level;
     r.ewmaLambda = ewmaLambda;
+    r.target = targetOf(f.evidence);
+    const bool rate = r.kind == MetricKind::Rate;
     const bool count = r.kind == MetricKind::Count;
-    auto fill = [&](ReviewWindow& w, const std::vector<std::size_t>& idx) {
+    const bool higher = r.better == Better::Higher;
+    const double sign = higher ? 1 : -1;
+
+    // Match-to-match variation from every match of the season played so far.
+    MetricVariation variation;
+    if (options.matchVariation)
+        variation = estimateVariation(tallies->second, afterIdx.back(), r.kind, options.variationPrior);
+    r.dispersion = variation.zones.value;
+    r.controlDispersion = variation.wholePitch.value;
+
+    std::vector<bool> inFocus(static_cast<std::size_t>(grid.zoneCount()), false);
+    for (const Zone& z : f.zones) {
+        const int idx = grid.indexOf(z);
+        if (idx >= 0) inFocus[static_cast<std::size_t>(idx)] = true;
+    }
+    auto fill = [&](ReviewWindow& w, const std::vector<std::size_t>& idx, bool control,
+                    double dispersion) {
         for (std::size_t i : idx) {
             long num = 0, den = 0;
-            for (const Zone& z : f.zones) {
-                const ZoneTally& t = tallies->second[i][static_cast<std::size_t>(grid.indexOf(z))];
-                num += t.num;
-                den += t.den;
+            const MatchTally& t = tallies->second[i];
+            for (std::size_t z = 0; z < t.size() && z < inFocus.size(); ++z) {
+                if (inFocus[z] == control) continue;
+                num += t[z].num;
+                den += t[z].den;
             }
             if (count) den = 1; // a per-match count over several zones: still one match
             w.matchIds.push_back(season.matchIds[i]);
@@ -473,68 +592,162 @@ ReviewResult computeReview(const Focus& f, const MetricSpec& metric, const Seaso
             w.totalDen += den;
         }
         w.value = w.totalDen > 0 ? static_cast<double>(w.totalNum) / static_cast<double>(w.totalDen) : kNaN;
-        w.interval = r.kind == MetricKind::Rate
-                         ? stats::wilson(static_cast<double>(w.totalNum), static_cast<double>(w.totalDen), level)
-                         : stats::garwood(static_cast<double>(w.totalNum), static_cast<double>(w.totalDen), level);
+        // Effective chances: (Σd)² / Σ d·D, D each match's design effect at the window's rate.
+        double sumD = 0, sumDD = 0;
+        const double mean = std::isnan(w.value) ? 0 : w.value;
+        for (std::size_t m = 0; m < w.den.size(); ++m) {
+            const double d = static_cast<double>(w.den[m]);
+            sumD += d;
+            sumDD += d * designEffect(r.kind, dispersion, d, mean);
+        }
+        w.effDen = sumDD > 0 ? sumD * sumD / sumDD : 0;
+        const double effNum = std::isnan(w.value) ? 0 : w.value * w.effDen;
+        w.interval = rate ? stats::wilson(effNum, w.effDen, level)
+                          : (w.effDen > 0 ? stats::garwood(effNum, w.effDen, level)
+                                          : stats::Interval{0, kNaN});
     };
-    fill(r.before, beforeIdx);
-    fill(r.after, afterIdx);
-    const bool higher = r.better == Better::Higher;
-    r.difference = r.after.value - r.before.value;
-    const long x1 = r.before.totalNum, n1 = r.before.totalDen, x2 = r.after.totalNum,
-               n2 = r.after.totalDen;
-    if (r.kind == MetricKind::Rate) {
-        r.testName = "Fisher's exact test";
-        r.differenceInterval = stats::newcombeDifference(x2, n2, x1, n1, level);
-        // Rows: after, before; columns: successes, failures. An odds ratio above 1 means the
-        // after window succeeds more often.
-        const auto fisher = stats::fisherExact(x2, n2 - x2, x1, n1 - x1);
-        r.pTwoSided = fisher.pTwoSided;
-        r.pImproved = higher ? fisher.pGreater : fisher.pLess;
-        r.probImproved = stats::probRateImproved(x1, n1, x2, n2, higher);
-        r.rateRatio = r.before.value > 0 ? r.after.value / r.before.value : kNaN;
+    fill(r.before, beforeIdx, false, r.dispersion);
+    fill(r.trigger, shownTrigger, false, r.dispersion);
+    fill(r.after, afterIdx, false, r.dispersion);
+    fill(r.controlBefore, beforeIdx, true, r.controlDispersion);
+    fill(r.controlAfter, afterIdx, true, r.controlDispersion);
+
+    // The smallest change that matters: the coach's, else the target's watch margin.
+    r.minChange = f.minChange ? std::fabs(*f.minChange) : (r.target ? r.target->watchMargin : 0);
+
+    const double z = normalQuantile(0.5 + level / 2);
+    const Estimate a = estimateOf(r.after, rate), b = estimateOf(r.before, rate);
+    const Estimate ca = estimateOf(r.controlAfter, rate), cb = estimateOf(r.controlBefore, rate);
+    r.testName = "difference in differences against the untrained zones, allowing for "
+                 "match-to-match variation (normal approximation)";
+    if (beforeIdx.empty() || std::isnan(b.value) || std::isnan(a.value)) {
+        r.finding = ReviewFinding::NoBaseline;
+        r.difference = r.expected = r.effect = r.rateRatio = kNaN;
+        r.differenceInterval = r.effectInterval = {kNaN, kNaN};
+        r.pTwoSided = r.pImproved = r.probImproved = r.probImprovedByMinChange = kNaN;
     } else {
-        r.testName = "exact conditional test for two Poisson rates";
-        r.differenceInterval = {kNaN, kNaN};
-        const auto test = stats::poissonConditionalTest(x2, static_cast<double>(n2), x1,
-                                                        static_cast<double>(n1));
-        r.pTwoSided = test.pTwoSided;
-        r.pImproved = higher ? test.pGreater : test.pLess;
-        r.probImproved = stats::probPoissonRateImproved(x1, static_cast<double>(n1), x2,
-                                                        static_cast<double>(n2), higher);
-        r.rateRatio = r.before.value > 0 ? r.after.value / r.before.value : kNaN;
+        r.difference = a.value - b.value;
+        const double diffSe = std::sqrt(a.variance + b.variance);
+        r.differenceInterval = {r.difference - z * diffSe, r.difference + z * diffSe};
+        r.rateRatio = b.value > 0 ? a.value / b.value : kNaN;
+        double expectedVar = b.variance;
+        r.expected = b.value;
+        if (!std::isnan(ca.value) && !std::isnan(cb.value)) {
+            if (rate) {
+                r.expected = b.value + (ca.value - cb.value);
+                expectedVar = b.variance + ca.variance + cb.variance;
+            } else if (cb.value > 0 && ca.value > 0) {
+                const double ratio = ca.value / cb.value;
+                r.expected = b.value * ratio;
+                expectedVar = ratio * ratio * b.variance +
+                              b.value * b.value * ratio * ratio *
+                                  (ca.variance / (ca.value * ca.value) + cb.variance / (cb.value * cb.value));
+            }
+        }
+        r.effect = a.value - r.expected;
+        const double se = std::sqrt(a.variance + expectedVar);
+        r.effectInterval = {r.effect - z * se, r.effect + z * se};
+        const double improvement = sign * r.effect;
+        if (se > 0) {
+            r.probImproved = normalCdf(improvement / se);
+            r.pImproved = 1 - r.probImproved;
+            r.pTwoSided = std::min(1.0, 2 * std::min(r.probImproved, r.pImproved));
+            r.probImprovedByMinChange = normalCdf((improvement - r.minChange) / se);
+        } else {
+            r.probImproved = improvement > 0 ? 1 : 0;
+            r.pImproved = 1 - r.probImproved;
+            r.pTwoSided = improvement == 0 ? 1 : 0;
+            r.probImprovedByMinChange = improvement >= r.minChange ? 1 : 0;
+        }
+        r.finding = r.probImprovedByMinChange >= 0.95 && r.minChange > 0
+                        ? ReviewFinding::ImprovedByMinChange
+                    : r.probImproved >= 0.95 ? ReviewFinding::Improved
+                    : r.pImproved >= 0.95    ? ReviewFinding::Worse
+                                             : ReviewFinding::NoClearChange;
+    }
+    // Are we back at the target? The after window's posterior (Jeffreys, effective counts).
+    r.probAfterMeetsTarget = kNaN;
+    if (r.target && r.after.effDen > 0 && !std::isnan(r.after.value)) {
+        const double effNum = r.after.value * r.after.effDen;
+        const bool atLeast = r.target->direction == Direction::AtLeast;
+        r.probAfterMeetsTarget =
+            rate ? (atLeast ? stats::probRateAbove(effNum, r.after.effDen, r.target->value)
+                            : stats::probRateBelow(effNum, r.after.effDen, r.target->value))
+                 : (atLeast ? stats::probPoissonRateAbove(effNum, r.after.effDen, r.target->value)
+                            : stats::probPoissonRateBelow(effNum, r.after.effDen, r.target->value));
+    }
+    {
+        const std::size_t left = shownTrigger.size();
+        std::string text;
+        if (beforeIdx.empty()) {
+            text = "no match before the training started lies outside the " + std::to_string(left) +
+                   " that raised the flag, so there is nothing fair to compare with; the after "
+                   "matches are read against the target only";
+        } else {
+            text = "the " + std::to_string(beforeIdx.size()) + " match" +
+                   (beforeIdx.size() == 1 ? "" : "es") + " before those that raised the flag";
+            if (left > 0)
+                text += " (the " + std::to_string(left) + " that raised it are left out: they were "
+                        "picked because they looked bad, and an unlucky run is usually followed "
+                        "by better matches anyway)";
+            if (beforeIdx.size() < kb)
+                text += "; only " + std::to_string(beforeIdx.size()) + " of the " +
+                        std::to_string(kb) + " wanted were played";
+        }
+        r.baselineNote = text;
     }
 
-    // Match-by-match chart with centre and limits from the before window: a p-chart for rates
-    // (NIST/SEMATECH e-Handbook §6.3.3.2), its Poisson counterpart (u-chart, ū ± 3√(ū/e)) for
-    // counts and exposures; and the EWMA seeded at the before value (NIST §6.3.2.4).
-    std::vector<long> xs = r.before.num, ns = r.before.den;
-    xs.insert(xs.end(), r.after.num.begin(), r.after.num.end());
-    ns.insert(ns.end(), r.after.den.begin(), r.after.den.end());
-    std::vector<std::string> ids = r.before.matchIds;
-    ids.insert(ids.end(), r.after.matchIds.begin(), r.after.matchIds.end());
-    std::vector<stats::PChartPoint> points;
-    if (r.kind == MetricKind::Rate) {
-        points = stats::pChart(xs, ns, kb);
-    } else {
-        const double centre = r.before.value;
-        for (std::size_t i = 0; i < xs.size(); ++i) {
-            stats::PChartPoint p{};
-            p.centre = centre;
-            p.p = ns[i] > 0 ? static_cast<double>(xs[i]) / static_cast<double>(ns[i]) : kNaN;
-            const double spread = ns[i] > 0 ? 3 * std::sqrt(centre / static_cast<double>(ns[i])) : kNaN;
-            p.lcl = ns[i] > 0 ? std::max(0.0, centre - spread) : 0;
-            p.ucl = ns[i] > 0 ? centre + spread : kNaN;
-            p.above = ns[i] > 0 && p.p > p.ucl;
-            p.below = ns[i] > 0 && p.p < p.lcl;
-            points.push_back(p);
-        }
+    // Match-by-match chart: baseline, the flag's matches, after. Centre and limits from the
+    // baseline (or the target when there is none): a p-chart for rates (NIST/SEMATECH
+    // e-Handbook §6.3.3.2) with the beta-binomial variance p(1 − p)·D_i/n_i, its Poisson
+    // counterpart for counts with ū·D_i/e_i; the spread uses the baseline smoothed by half a
+    // success so a baseline of 0 % or 100 % still has limits of some width.
+    std::vector<std::pair<std::size_t, int>> points; // index, 0 before / 1 trigger / 2 after
+    for (std::size_t i : beforeIdx) points.push_back({i, 0});
+    for (std::size_t i : shownTrigger) points.push_back({i, 1});
+    for (std::size_t i : afterIdx) points.push_back({i, 2});
+    std::sort(points.begin(), points.end());
+    double centre = !std::isnan(r.before.value) ? r.before.value : (r.target ? r.target->value : kNaN);
+    double smooth = centre;
+    if (!std::isnan(r.before.value)) {
+        smooth = rate ? (static_cast<double>(r.before.totalNum) + 0.5) / (static_cast<double>(r.before.totalDen) + 1)
+                      : (static_cast<double>(r.before.totalNum) + 0.5) / static_cast<double>(r.before.totalDen);
     }
-    double z = r.before.value;
-    for (std::size_t i = 0; i < points.size(); ++i) {
-        if (!std::isnan(points[i].p)) z = ewmaLambda * points[i].p + (1 - ewmaLambda) * z;
-        r.chart.push_back({ids[i], i >= kb, points[i].p, points[i].centre, points[i].lcl,
-                           points[i].ucl, points[i].above, points[i].below, z});
+    double ewNum = 0, ewDen = 0;
+    for (const auto& [i, part] : points) {
+        long num = 0, den = 0;
+        const MatchTally& t = tallies->second[i];
+        for (std::size_t zi = 0; zi < t.size() && zi < inFocus.size(); ++zi)
+            if (inFocus[zi]) {
+                num += t[zi].num;
+                den += t[zi].den;
+            }
+        if (count) den = 1;
+        ChartPoint p;
+        p.matchId = season.matchIds[i];
+        p.after = part == 2;
+        p.trigger = part == 1;
+        p.centre = centre;
+        const double d = static_cast<double>(den);
+        p.value = den > 0 ? static_cast<double>(num) / d : kNaN;
+        if (den > 0 && !std::isnan(smooth)) {
+            const double deff = designEffect(r.kind, r.dispersion, d, smooth);
+            const double var = rate ? smooth * (1 - smooth) * deff / d : smooth * deff / d;
+            const double spread = 3 * std::sqrt(std::max(0.0, var));
+            p.lcl = std::max(0.0, centre - spread);
+            p.ucl = rate ? std::min(1.0, centre + spread) : centre + spread;
+            p.above = p.value > p.ucl;
+            p.below = p.value < p.lcl;
+        } else {
+            p.lcl = 0;
+            p.ucl = rate ? 1 : kNaN;
+        }
+        // EWMA of the match values weighted by their chances, from the chart's first match on
+        // (no seed, no look-ahead): z_t = Σ (1 − λ)^(t − s)·x_s / Σ (1 − λ)^(t − s)·n_s.
+        ewNum = (1 - ewmaLambda) * ewNum + static_cast<double>(num);
+        ewDen = (1 - ewmaLambda) * ewDen + d;
+        p.ewma = ewDen > 0 ? ewNum / ewDen : kNaN;
+        r.chart.push_back(p);
     }
     r.trainingNote = "training sessions are not recorded yet; the week planner will report the "
                      "minutes spent on this focus's drills between the windows";
@@ -548,16 +761,26 @@ std::string reviewToJson(const Review& r) {
         for (std::size_t i = 0; i < w.matchIds.size(); ++i)
             matches.push_back({{"match_id", w.matchIds[i]}, {"date", w.dates[i]},
                                {"num", w.num[i]}, {"den", w.den[i]}});
-        return json{{"matches", matches}, {"num", w.totalNum}, {"den", w.totalDen},
-                    {"value", number(w.value)}, {"low", number(w.interval.low)},
-                    {"high", number(w.interval.high)}};
+        return json{{"matches", matches},           {"num", w.totalNum},
+                    {"den", w.totalDen},            {"value", number(w.value)},
+                    {"low", number(w.interval.low)}, {"high", number(w.interval.high)},
+                    {"effective_den", number(w.effDen)}};
+    };
+    auto totals = [](const ReviewWindow& w) {
+        return json{{"num", w.totalNum}, {"den", w.totalDen}, {"value", number(w.value)},
+                    {"effective_den", number(w.effDen)}};
     };
     json chart = json::array();
     for (const auto& p : r.chart)
-        chart.push_back({{"match_id", p.matchId}, {"window", p.after ? "after" : "before"},
+        chart.push_back({{"match_id", p.matchId},
+                         {"window", p.after ? "after" : p.trigger ? "trigger" : "before"},
                          {"value", number(p.value)}, {"centre", number(p.centre)},
                          {"lcl", number(p.lcl)}, {"ucl", number(p.ucl)}, {"above", p.above},
                          {"below", p.below}, {"ewma", number(p.ewma)}});
+    json target = nullptr;
+    if (r.target)
+        target = {{"direction", toString(r.target->direction)}, {"value", r.target->value},
+                  {"watch_margin", r.target->watchMargin}};
     json j{{"focus_id", r.focusId},
            {"metric", r.metric},
            {"kind", toString(r.kind)},
@@ -565,15 +788,29 @@ std::string reviewToJson(const Review& r) {
            {"zones", zonesJson(r.zones)},
            {"level", r.level},
            {"before", window(r.before)},
+           {"trigger", window(r.trigger)},
            {"after", window(r.after)},
+           {"baseline_note", r.baselineNote},
+           {"control", {{"before", totals(r.controlBefore)}, {"after", totals(r.controlAfter)}}},
+           {"dispersion", r.dispersion},
+           {"control_dispersion", r.controlDispersion},
            {"difference", number(r.difference)},
            {"difference_low", number(r.differenceInterval.low)},
            {"difference_high", number(r.differenceInterval.high)},
            {"rate_ratio", number(r.rateRatio)},
+           {"expected", number(r.expected)},
+           {"effect", number(r.effect)},
+           {"effect_low", number(r.effectInterval.low)},
+           {"effect_high", number(r.effectInterval.high)},
+           {"min_change", r.minChange},
            {"test", r.testName},
            {"p_two_sided", number(r.pTwoSided)},
            {"p_improved", number(r.pImproved)},
            {"prob_improved", number(r.probImproved)},
+           {"prob_improved_by_min_change", number(r.probImprovedByMinChange)},
+           {"finding", toString(r.finding)},
+           {"target", target},
+           {"prob_after_meets_target", number(r.probAfterMeetsTarget)},
            {"chart", {{"kind", r.kind == MetricKind::Rate ? "p" : "u"},
                       {"ewma_lambda", r.ewmaLambda},
                       {"points", chart}}},

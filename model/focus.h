@@ -39,6 +39,9 @@ struct Focus {
     std::string verdict;          ///< empty while open
     std::string verdictNote;
     std::vector<std::int64_t> drills;
+    /// The smallest improvement the coach said would matter, in the metric's unit (a share for
+    /// rates: 0.08 is 8 points); unset: the target's watch margin at opening.
+    std::optional<double> minChange;
     /// The grid `zones` are on: the club's grid when the focus was opened (FocusStore sets
     /// it). After a grid change it differs from the club's; reviews count on this one.
     ZoneGrid grid;
@@ -82,6 +85,9 @@ struct FocusEvidence {
     std::string matchId;
     std::string date;
     std::string frozenAt;
+    /// The window that raised the flag (Window::name()); empty in evidence frozen before it
+    /// was recorded.
+    std::string judgedWindow;
     std::vector<EvidenceZone> zones;
     /// Some wanted zone is off target or watched over the club's judged window. A focus may be
     /// opened without a slip; the caller says so.
@@ -132,7 +138,8 @@ private:
     ClubRepository& m_repo;
 };
 
-/// One side (before or after) of a review: the matches and their summed tally over the zones.
+/// One side (before, the matches left out, or after) of a review: the matches and their
+/// summed tally over the zones.
 struct ReviewWindow {
     std::vector<std::string> matchIds;
     std::vector<std::string> dates;
@@ -141,7 +148,8 @@ struct ReviewWindow {
     long totalNum = 0;
     long totalDen = 0;
     double value = 0;
-    stats::Interval interval{0, 0};
+    stats::Interval interval{0, 0}; ///< on effective counts (match-to-match variation)
+    double effDen = 0;              ///< effective chances or exposure (variation.h)
 };
 
 struct ChartPoint {
@@ -154,9 +162,27 @@ struct ChartPoint {
     bool above = false;
     bool below = false;
     double ewma = 0;
+    bool trigger = false; ///< one of the matches that raised the flag (not in the baseline)
 };
 
+/// What a review can say, in one word each (docs/reviews.md).
+enum class ReviewFinding {
+    ImprovedByMinChange, ///< P(improvement ≥ the coach's minimal important change) ≥ 0.95
+    Improved,            ///< P(improvement > 0) ≥ 0.95, but not surely by the minimal change
+    NoClearChange,       ///< neither way with 95 % probability
+    Worse,               ///< P(got worse) ≥ 0.95
+    NoBaseline,          ///< no match outside the flag's own window to compare with
+};
+std::string_view toString(ReviewFinding f);
+
 /// Every number of a follow-up review (docs/reviews.md).
+///
+/// The baseline ("before") is never the window that raised the flag: a zone is picked because
+/// those matches looked bad, so comparing with them credits the drills with the regression to
+/// the mean that follows any unlucky run. It is the last K matches before the training started
+/// that are not in that window. The change is read against the zones nobody trained (the rest
+/// of the pitch, same metric, same matches: difference in differences), so a team-wide change
+/// is not credited to the drills, and every variance allows for match-to-match variation.
 struct Review {
     std::int64_t focusId = 0;
     std::string metric;
@@ -164,14 +190,31 @@ struct Review {
     Better better = Better::Higher;
     std::vector<Zone> zones;
     double level = 0.95;
-    ReviewWindow before;
+    ReviewWindow before;  ///< the baseline
+    ReviewWindow trigger; ///< the matches that raised the flag, left out of the baseline
     ReviewWindow after;
-    double difference = 0;            ///< after − before, in the metric's unit
-    stats::Interval differenceInterval{0, 0}; ///< rates: Newcombe hybrid score; counts: NaN
-    double rateRatio = 0;             ///< counts and exposures: after / before
-    double pTwoSided = 1;             ///< Fisher (rates) or exact conditional Poisson (counts)
-    double pImproved = 1;             ///< one-sided p-value in the improving direction
-    double probImproved = 0;          ///< posterior P(the metric improved), Jeffreys priors
+    ReviewWindow controlBefore; ///< the untrained zones over the baseline's matches
+    ReviewWindow controlAfter;  ///< ... and over the after matches
+    std::string baselineNote;   ///< the baseline in plain words
+    double dispersion = 0;        ///< rho or phi of the focus zones (0: none allowed for)
+    double controlDispersion = 0; ///< of the untrained zones (the whole pitch's)
+    double difference = 0;        ///< after − before, in the metric's unit
+    stats::Interval differenceInterval{0, 0}; ///< of the difference, with variation
+    double rateRatio = 0;         ///< after / before
+    /// What the after value would have been had the focus zones moved like the untrained ones:
+    /// before + (control after − control before) for rates, before × control after / control
+    /// before for counts.
+    double expected = 0;
+    double effect = 0;            ///< after − expected (difference in differences), metric unit
+    stats::Interval effectInterval{0, 0};
+    double minChange = 0;         ///< the smallest improvement that matters (metric unit, ≥ 0)
+    double pTwoSided = 1;         ///< of effect = 0, normal approximation
+    double pImproved = 1;         ///< one-sided p-value in the improving direction
+    double probImproved = 0;      ///< P(improvement > 0)
+    double probImprovedByMinChange = 0; ///< P(improvement ≥ minChange)
+    ReviewFinding finding = ReviewFinding::NoClearChange;
+    std::optional<Target> target;   ///< the target the flag was judged against
+    double probAfterMeetsTarget = 0; ///< P(the after window's true value meets the target)
     std::string testName;
     std::vector<ChartPoint> chart;    ///< p-chart (rates) or u-chart (counts), with the EWMA
     double ewmaLambda = 0.3;
@@ -185,11 +228,19 @@ struct ReviewResult {
     std::string problem;
 };
 
-/// Compares the `kBefore` matches before the focus's start date with the `kAfter` matches from
-/// it on (same squad and season), over the focus's zones.
+/// Review choices beyond the windows: whether to allow for match-to-match variation (on in
+/// the product; tests switch it off to check the pure-noise numbers) and its prior.
+struct ReviewOptions {
+    bool matchVariation = true;
+    VariationPrior variationPrior;
+};
+
+/// Compares up to `kBefore` matches before the focus's start (not those of the window that
+/// raised the flag) with the first `kAfter` matches from it on (same squad and season), over
+/// the focus's zones, against the untrained zones.
 ReviewResult computeReview(const Focus& f, const MetricSpec& metric, const SeasonTallies& season,
                            const ZoneGrid& grid, int kBefore, int kAfter, double level = 0.95,
-                           double ewmaLambda = 0.3);
+                           double ewmaLambda = 0.3, const ReviewOptions& options = {});
 
 /// The review as JSON (every number; docs/reviews.md).
 std::string reviewToJson(const Review& r);

@@ -226,6 +226,11 @@ CREATE TABLE grid_change(
   changed_at TEXT NOT NULL,
   summary TEXT NOT NULL DEFAULT '');
 )sql",
+    // 7: the smallest change a coach states, at opening, would matter (docs/reviews.md); NULL
+    // for focuses opened before: their review uses the target's watch margin.
+    R"sql(
+ALTER TABLE focus ADD COLUMN min_change REAL;
+)sql",
 };
 
 static_assert(std::size(kMigrations) == ClubRepository::kSchemaVersion);
@@ -980,6 +985,9 @@ FlagSettings ClubRepository::flagSettings() const {
                 else if (key == "flags.watch_threshold") f.watchThreshold = std::stod(value);
                 else if (key == "flags.fdr") f.fdr = value == "on";
                 else if (key == "flags.fdr_q") f.fdrQ = std::stod(value);
+                else if (key == "flags.false_flags_per_season") f.falseFlagsPerSeason = std::stod(value);
+                else if (key == "flags.season_matches") f.seasonMatches = std::stoi(value);
+                else if (key == "flags.match_variation") f.matchVariation = value != "off";
                 else if (key == "flags.interval")
                     f.rateInterval = value == "jeffreys" ? IntervalMethod::Jeffreys
                                                          : IntervalMethod::Wilson;
@@ -1016,6 +1024,9 @@ void ClubRepository::saveFlagSettings(const FlagSettings& f,
         put("flags.watch_threshold", num(f.watchThreshold));
         put("flags.fdr", f.fdr ? "on" : "off");
         put("flags.fdr_q", num(f.fdrQ));
+        put("flags.false_flags_per_season", num(f.falseFlagsPerSeason));
+        put("flags.season_matches", std::to_string(f.seasonMatches));
+        put("flags.match_variation", f.matchVariation ? "on" : "off");
         put("flags.interval", f.rateInterval == IntervalMethod::Jeffreys ? "jeffreys" : "wilson");
         put("flags.window", f.window.name());
         for (const auto& [key, value] : more) put(key.c_str(), value);

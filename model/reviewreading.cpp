@@ -31,6 +31,7 @@ ReviewWindow windowFrom(const json& j) {
     w.totalDen = j.at("den").get<long>();
     w.value = numberOr(j, "value");
     w.interval = {numberOr(j, "low"), numberOr(j, "high")};
+    w.effDen = numberOr(j, "effective_den");
     return w;
 }
 
@@ -42,6 +43,7 @@ ChartReading readChart(const Review& r) {
     c.high = kNaN;
     const bool higher = r.better == Better::Higher;
     for (const ChartPoint& p : r.chart) {
+        if (p.trigger) continue; // the flag's own matches are shown, not read
         (p.after ? c.afterMatches : c.beforeMatches) += 1;
         if (p.after) {
             c.afterOnBetterSide += higher ? p.above : p.below;
@@ -74,6 +76,32 @@ std::optional<Review> reviewFromJson(const std::string& text) {
         r.level = j.at("level").get<double>();
         r.before = windowFrom(j.at("before"));
         r.after = windowFrom(j.at("after"));
+        if (const auto t = j.find("trigger"); t != j.end()) r.trigger = windowFrom(*t);
+        r.baselineNote = j.value("baseline_note", std::string());
+        r.dispersion = j.value("dispersion", 0.0);
+        r.controlDispersion = j.value("control_dispersion", 0.0);
+        r.expected = numberOr(j, "expected");
+        r.effect = numberOr(j, "effect");
+        r.effectInterval = {numberOr(j, "effect_low"), numberOr(j, "effect_high")};
+        r.minChange = j.value("min_change", 0.0);
+        r.probImprovedByMinChange = numberOr(j, "prob_improved_by_min_change");
+        r.probAfterMeetsTarget = numberOr(j, "prob_after_meets_target");
+        // Reviews stored before the finding was recorded read as "no clear change" unless
+        // their own numbers said otherwise.
+        const std::string finding = j.value("finding", std::string());
+        r.finding = ReviewFinding::NoClearChange;
+        for (ReviewFinding f : {ReviewFinding::ImprovedByMinChange, ReviewFinding::Improved,
+                                ReviewFinding::NoClearChange, ReviewFinding::Worse,
+                                ReviewFinding::NoBaseline})
+            if (toString(f) == finding) r.finding = f;
+        if (const auto t = j.find("target"); t != j.end() && t->is_object()) {
+            Target target;
+            target.direction = directionFromString(t->value("direction", std::string()))
+                                   .value_or(Direction::AtLeast);
+            target.value = t->value("value", 0.0);
+            target.watchMargin = t->value("watch_margin", 0.0);
+            r.target = target;
+        }
         r.difference = numberOr(j, "difference");
         r.differenceInterval = {numberOr(j, "difference_low"), numberOr(j, "difference_high")};
         r.rateRatio = numberOr(j, "rate_ratio");
@@ -83,12 +111,13 @@ std::optional<Review> reviewFromJson(const std::string& text) {
         r.probImproved = numberOr(j, "prob_improved");
         const json& chart = j.at("chart");
         r.ewmaLambda = chart.at("ewma_lambda").get<double>();
-        for (const auto& p : chart.at("points"))
-            r.chart.push_back({p.at("match_id").get<std::string>(),
-                               p.at("window").get<std::string>() == "after", numberOr(p, "value"),
-                               numberOr(p, "centre"), numberOr(p, "lcl"), numberOr(p, "ucl"),
-                               p.at("above").get<bool>(), p.at("below").get<bool>(),
-                               numberOr(p, "ewma")});
+        for (const auto& p : chart.at("points")) {
+            const std::string part = p.at("window").get<std::string>();
+            r.chart.push_back({p.at("match_id").get<std::string>(), part == "after",
+                               numberOr(p, "value"), numberOr(p, "centre"), numberOr(p, "lcl"),
+                               numberOr(p, "ucl"), p.at("above").get<bool>(),
+                               p.at("below").get<bool>(), numberOr(p, "ewma"), part == "trigger"});
+        }
         if (const auto t = j.find("training_minutes"); t != j.end() && !t->is_null())
             r.trainingMinutes = t->get<double>();
         r.trainingNote = j.value("training_note", std::string());

@@ -1,9 +1,13 @@
 #include "status.h"
 
+#include <boost/math/distributions/negative_binomial.hpp>
+#include <boost/math/distributions/poisson.hpp>
 #include <boost/math/special_functions/beta.hpp>
 #include <boost/math/special_functions/gamma.hpp>
 
 #include <algorithm>
+#include <map>
+#include <tuple>
 #include <cmath>
 #include <limits>
 
@@ -37,7 +41,38 @@ struct Evidence {
     double chanceOff = 0;
 };
 
-/// Posterior evidence for a rate target: Jeffreys prior, posterior Beta(x + ½, n − x + ½).
+/// A target at the edge of what the value can be ("at least 100 %", "at most 0 %", "at most 0 a
+/// match") is missed only by data that contradict it — one failure, one event — and then for
+/// certain; a continuous posterior would put all its mass past such a target and call a perfect
+/// zone off. A target that cannot be missed ("at least 0", "at most 100 %") never is.
+std::optional<Evidence> boundaryEvidence(bool rate, double rawNum, double rawDen, const Target& t) {
+    const bool atLeast = t.direction == Direction::AtLeast;
+    const bool lowEdge = t.value <= 0, highEdge = rate && t.value >= 1;
+    if (!lowEdge && !highEdge) return std::nullopt;
+    Evidence e;
+    bool contradicted = false;
+    if (atLeast && highEdge) contradicted = rawNum < rawDen;    // a failure
+    else if (!atLeast && lowEdge) contradicted = rawNum > 0;    // an event or a success
+    // "at least 0" and "at most 100 %" are met whatever happens.
+    e.pMiss = contradicted ? 1 : 0;
+    e.pWatch = e.pMiss;
+    e.pValue = contradicted ? 0 : 1;
+    e.chanceOff = 0; // a truth exactly on such a target never produces a contradiction
+    return e;
+}
+
+/// The watch line: the target moved by its margin towards the good side, but never past half
+/// the way to the edge of what the value can be (a 0.97 target with a 0.05 margin watches at
+/// 0.985, not at an impossible 1.02).
+double watchLine(bool rate, const Target& t) {
+    const bool atLeast = t.direction == Direction::AtLeast;
+    double room = atLeast ? (rate ? (1 - t.value) / 2 : t.watchMargin) : t.value / 2;
+    const double margin = std::clamp(t.watchMargin, 0.0, std::max(0.0, room));
+    return atLeast ? t.value + margin : t.value - margin;
+}
+
+/// Posterior evidence for a rate target: Jeffreys prior, posterior Beta(x + ½, n − x + ½), on
+/// the window's effective counts.
 Evidence rateEvidence(double x, double n, const Target& t, double offThreshold) {
     Evidence e;
     const bool atLeast = t.direction == Direction::AtLeast;
@@ -45,7 +80,7 @@ Evidence rateEvidence(double x, double n, const Target& t, double offThreshold) 
         return atLeast ? stats::probRateBelow(xx, n, line) : stats::probRateAbove(xx, n, line);
     };
     e.pMiss = miss(x, t.value);
-    e.pWatch = miss(x, atLeast ? t.value + t.watchMargin : t.value - t.watchMargin);
+    e.pWatch = miss(x, watchLine(true, t));
     e.pValue = atLeast ? binomialCdf(x, n, t.value) : 1 - binomialCdf(x - 1, n, t.value);
     // Chance of an off-target flag if the truth were exactly the target: pMiss falls as x
     // rises (at least) or rises with x (at most), so the flagged x form one tail; find its end.
@@ -71,7 +106,7 @@ Evidence rateEvidence(double x, double n, const Target& t, double offThreshold) 
 }
 
 /// Posterior evidence for a Poisson rate target (per match or per exposure event): Jeffreys
-/// prior, posterior Gamma(count + ½, rate exposure).
+/// prior, posterior Gamma(count + ½, rate exposure), on the window's effective counts.
 Evidence poissonEvidence(double count, double exposure, const Target& t, double offThreshold) {
     Evidence e;
     const bool atLeast = t.direction == Direction::AtLeast;
@@ -80,7 +115,7 @@ Evidence poissonEvidence(double count, double exposure, const Target& t, double 
                        : stats::probPoissonRateAbove(c, exposure, line);
     };
     e.pMiss = miss(count, t.value);
-    e.pWatch = miss(count, atLeast ? t.value + t.watchMargin : std::max(0.0, t.value - t.watchMargin));
+    e.pWatch = miss(count, watchLine(false, t));
     const double mu = t.value * exposure;
     e.pValue = atLeast ? poissonCdf(count, mu) : 1 - poissonCdf(count - 1, mu);
     // Search the flagged tail up to a count far past the mean.
@@ -103,6 +138,23 @@ Evidence poissonEvidence(double count, double exposure, const Target& t, double 
         e.chanceOff = lo > top ? 0 : 1 - poissonCdf(static_cast<double>(lo - 1), mu);
     }
     return e;
+}
+
+/// How unusual one match's count would be for a team exactly on its per-match target: the
+/// negative binomial (gamma-Poisson with the metric's dispersion; Poisson without) tail at or
+/// past the observed count in the wrong direction.
+double singleMatchTail(double count, const Target& t, double phi) {
+    const double mu = std::max(0.0, t.value);
+    const bool atMost = t.direction == Direction::AtMost;
+    const double c = std::round(count);
+    if (mu <= 0) return atMost ? (c > 0 ? 0.0 : 1.0) : 1.0;
+    auto cdf = [&](double k) { // P(X <= k)
+        if (k < 0) return 0.0;
+        if (phi <= 0) return boost::math::cdf(boost::math::poisson_distribution<double>(mu), k);
+        const double r = 1 / phi;
+        return boost::math::cdf(boost::math::negative_binomial_distribution<double>(r, r / (r + mu)), k);
+    };
+    return atMost ? 1 - cdf(c - 1) : cdf(c);
 }
 
 std::vector<ZoneTally> zoneSeries(const std::vector<MatchTally>& tallies, int zoneIndex,
@@ -169,7 +221,7 @@ std::optional<Window> Window::parse(std::string_view text) {
 }
 
 WindowSum windowSum(const std::vector<ZoneTally>& series, std::size_t focal, const Window& w,
-                    double seed) {
+                    const WindowVariation& v) {
     WindowSum s;
     if (series.empty() || focal >= series.size()) return s;
     std::size_t first = 0;
@@ -178,57 +230,77 @@ WindowSum windowSum(const std::vector<ZoneTally>& series, std::size_t focal, con
     case Window::Kind::LastN:
         first = focal + 1 >= static_cast<std::size_t>(w.n) ? focal + 1 - static_cast<std::size_t>(w.n) : 0;
         break;
-    case Window::Kind::Season: first = 0; break;
-    case Window::Kind::Ewma: {
-        double meanDen = 0;
-        for (std::size_t t = 0; t <= focal; ++t) meanDen += static_cast<double>(series[t].den);
-        meanDen /= static_cast<double>(focal + 1);
-        double weight = w.lambda;
-        double sumWeightedDen = 0, sumSquaredWeightDen = 0;
-        for (std::size_t t = focal + 1; t-- > 0;) {
-            const double d = static_cast<double>(series[t].den);
-            s.num += weight * static_cast<double>(series[t].num);
-            s.den += weight * d;
-            sumWeightedDen += weight * d;
-            sumSquaredWeightDen += weight * weight * d;
-            weight *= 1 - w.lambda;
-        }
-        // `weight` is now λ(1 − λ)^(focal+1); the seed's weight is (1 − λ)^(focal+1).
-        const double seedWeight = weight / w.lambda;
-        s.num += seedWeight * seed * meanDen;
-        s.den += seedWeight * meanDen;
-        sumWeightedDen += seedWeight * meanDen;
-        sumSquaredWeightDen += seedWeight * seedWeight * meanDen;
-        // Weighted sums are not counts: Σw·x has variance Σw²·(count variance), so scale both
-        // by Σw·d / Σw²·d to get effective counts whose Poisson/binomial spread matches (the
-        // Kish effective sample size). For a per-match count this is (2 − λ)/λ matches in the
-        // long run — the EWMA's own variance factor λ/(2 − λ), NIST §6.3.2.4.
-        if (sumSquaredWeightDen > 0) {
-            const double scale = sumWeightedDen / sumSquaredWeightDen;
-            s.num *= scale;
-            s.den *= scale;
-        }
-        s.matches = static_cast<int>(focal + 1);
-        return s;
+    case Window::Kind::Season:
+    case Window::Kind::Ewma: first = 0; break;
     }
-    }
-    for (std::size_t t = first; t <= focal; ++t) {
-        s.num += static_cast<double>(series[t].num);
-        s.den += static_cast<double>(series[t].den);
+    // Weighted sums: w = 1 in a plain window, λ(1 − λ)^age in the EWMA. Σw²·d·D is the variance
+    // of Σw·x in units of one chance's pure-noise variance, D the match's design effect.
+    const bool ewma = w.kind == Window::Kind::Ewma;
+    double weight = ewma ? w.lambda : 1;
+    double sumWD = 0, sumW2D = 0, sumW2DD = 0;
+    for (std::size_t t = focal + 1; t-- > first;) {
+        const double d = static_cast<double>(series[t].den);
+        const double deff = designEffect(v.kind, v.dispersion, d, v.mean);
+        s.num += weight * static_cast<double>(series[t].num);
+        s.den += weight * d;
+        sumWD += weight * d;
+        sumW2D += weight * weight * d;
+        sumW2DD += weight * weight * d * deff;
+        if (ewma) weight *= 1 - w.lambda;
     }
     s.matches = static_cast<int>(focal - first + 1);
+    if (ewma && sumW2D > 0) {
+        // Weighted sums are not counts: Σw·x has variance Σw²·(count variance), so scale both
+        // by Σw·d / Σw²·d to get effective counts whose binomial/Poisson spread matches (the
+        // Kish effective sample size). For a per-match count this is (2 − λ)/λ matches in the
+        // long run — the EWMA's own variance factor λ/(2 − λ), NIST §6.3.2.4.
+        const double scale = sumWD / sumW2D;
+        s.num *= scale;
+        s.den *= scale;
+    }
+    const double value = s.den > 0 ? s.num / s.den : 0;
+    s.effDen = sumW2DD > 0 ? sumWD * sumWD / sumW2DD : 0;
+    s.effNum = value * s.effDen;
     return s;
 }
 
 std::string_view toString(FlagState s) {
     switch (s) {
     case FlagState::OnTarget: return "on_target";
-    case FlagState::Watch: return "watch";
+    case FlagState::CloseToLine: return "close_to_line";
+    case FlagState::LikelyOff: return "likely_off";
     case FlagState::OffTarget: return "off_target";
     case FlagState::TooLittleData: return "too_little_data";
     case FlagState::NoTarget: return "no_target";
     }
     return "?";
+}
+
+std::optional<FlagState> flagStateFromString(std::string_view s) {
+    for (FlagState f : {FlagState::OnTarget, FlagState::CloseToLine, FlagState::LikelyOff,
+                        FlagState::OffTarget, FlagState::TooLittleData, FlagState::NoTarget})
+        if (toString(f) == s) return f;
+    if (s == "watch") return FlagState::CloseToLine; // evidence frozen before the split
+    return std::nullopt;
+}
+
+double seriesAlarmShare(const FlagSettings& s, int series) {
+    const double looks = std::max(1, s.seasonMatches);
+    if (s.falseFlagsPerSeason <= 0) return std::min(1.0, (1 - s.offThreshold) * looks);
+    return std::min(0.05, s.falseFlagsPerSeason / std::max(1, series));
+}
+
+double offThresholdFor(const FlagSettings& s, int series) {
+    if (s.falseFlagsPerSeason <= 0) return s.offThreshold;
+    return 1 - seriesAlarmShare(s, series) / std::max(1, s.seasonMatches);
+}
+
+int seriesWithTargets(const std::vector<Target>& targets, const std::string& date) {
+    std::map<std::tuple<std::string, int, int>, std::vector<Target>> byKey;
+    for (const auto& t : targets) byKey[{t.key.metric, t.key.band, t.key.lane}].push_back(t);
+    int n = 0;
+    for (const auto& [key, versions] : byKey) n += inForce(versions, date).has_value();
+    return n;
 }
 
 std::vector<ZoneStatus> computeStatus(const SeasonTallies& season, std::size_t focal,
@@ -239,11 +311,20 @@ std::vector<ZoneStatus> computeStatus(const SeasonTallies& season, std::size_t f
     std::vector<ZoneStatus> out;
     if (focal >= season.matchIds.size()) return out;
     const std::string& date = season.dates[focal];
+    // One threshold for the whole board: the season's alarm budget shared over every series
+    // with a target, whichever metrics this call asks for.
+    const double offThreshold = offThresholdFor(settings, seriesWithTargets(targets, date));
 
     for (const auto& metric : metrics) {
         auto found = season.byMetric.find(metric.id);
         if (found == season.byMetric.end()) continue;
         const MetricKind kind = metric.kind();
+        const bool rate = kind == MetricKind::Rate;
+        // The club's own match-to-match variation of this metric, from the matches played up
+        // to this one (never later ones).
+        MetricVariation variation;
+        if (settings.matchVariation)
+            variation = estimateVariation(found->second, focal, kind, settings.variationPrior);
         for (int zone = -1; zone < grid.zoneCount(); ++zone) {
             const Zone z = zone < 0 ? Zone{0, 0} : grid.zoneAt(zone);
             std::vector<Target> versions;
@@ -252,6 +333,13 @@ std::vector<ZoneStatus> computeStatus(const SeasonTallies& season, std::size_t f
                     versions.push_back(t);
             const std::optional<Target> target = inForce(versions, date);
             const auto series = zoneSeries(found->second, zone, kind == MetricKind::Count, focal);
+            // The design effect of a count is computed at the target (the value being tested)
+            // or, without one, at the season's rate so far.
+            const WindowSum all = windowSum(series, focal, {Window::Kind::Season, 0, 0});
+            const double seasonMean = all.den > 0 ? all.num / all.den : 0;
+            const WindowVariation wv{kind,
+                                     zone < 0 ? variation.wholePitch.value : variation.zones.value,
+                                     target ? target->value : seasonMean};
             for (const Window& w : windows) {
                 ZoneStatus st;
                 st.metric = metric.id;
@@ -260,25 +348,20 @@ std::vector<ZoneStatus> computeStatus(const SeasonTallies& season, std::size_t f
                 st.window = w;
                 st.target = target;
                 st.level = settings.level;
-                // An EWMA starts from the target when there is one, else from the season's
-                // value so far (NIST: z_0 = the target or the process mean).
-                double seed = 0;
-                if (target) {
-                    seed = target->value;
-                } else {
-                    const WindowSum all = windowSum(series, focal, {Window::Kind::Season, 0, 0}, 0);
-                    seed = all.den > 0 ? all.num / all.den : 0;
-                }
-                st.sum = windowSum(series, focal, w, seed);
-                const double num = st.sum.num, den = st.sum.den;
-                st.value = den > 0 ? num / den : kNaN;
-                if (kind == MetricKind::Rate) {
+                st.offThreshold = offThreshold;
+                st.dispersion = wv.dispersion;
+                st.sum = windowSum(series, focal, w, wv);
+                const double den = st.sum.den;
+                const double effNum = st.sum.effNum, effDen = st.sum.effDen;
+                st.value = den > 0 ? st.sum.num / den : kNaN;
+                // The interval comes from the same effective counts as the evidence.
+                if (rate) {
                     st.interval = settings.rateInterval == IntervalMethod::Jeffreys
-                                      ? stats::jeffreys(num, den, settings.level)
-                                      : stats::wilson(num, den, settings.level);
+                                      ? stats::jeffreys(effNum, effDen, settings.level)
+                                      : stats::wilson(effNum, effDen, settings.level);
                 } else {
-                    st.interval = den > 0 ? stats::garwood(num, den, settings.level)
-                                          : stats::Interval{0, kNaN};
+                    st.interval = effDen > 0 ? stats::garwood(effNum, effDen, settings.level)
+                                             : stats::Interval{0, kNaN};
                 }
                 if (!target) {
                     st.state = FlagState::NoTarget;
@@ -292,17 +375,21 @@ std::vector<ZoneStatus> computeStatus(const SeasonTallies& season, std::size_t f
                     st.state = FlagState::TooLittleData;
                     st.pMiss = kNaN;
                     st.pValue = kNaN;
+                    if (kind == MetricKind::Count && w.kind == Window::Kind::Match && den > 0)
+                        st.matchTail = singleMatchTail(st.sum.num, *target, wv.dispersion);
                     out.push_back(std::move(st));
                     continue;
                 }
-                const Evidence e = kind == MetricKind::Rate
-                                       ? rateEvidence(num, den, *target, settings.offThreshold)
-                                       : poissonEvidence(num, den, *target, settings.offThreshold);
+                const auto edge = boundaryEvidence(rate, st.sum.num, den, *target);
+                const Evidence e = edge ? *edge
+                                   : rate ? rateEvidence(effNum, effDen, *target, offThreshold)
+                                          : poissonEvidence(effNum, effDen, *target, offThreshold);
                 st.pMiss = e.pMiss;
                 st.pValue = e.pValue;
                 st.chanceOff = e.chanceOff;
-                st.state = e.pMiss >= settings.offThreshold ? FlagState::OffTarget
-                           : e.pWatch >= settings.watchThreshold ? FlagState::Watch
+                st.state = e.pMiss >= offThreshold              ? FlagState::OffTarget
+                           : e.pMiss >= 0.5                      ? FlagState::LikelyOff
+                           : e.pWatch >= settings.watchThreshold ? FlagState::CloseToLine
                                                                  : FlagState::OnTarget;
                 out.push_back(std::move(st));
             }
@@ -325,7 +412,7 @@ std::vector<ZoneStatus> computeStatus(const SeasonTallies& season, std::size_t f
             ZoneStatus& st = out[judged[k]];
             st.bhRejected = reject[k];
             if (settings.fdr && st.state == FlagState::OffTarget && !st.bhRejected)
-                st.state = FlagState::Watch;
+                st.state = FlagState::LikelyOff;
         }
     }
     return out;
@@ -335,6 +422,17 @@ double expectedChanceFlags(const std::vector<ZoneStatus>& statuses) {
     double sum = 0;
     for (const auto& s : statuses)
         if (s.target && s.state != FlagState::TooLittleData) sum += s.chanceOff;
+    return sum;
+}
+
+double seasonChanceFlags(const std::vector<ZoneStatus>& statuses, const FlagSettings& settings,
+                         int series) {
+    const double share = seriesAlarmShare(settings, series);
+    const double looks = std::max(1, settings.seasonMatches);
+    double sum = 0;
+    for (const auto& s : statuses)
+        if (s.target && s.state != FlagState::TooLittleData)
+            sum += std::min(share, looks * s.chanceOff);
     return sum;
 }
 

@@ -6,8 +6,10 @@
 #include "metricspec.h"
 #include "stats.h"
 #include "targets.h"
+#include "variation.h"
 #include "zones.h"
 
+#include <limits>
 #include <map>
 #include <optional>
 #include <string>
@@ -28,23 +30,36 @@ struct Window {
     bool operator==(const Window&) const = default;
 };
 
-/// Numerator and denominator summed over a window (weighted for the EWMA).
+/// Numerator and denominator summed over a window (weighted for the EWMA), and the same
+/// window in effective chances once match-to-match variation is allowed for.
 struct WindowSum {
     double num = 0;
     double den = 0;
     int matches = 0;
+    /// The window's information in pure-noise units: den_eff = (Σ w·d)² / Σ w²·d·D, with D
+    /// each match's design effect (variation.h), num_eff = value · den_eff. Equal to num/den
+    /// for last-N, match and season windows without variation.
+    double effNum = 0;
+    double effDen = 0;
+};
+
+/// What the effective counts of a window allow for: the metric's kind, its dispersion
+/// (rho or phi; 0 = pure binomial / Poisson noise) and, for counts, the mean rate per unit of
+/// exposure the design effect is computed at.
+struct WindowVariation {
+    MetricKind kind = MetricKind::Rate;
+    double dispersion = 0;
+    double mean = 0;
 };
 
 /// Sums one zone's per-match tallies over the window ending at `focal` (inclusive).
-/// The EWMA weighs match t by λ(1 − λ)^(focal − t) and seeds the recursion with a pseudo-match
-/// at the target (`seed`, the value the EWMA starts from) whose denominator is the mean
-/// denominator of the matches so far, weight (1 − λ)^(focal + 1). For per-match counts
-/// (den 1 a match) this is exactly z_t = λ x_t + (1 − λ) z_{t−1} with z_0 = seed, the
-/// convention of the NIST/SEMATECH e-Handbook §6.3.2.4. The EWMA's weighted sums are then
-/// scaled to effective counts (Kish), so intervals and posteriors reflect how much data the
+/// The EWMA weighs match t by λ(1 − λ)^(focal − t) over the real matches only (no pseudo-match
+/// at the target: a prior is used once, in the evidence), so its value is Σw·x / Σw·d — a
+/// match with one chance weighs less than one with thirty. Its weighted sums are then scaled to
+/// effective counts (Kish: Σw·d / Σw²·d), so intervals and posteriors reflect how much data the
 /// weights really carry; the value num/den is unchanged by the scaling.
 WindowSum windowSum(const std::vector<ZoneTally>& series, std::size_t focal, const Window& w,
-                    double seed);
+                    const WindowVariation& variation = {});
 
 enum class IntervalMethod { Wilson, Jeffreys };
 
@@ -53,14 +68,40 @@ struct FlagSettings {
     double level = 0.90;                 ///< confidence of the intervals shown
     IntervalMethod rateInterval = IntervalMethod::Wilson;
     Window window{Window::Kind::LastN, 5, 0.3}; ///< the window a debrief judges
-    double offThreshold = 0.999;         ///< P(wrong side of target) for "off target"
-    double watchThreshold = 0.50;        ///< P(wrong side of the watch line) for "watch"
+    /// P(wrong side of target) for "off target" when no season budget is set
+    /// (falseFlagsPerSeason 0); with a budget the threshold is derived from it.
+    double offThreshold = 0.999;
+    double watchThreshold = 0.50;        ///< P(short of the watch line) for "close to the line"
     bool fdr = false;                    ///< also require Benjamini–Hochberg rejection
     double fdrQ = 0.10;                  ///< false discovery rate for that
+    /// The season's alarm budget: about this many false off-target flags a season across the
+    /// whole board (every metric and zone with a target), each on-target zone at most 5 %.
+    /// 0 switches the budget off and `offThreshold` applies as set.
+    double falseFlagsPerSeason = 1;
+    int seasonMatches = 38;              ///< looks a season: one per match
+    bool matchVariation = true;          ///< allow for match-to-match variation (variation.h)
+    VariationPrior variationPrior;
 };
 
-enum class FlagState { OnTarget, Watch, OffTarget, TooLittleData, NoTarget };
+/// The off-target threshold in force: with a budget B over m judged series and L looks a
+/// season, 1 − min(0.05, B/m) / L (a union bound over the looks; docs/statistics.md);
+/// without one, `offThreshold`.
+double offThresholdFor(const FlagSettings& s, int seriesWithTargets);
+
+/// The share of one series' season allowed to be falsely flagged: min(0.05, B/m), or, with
+/// no budget, (1 − offThreshold)·L.
+double seriesAlarmShare(const FlagSettings& s, int seriesWithTargets);
+
+/// The states of a zone, each with one meaning (docs/statistics.md):
+/// - OnTarget: probably on the good side, with the margin;
+/// - CloseToLine: probably on the good side of the target, but not of the watch line (inside
+///   the margin);
+/// - LikelyOff: more likely than not past the target, not yet certain enough to flag;
+/// - OffTarget: past the target beyond the season's alarm budget;
+/// - TooLittleData, NoTarget.
+enum class FlagState { OnTarget, CloseToLine, LikelyOff, OffTarget, TooLittleData, NoTarget };
 std::string_view toString(FlagState s);
+std::optional<FlagState> flagStateFromString(std::string_view s);
 
 /// A zone's value in one window, its interval, and how it stands against its target.
 struct ZoneStatus {
@@ -75,9 +116,15 @@ struct ZoneStatus {
     std::optional<Target> target;
     FlagState state = FlagState::NoTarget;
     double pMiss = 0;   ///< posterior probability the true value is on the wrong side
-    double pValue = 1;  ///< one-sided exact p-value against the target (for BH)
-    double chanceOff = 0; ///< probability of "off target" here if the truth sat on the target
+    double pValue = 1;  ///< one-sided p-value against the target, on effective counts (BH)
+    double chanceOff = 0; ///< probability of "off target" at this look if the truth sat on the target
     bool bhRejected = false;
+    double offThreshold = 0; ///< the threshold the state was judged with
+    double dispersion = 0;   ///< rho or phi the effective counts allow for (0: none)
+    /// For a per-match count judged on one match (too little data to judge the target): how
+    /// unusual this match alone would be for a team exactly on its target — P(a match this far
+    /// past it or further), negative binomial with the dispersion. NaN otherwise.
+    double matchTail = std::numeric_limits<double>::quiet_NaN();
 };
 
 /// A season of one squad up to the match in question: match dates in order and, per metric,
@@ -97,8 +144,18 @@ std::vector<ZoneStatus> computeStatus(const SeasonTallies& season, std::size_t f
                                       const std::vector<Window>& windows,
                                       const FlagSettings& settings);
 
-/// How many zones would be flagged off target by chance alone if every true value sat exactly
-/// on its target: the sum of `chanceOff` over zones that have a target and enough data.
+/// How many zones would be flagged off target by chance alone at this look if every true value
+/// sat exactly on its target: the sum of `chanceOff` over zones that have a target and enough
+/// data.
 double expectedChanceFlags(const std::vector<ZoneStatus>& statuses);
+
+/// The season's figure: how many of these zones chance alone would flag off target at least
+/// once in a season of `settings.seasonMatches` looks, bounded by the alarm budget (the sum
+/// over judged zones of min(1, looks·chanceOff), each at most the series' alarm share).
+double seasonChanceFlags(const std::vector<ZoneStatus>& statuses, const FlagSettings& settings,
+                         int seriesWithTargets);
+
+/// The number of (metric, zone) series with a target in force on `date`, across the board.
+int seriesWithTargets(const std::vector<Target>& targets, const std::string& date);
 
 } // namespace pitchloop::model

@@ -98,6 +98,10 @@ nlohmann::json statusJson(const ZoneStatus& s) {
     put("high", s.interval.high);
     put("p_miss", s.pMiss);
     put("p_value", s.pValue);
+    put("effective_num", s.sum.effNum);
+    put("effective_den", s.sum.effDen);
+    put("dispersion", s.dispersion);
+    put("match_tail", s.matchTail);
     if (s.target) {
         j["target"] = {{"direction", toString(s.target->direction)},
                        {"value", s.target->value},
@@ -107,6 +111,7 @@ nlohmann::json statusJson(const ZoneStatus& s) {
                        {"effective_from", s.target->effectiveFrom}};
         j["chance_off"] = s.chanceOff;
         j["bh_rejected"] = s.bhRejected;
+        j["off_threshold"] = s.offThreshold;
     } else {
         j["target"] = nullptr;
     }

@@ -184,7 +184,10 @@ int StatusVerbs::runStatus(ClubRepository& repo, std::ostream& out, std::ostream
         j["season"] = run->season;
         j["grid"] = grid.name();
         j["settings"] = {{"level", settings.level},
-                         {"off_threshold", settings.offThreshold},
+                         {"off_threshold", statuses.empty() ? settings.offThreshold : statuses.front().offThreshold},
+                         {"false_flags_per_season", settings.falseFlagsPerSeason},
+                         {"season_matches", settings.seasonMatches},
+                         {"match_variation", settings.matchVariation},
                          {"watch_threshold", settings.watchThreshold},
                          {"window", settings.window.name()},
                          {"fdr", settings.fdr},
@@ -254,7 +257,12 @@ int StatusVerbs::runDebrief(ClubRepository& repo, std::ostream& out, std::ostrea
                 ? c->focal + 1 - static_cast<std::size_t>(settings.window.n)
                 : 0;
         out << "Judged over " << settings.window.name() << " (" << c->tallies.matchIds[first]
-            << " … " << m.id << "), off target when P(miss) ≥ " << num(settings.offThreshold)
+            << " … " << m.id << "), off target when P(miss) ≥ " << num(d.offThreshold)
+            << (settings.falseFlagsPerSeason > 0
+                    ? " (about " + num(settings.falseFlagsPerSeason) + " false flag" +
+                          (settings.falseFlagsPerSeason == 1 ? "" : "s") + " a season across " +
+                          std::to_string(d.seriesWithTargets) + " targets)"
+                    : std::string())
             << (settings.fdr ? ", with Benjamini–Hochberg at q = " + num(settings.fdrQ) : "")
             << "; intervals at " << num(100 * settings.level) << " %.\n\n";
         auto line = [&](const DebriefItem& item, bool markNew) {
@@ -289,13 +297,15 @@ int StatusVerbs::runDebrief(ClubRepository& repo, std::ostream& out, std::ostrea
         section("Off target in this match alone", d.slippedInMatch, false);
         if (!d.previousMatchId.empty())
             section("Recovered since " + d.previousMatchId, d.recovered, false);
-        section("Watch", d.watched, false);
-        char chance[200];
+        section("Likely off or close to the line", d.watched, false);
+        char chance[400];
         std::snprintf(chance, sizeof chance,
                       "%d zones with targets judged over %s (%d more have too little data). If "
-                      "every true value sat exactly on its target, chance alone would flag about "
-                      "%.1f of them off target.\n",
-                      d.judged, settings.window.name().c_str(), d.tooLittleData, d.chanceFlags);
+                      "every true value sat exactly on its target, chance alone would flag at most "
+                      "about %.1f of them off target at some point this season (%.2f at this one "
+                      "look).\n",
+                      d.judged, settings.window.name().c_str(), d.tooLittleData,
+                      d.seasonChanceFlags, d.chanceFlags);
         out << chance;
         out << "Slips are evidence for the staff to weigh, not verdicts; see docs/statistics.md.\n";
     }
@@ -382,12 +392,20 @@ int StatusVerbs::runSettings(ClubRepository& repo, std::ostream& out, std::ostre
         } else if (m_key == "interval") {
             if (m_value != "wilson" && m_value != "jeffreys") return bad("expected wilson or jeffreys");
             f.rateInterval = m_value == "jeffreys" ? IntervalMethod::Jeffreys : IntervalMethod::Wilson;
-        } else if (m_key == "fdr") {
+        } else if (m_key == "fdr" || m_key == "match_variation") {
             if (m_value != "on" && m_value != "off") return bad("expected on or off");
-            f.fdr = m_value == "on";
+            (m_key == "fdr" ? f.fdr : f.matchVariation) = m_value == "on";
+        } else if (m_key == "false_flags_per_season") {
+            if (!number || *number < 0 || *number > 100)
+                return bad("expected a number from 0 (no season budget: off_threshold applies) to 100");
+            f.falseFlagsPerSeason = *number;
+        } else if (m_key == "season_matches") {
+            if (!number || *number < 1 || *number > 120 || *number != std::floor(*number))
+                return bad("expected a whole number of matches from 1 to 120");
+            f.seasonMatches = static_cast<int>(*number);
         } else {
             return bad("unknown setting (level, off_threshold, watch_threshold, window, interval, "
-                       "fdr, fdr_q)");
+                       "fdr, fdr_q, false_flags_per_season, season_matches, match_variation)");
         }
         repo.saveFlagSettings(f);
     }
@@ -397,8 +415,14 @@ int StatusVerbs::runSettings(ClubRepository& repo, std::ostream& out, std::ostre
         << "interval         " << (f.rateInterval == IntervalMethod::Jeffreys ? "jeffreys" : "wilson")
         << "   (for rates; counts use the exact Poisson interval)\n"
         << "window           " << f.window.name() << "   (the window a debrief judges)\n"
-        << "off_threshold    " << num(f.offThreshold) << "   (P(miss) for off target)\n"
-        << "watch_threshold  " << num(f.watchThreshold) << "   (P(wrong side of the watch line))\n"
+        << "false_flags_per_season " << num(f.falseFlagsPerSeason)
+        << "   (about this many false off-target flags a season across the board; 0: use off_threshold)\n"
+        << "season_matches   " << f.seasonMatches << "   (matches a season: the looks the budget covers)\n"
+        << "off_threshold    " << num(f.offThreshold) << "   (P(miss) for off target"
+        << (f.falseFlagsPerSeason > 0 ? ", used only with no season budget)\n" : ")\n")
+        << "match_variation  " << (f.matchVariation ? "on" : "off")
+        << "   (allow for match-to-match variation, estimated from the club's matches)\n"
+        << "watch_threshold  " << num(f.watchThreshold) << "   (P(short of the watch line) for close to the line)\n"
         << "fdr              " << (f.fdr ? "on" : "off") << "   (Benjamini–Hochberg on off-target flags)\n"
         << "fdr_q            " << num(f.fdrQ) << "\n";
     return kExitOk;

@@ -86,7 +86,8 @@ QString verdictWord(const std::string& verdict) {
 QString stateText(FlagState state) {
     switch (state) {
     case FlagState::OnTarget: return QStringLiteral("On target");
-    case FlagState::Watch: return QStringLiteral("Watch");
+    case FlagState::CloseToLine: return QStringLiteral("Close to the line");
+    case FlagState::LikelyOff: return QStringLiteral("Likely off");
     case FlagState::OffTarget: return QStringLiteral("Slipped");
     case FlagState::TooLittleData: return QStringLiteral("Too little data");
     case FlagState::NoTarget: return QStringLiteral("No target");

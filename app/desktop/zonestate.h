@@ -14,13 +14,14 @@ class ZoneState : public QObject {
     QML_ELEMENT
     QML_UNCREATABLE("ZoneState only names the states of a zone")
 public:
-    enum Value { NoTarget, OnTarget, Watch, Slipped, TooLittleData };
+    enum Value { NoTarget, OnTarget, CloseToLine, Slipped, TooLittleData, LikelyOff };
     Q_ENUM(Value)
 
     static constexpr Value from(model::FlagState s) {
         switch (s) {
         case model::FlagState::OnTarget: return OnTarget;
-        case model::FlagState::Watch: return Watch;
+        case model::FlagState::CloseToLine: return CloseToLine;
+        case model::FlagState::LikelyOff: return LikelyOff;
         case model::FlagState::OffTarget: return Slipped;
         case model::FlagState::TooLittleData: return TooLittleData;
         case model::FlagState::NoTarget: return NoTarget;

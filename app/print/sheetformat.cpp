@@ -87,8 +87,10 @@ std::string stateText(FlagState state) {
     switch (state) {
     case FlagState::OnTarget:
         return "on target";
-    case FlagState::Watch:
-        return "watch";
+    case FlagState::CloseToLine:
+        return "close to the line";
+    case FlagState::LikelyOff:
+        return "likely off, not yet certain";
     case FlagState::OffTarget:
         return "off target";
     case FlagState::TooLittleData:

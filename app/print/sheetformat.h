@@ -26,7 +26,7 @@ std::string probabilityText(double p);
 std::string zoneText(int band, int lane);
 /// "the last 5 matches", "this match alone", "the season so far", "the EWMA (λ 0.3)".
 std::string windowText(const model::Window& window);
-/// "on target", "watch", "off target", "too little data", "no target".
+/// "on target", "close to the line", "likely off, not yet certain", "off target", "too little data", "no target".
 std::string stateText(model::FlagState state);
 /// "1–2 L" from our side's point of view; empty without a score.
 std::string scoreText(const std::optional<int>& us, const std::optional<int>& them);

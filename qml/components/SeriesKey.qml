@@ -86,7 +86,8 @@ Column {
         Repeater {
             model: [
                 { state: ZoneState.Slipped, name: qsTr("Slipped") },
-                { state: ZoneState.Watch, name: qsTr("Watch") },
+                { state: ZoneState.LikelyOff, name: qsTr("Likely off") },
+                { state: ZoneState.CloseToLine, name: qsTr("Close to the line") },
                 { state: ZoneState.OnTarget, name: qsTr("On target") },
                 { state: ZoneState.TooLittleData, name: qsTr("Too little data") }
             ]

@@ -3,21 +3,23 @@ import QtQuick.Shapes
 import Pitchloop
 
 // The shape of a zone state, so that states read without colour: a diamond for slipped, a
-// triangle for watch, a disc for on target, a ring for too little data; nothing without a
-// target. Drawn in a 16-unit box with a dark casing so it shows on any fill.
+// downward triangle for likely off, a triangle for close to the line, a disc for on target, a
+// ring for too little data; nothing without a target. Drawn in a 16-unit box with a dark casing so it shows on any fill.
 Item {
     id: root
 
     property int zoneState: ZoneState.NoTarget
     property real size: 16
 
-    // Path data by ZoneState value: NoTarget, OnTarget, Watch, Slipped, TooLittleData.
+    // Path data by ZoneState value: NoTarget, OnTarget, CloseToLine, Slipped, TooLittleData,
+    // LikelyOff.
     readonly property var paths: [
         "",
         "M 2 8 A 6 6 0 1 0 14 8 A 6 6 0 1 0 2 8 Z",
         "M 8 1.2 L 15 14.2 L 1 14.2 Z",
         "M 8 0.8 L 15.2 8 L 8 15.2 L 0.8 8 Z",
-        "M 3 8 A 5 5 0 1 0 13 8 A 5 5 0 1 0 3 8 Z"
+        "M 3 8 A 5 5 0 1 0 13 8 A 5 5 0 1 0 3 8 Z",
+        "M 1 1.8 L 15 1.8 L 8 14.8 Z"
     ]
     readonly property bool ring: zoneState === ZoneState.TooLittleData
 

@@ -72,13 +72,15 @@ QtObject {
     // Zone states (Okabe–Ito colours); shapes are drawn by StateMarker.
     readonly property color slipped: "#d55e00"
     readonly property color watch: "#e69f00"
+    readonly property color likelyOff: "#cc79a7"
     readonly property color onTarget: "#009e73"
     readonly property color tooLittleData: "#6f7782"
 
     function stateColour(state: int): color {
         switch (state) {
         case ZoneState.Slipped: return slipped
-        case ZoneState.Watch: return watch
+        case ZoneState.CloseToLine: return watch
+        case ZoneState.LikelyOff: return likelyOff
         case ZoneState.OnTarget: return onTarget
         case ZoneState.TooLittleData: return tooLittleData
         default: return textMuted

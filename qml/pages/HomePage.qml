@@ -198,7 +198,7 @@ Page {
                     visible: overview.hasTargets
                     spacing: Theme.margin
                     FigureTile { value: overview.slippedCount; caption: qsTr("slipped"); zoneState: ZoneState.Slipped }
-                    FigureTile { value: overview.watchCount; caption: qsTr("on watch"); zoneState: ZoneState.Watch }
+                    FigureTile { value: overview.watchCount; caption: qsTr("on watch"); zoneState: ZoneState.CloseToLine }
                     FigureTile { value: overview.recoveredCount; caption: qsTr("back on target"); zoneState: ZoneState.OnTarget }
                 }
                 Label {

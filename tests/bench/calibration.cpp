@@ -205,7 +205,11 @@ int main(int argc, char** argv) {
     Target defaultTarget = target;
     defaultTarget.minSample = defaultMinSample(MetricKind::Rate);
 
-    const FlagSettings defaults{};
+    // This older study sweeps fixed thresholds on pure binomial noise (no match-to-match
+    // variation, no season budget); the variation study is pitchloop_variation_study.
+    FlagSettings defaults{};
+    defaults.matchVariation = false;
+    defaults.falseFlagsPerSeason = 0;
     const auto windows = studyWindows();
     FlagSettings sweep = defaults;
     sweep.fdr = false;
@@ -258,7 +262,8 @@ int main(int argc, char** argv) {
                          char& detected) {
         switch (state) {
         case FlagState::OnTarget: ++c.on; break;
-        case FlagState::Watch: ++c.watch; break;
+        case FlagState::CloseToLine:
+        case FlagState::LikelyOff: ++c.watch; break;
         case FlagState::OffTarget: ++c.off; break;
         default: ++c.little; break;
         }
@@ -269,7 +274,9 @@ int main(int argc, char** argv) {
         }
         if (scenario == DropS && afterChange && state != FlagState::TooLittleData) {
             ++c.dropWindowLooks;
-            if (state == FlagState::OffTarget || state == FlagState::Watch) ++c.dropWindowWarned;
+            if (state == FlagState::OffTarget || state == FlagState::LikelyOff ||
+                state == FlagState::CloseToLine)
+                ++c.dropWindowWarned;
         }
     };
 

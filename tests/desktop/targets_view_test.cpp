@@ -182,7 +182,7 @@ void TargetsViewTest::lastSeasonIsTheModelsSeasonSum() {
             std::vector<model::ZoneTally> series;
             for (const auto& match : tallies) series.push_back(match[static_cast<std::size_t>(i)]);
             const model::WindowSum sum = model::windowSum(series, series.size() - 1,
-                                                          model::Window{model::Window::Kind::Season, 0, 0.3}, 0);
+                                                          model::Window{model::Window::Kind::Season, 0, 0.3});
             QCOMPARE(sum.matches, 4);
             wholeNum += sum.num;
             wholeDen += sum.den;

@@ -310,6 +310,9 @@ TEST_CASE("flag settings have documented defaults and are saved", "[repository]"
         CHECK(f.watchThreshold == 0.50);
         CHECK_FALSE(f.fdr);
         CHECK(f.fdrQ == 0.10);
+        CHECK(f.falseFlagsPerSeason == 1);
+        CHECK(f.seasonMatches == 38);
+        CHECK(f.matchVariation);
 
         FlagSettings changed;
         changed.level = 0.8;
@@ -319,6 +322,9 @@ TEST_CASE("flag settings have documented defaults and are saved", "[repository]"
         changed.watchThreshold = 0.6;
         changed.fdr = true;
         changed.fdrQ = 0.05;
+        changed.falseFlagsPerSeason = 3;
+        changed.seasonMatches = 30;
+        changed.matchVariation = false;
         repo.saveFlagSettings(changed);
         const FlagSettings back = repo.flagSettings();
         CHECK(back.level == 0.8);
@@ -328,13 +334,16 @@ TEST_CASE("flag settings have documented defaults and are saved", "[repository]"
         CHECK(back.watchThreshold == 0.6);
         CHECK(back.fdr);
         CHECK(back.fdrQ == 0.05);
+        CHECK(back.falseFlagsPerSeason == 3);
+        CHECK(back.seasonMatches == 30);
+        CHECK_FALSE(back.matchVariation);
 
         // Saved again with other values: the rows are updated, not added.
         changed.window = Window{Window::Kind::LastN, 8, 0.3};
         changed.fdr = false;
         repo.saveFlagSettings(changed);
     }
-    CHECK(count(club.file, "SELECT count(*) FROM setting WHERE key LIKE 'flags.%'") == 7);
+    CHECK(count(club.file, "SELECT count(*) FROM setting WHERE key LIKE 'flags.%'") == 10);
     ClubRepository reopened(club.file);
     const FlagSettings f = reopened.flagSettings();
     CHECK(f.window.name() == "last8");

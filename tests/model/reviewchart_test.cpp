@@ -29,17 +29,22 @@ Focus focusOn(const std::string& metric, std::vector<Zone> zones, const std::str
     f.metric = metric;
     f.zones = std::move(zones);
     f.startDate = start;
-    f.openedAfterMatch = "M3";
+    f.openedAfterMatch = ""; // opened without a match's flag: no window to leave out
     f.openedBy = "R. Tamsin";
     return f;
 }
+
+const ReviewOptions pure{false, {}};
 
 } // namespace
 
 TEST_CASE("a review's p-chart follows the NIST/SEMATECH p-chart formulas", "[review][chart]") {
     // NIST/SEMATECH e-Handbook of Statistical Methods, §6.3.3.2 Proportions control charts:
-    // centre p̄ = Σx/Σn over the baseline, limits p̄ ± 3·sqrt(p̄(1 − p̄)/n_i) for each sample's
-    // own n_i, clipped to [0, 1]. The baseline is the before window; the focus sums two zones.
+    // centre p̄ = Σx/Σn over the baseline, limits p̄ ± 3·sqrt(p̃(1 − p̃)/n_i) for each sample's
+    // own n_i, clipped to [0, 1] — with the spread's p̃ = (Σx + ½)/(Σn + 1), the baseline
+    // smoothed by half a success so that a baseline of 0 % or 100 % still has limits of some
+    // width (the handbook's p̄ when Σn is large). No match-to-match variation here (the
+    // beta-binomial spread is checked in variation_test.cpp). The focus sums two zones.
     SeasonFixture s(ZoneGrid{}, kDates);
     // Before (M1–M3), zones (3,3) + (3,4): 12/20 + 8/20, 30/40 + 0/0, 5/10 + 5/10.
     s.set("pass_completion", 0, 3, 3, 12, 20);
@@ -53,15 +58,17 @@ TEST_CASE("a review's p-chart follows the NIST/SEMATECH p-chart formulas", "[rev
     s.set("pass_completion", 5, 3, 3, 25, 25);
     s.set("pass_completion", 6, 3, 4, 1, 4);
     const auto result = computeReview(focusOn("pass_completion", {{3, 3}, {3, 4}}, "2026-08-25"),
-                                      builtin("pass_completion"), s.season, s.grid, 3, 4);
+                                      builtin("pass_completion"), s.season, s.grid, 3, 4, 0.95,
+                                      0.3, pure);
     REQUIRE(result.review);
     const Review& r = *result.review;
+    const double pSmooth = 60.5 / 101;
     const std::vector<long> x{20, 30, 10, 30, 2, 25, 1}, n{40, 40, 20, 35, 10, 25, 4};
     const double pBar = (20.0 + 30 + 10) / (40 + 40 + 20); // Σx/Σn of the before window = 0.6
     REQUIRE(r.chart.size() == x.size());
     for (std::size_t i = 0; i < x.size(); ++i) {
         INFO("match M" << i + 1);
-        const double half = 3 * std::sqrt(pBar * (1 - pBar) / static_cast<double>(n[i]));
+        const double half = 3 * std::sqrt(pSmooth * (1 - pSmooth) / static_cast<double>(n[i]));
         const double p = static_cast<double>(x[i]) / static_cast<double>(n[i]);
         CHECK(r.chart[i].after == (i >= 3));
         CHECK_THAT(r.chart[i].value, WithinAbs(p, 1e-12));
@@ -71,8 +78,8 @@ TEST_CASE("a review's p-chart follows the NIST/SEMATECH p-chart formulas", "[rev
         CHECK(r.chart[i].above == (p > std::min(1.0, pBar + half)));
         CHECK(r.chart[i].below == (p < std::max(0.0, pBar - half)));
     }
-    // By hand: n = 35 → 0.6 ± 0.2484, 30/35 = 0.857 above; n = 10 → 0.6 ± 0.4648, upper
-    // clipped to 1, 0.2 inside; n = 25 → ±0.2939, 1.0 above; n = 4 → ±0.7348, both clipped.
+    // By hand: n = 35 → 0.6 ± 0.2485, 30/35 = 0.857 above; n = 10 → 0.6 ± 0.4650, upper
+    // clipped to 1, 0.2 inside; n = 25 → ±0.2941, 1.0 above; n = 4 → ±0.7352, both clipped.
     CHECK(r.chart[3].above);
     CHECK(r.chart[4].ucl == 1.0);
     CHECK_FALSE(r.chart[4].below);
@@ -92,16 +99,17 @@ TEST_CASE("a review's p-chart follows the NIST/SEMATECH p-chart formulas", "[rev
 }
 
 TEST_CASE("readChart sides follow the metric's better side on a u-chart", "[review][chart]") {
-    // Counts a match (lower is better): before 20, 22, 18 → ū = 20, limits 20 ± 3·√20
-    // = [6.584, 33.416] (the u-chart of the same handbook section's Poisson counterpart).
+    // Counts a match (lower is better): before 20, 22, 18 → ū = 20, limits 20 ± 3·√ũ with
+    // ũ = 60.5/3 (smoothed as above) = [6.528, 33.472] (the Poisson counterpart of the same
+    // handbook section's chart).
     SeasonFixture s(ZoneGrid{}, kDates);
     const long counts[] = {20, 22, 18, 5, 35, 20, 19};
     for (std::size_t i = 0; i < 7; ++i) s.set("pre_shot_passes_against", i, 2, 5, counts[i], 1);
     const auto result =
         computeReview(focusOn("pre_shot_passes_against", {{2, 5}}, "2026-08-25"),
-                      builtin("pre_shot_passes_against"), s.season, s.grid, 3, 4);
+                      builtin("pre_shot_passes_against"), s.season, s.grid, 3, 4, 0.95, 0.3, pure);
     REQUIRE(result.review);
-    CHECK_THAT(result.review->chart[0].lcl, WithinAbs(20 - 3 * std::sqrt(20.0), 1e-12));
+    CHECK_THAT(result.review->chart[0].lcl, WithinAbs(20 - 3 * std::sqrt(60.5 / 3), 1e-12));
     const ChartReading c = readChart(*result.review);
     CHECK(c.afterOnBetterSide == 1); // 5 below the lower limit
     CHECK(c.afterOnWorseSide == 1);  // 35 above the upper limit

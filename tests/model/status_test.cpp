@@ -24,6 +24,16 @@ const Window kSeason{Window::Kind::Season, 0, 0.3};
 Window lastN(int n) { return {Window::Kind::LastN, n, 0.3}; }
 Window ewma(double lambda) { return {Window::Kind::Ewma, 0, lambda}; }
 
+/// Pure binomial / Poisson noise and the fixed off threshold 0.999: the hand-worked and scipy
+/// numbers of the cases below assume no match-to-match variation (tested on its own further
+/// down and in variation_test.cpp) and no season budget.
+FlagSettings pure() {
+    FlagSettings s;
+    s.matchVariation = false;
+    s.falseFlagsPerSeason = 0;
+    return s;
+}
+
 /// Relative closeness for values computed two ways (Boost here, scipy there).
 bool close(double got, double expected, double rel = 1e-9) {
     return std::fabs(got - expected) <= rel * std::fabs(expected);
@@ -39,7 +49,7 @@ SeasonFixture oneZoneRate(long x, long n) {
 std::vector<ZoneStatus> statusAt(const SeasonFixture& f, std::size_t focal,
                                  const std::vector<std::string>& metricIds,
                                  const std::vector<Target>& targets,
-                                 const std::vector<Window>& windows, const FlagSettings& s = {}) {
+                                 const std::vector<Window>& windows, const FlagSettings& s = pure()) {
     std::vector<MetricSpec> metrics;
     for (const auto& id : metricIds) metrics.push_back(builtin(id));
     return computeStatus(f.season, focal, metrics, targets, f.grid, windows, s);
@@ -86,7 +96,7 @@ TEST_CASE("windowSum adds a zone's tallies over the match, the last N or the sea
     const std::vector<ZoneTally> series{{3, 10}, {5, 12}, {0, 0}, {7, 9}, {4, 6}};
     auto check = [&](std::size_t focal, const Window& w, double num, double den, int matches) {
         INFO("focal " << focal << " window " << w.name());
-        const WindowSum s = windowSum(series, focal, w, 0.5);
+        const WindowSum s = windowSum(series, focal, w);
         CHECK(s.num == num);
         CHECK(s.den == den);
         CHECK(s.matches == matches);
@@ -104,15 +114,16 @@ TEST_CASE("windowSum adds a zone's tallies over the match, the last N or the sea
     check(3, lastN(2), 7, 9, 2);
     // Out of range: nothing.
     check(5, kSeason, 0, 0, 0);
-    CHECK(windowSum({}, 0, kSeason, 0.5).matches == 0);
+    CHECK(windowSum({}, 0, kSeason).matches == 0);
 }
 
-TEST_CASE("the EWMA window reproduces the NIST/SEMATECH EWMA example", "[status]") {
+TEST_CASE("the EWMA window weighs real matches only and matches the NIST recursion", "[status]") {
     // NIST/SEMATECH e-Handbook of Statistical Methods §6.3.2.4 (REFERENCES.md): λ = 0.3,
-    // EWMA_0 = 50, data 52.0 47.0 … 52.1 → EWMA 50.60 49.52 … 51.99 (published to 2
-    // decimals; recursion z_t = λ x_t + (1 − λ) z_{t−1} seeded with EWMA_0).
-    // Tallies are whole numbers, so the data enter as tenths: a per-match count of 10·x in
-    // one match (den 1) and a seed of 500. The EWMA is linear, so num/den is 10·z_t.
+    // EWMA_0 = 50, data 52.0 47.0 … 52.1 → EWMA 50.60 49.52 … 51.99 (recursion seeded with
+    // EWMA_0). The window's EWMA has no seed (a prior is used once, in the evidence): its value
+    // is Σ λ(1 − λ)^age·x / Σ λ(1 − λ)^age, which is the handbook's recursion with the seed's
+    // weight (1 − λ)^t taken out: (z_t − (1 − λ)^t·z_0) / (1 − (1 − λ)^t). Tallies are whole
+    // numbers, so the data enter as tenths (a per-match count of 10·x, den 1).
     const std::vector<double> data{52.0, 47.0, 53.0, 49.3, 50.1, 47.0, 51.0, 50.1, 51.2, 50.5,
                                    49.6, 47.6, 49.9, 51.3, 47.8, 51.2, 52.6, 52.4, 53.6, 52.1};
     const std::vector<double> published{50.60, 49.52, 50.56, 50.18, 50.16, 49.21, 49.75,
@@ -123,51 +134,67 @@ TEST_CASE("the EWMA window reproduces the NIST/SEMATECH EWMA example", "[status]
     const auto z = stats::ewmaSeries(data, 0.3, 50.0);
     for (std::size_t t = 0; t < data.size(); ++t) {
         INFO("match " << t + 1);
-        const WindowSum s = windowSum(series, t, ewma(0.3), 500.0);
+        CHECK(z[t] == Approx(published[t]).margin(0.005)); // the recursion itself
+        const WindowSum s = windowSum(series, t, ewma(0.3));
         REQUIRE(s.den > 0);
-        const double value = s.num / s.den / 10;
-        CHECK(value == Approx(published[t]).margin(0.005)); // half a unit in the 2nd decimal
-        CHECK(value == Approx(z[t]).epsilon(1e-12));       // the same recursion, unrounded
+        const double seedWeight = std::pow(0.7, static_cast<double>(t + 1));
+        const double unseeded = (z[t] - seedWeight * 50.0) / (1 - seedWeight);
+        CHECK(s.num / s.den / 10 == Approx(unseeded).epsilon(1e-12));
         CHECK(s.matches == static_cast<int>(t + 1));
     }
-    // By hand for the first match: z_1 = 0.3·52.0 + 0.7·50 = 50.60.
-    const WindowSum first = windowSum(series, 0, ewma(0.3), 500.0);
-    CHECK(first.num / first.den == Approx(506.0).epsilon(1e-12));
+    // The first match alone is its own value: no pull towards a seed.
+    const WindowSum first = windowSum(series, 0, ewma(0.3));
+    CHECK(first.num / first.den == Approx(520.0).epsilon(1e-12));
 }
 
 TEST_CASE("the EWMA's effective counts follow Kish's factor", "[status]") {
-    SECTION("one match: weights 0.3 on the match and 0.7 on the seed") {
-        // Σw·d = 0.3 + 0.7 = 1; Σw²·d = 0.09 + 0.49 = 0.58; scale = 1/0.58.
-        const WindowSum s = windowSum({{4, 1}}, 0, ewma(0.3), 2.0);
-        CHECK(s.den == Approx(1 / 0.58).epsilon(1e-12));
-        // Before scaling num = 0.3·4 + 0.7·2 = 2.6.
-        CHECK(s.num == Approx(2.6 / 0.58).epsilon(1e-12));
-        CHECK(s.num / s.den == Approx(2.6).epsilon(1e-12));
+    SECTION("one match is worth exactly its own chances") {
+        // Σw·d = 0.3·20; Σw²·d = 0.09·20; scale = 1/0.3: the match's own 2 of 20.
+        const WindowSum s = windowSum({{2, 20}}, 0, ewma(0.3));
+        CHECK(s.den == Approx(20).epsilon(1e-12));
+        CHECK(s.num == Approx(2).epsilon(1e-12));
+        CHECK(s.effDen == Approx(20).epsilon(1e-12));
     }
     SECTION("a long per-match count series tends to (2 − λ)/λ matches") {
-        // Σw = 1 and Σw² → λ²/(1 − (1 − λ)²) = λ/(2 − λ), so den = Σw/Σw² → (2 − λ)/λ:
+        // Σw → 1 and Σw² → λ²/(1 − (1 − λ)²) = λ/(2 − λ), so den = Σw/Σw² → (2 − λ)/λ:
         // 1.7/0.3 = 5.667 for λ = 0.3, 1.8/0.2 = 9 for λ = 0.2, 1 for λ = 1.
         const std::vector<ZoneTally> series(300, ZoneTally{3, 1});
         for (double lambda : {0.3, 0.2, 1.0}) {
             INFO("λ = " << lambda);
-            const WindowSum s = windowSum(series, series.size() - 1, ewma(lambda), 3.0);
+            const WindowSum s = windowSum(series, series.size() - 1, ewma(lambda));
             CHECK(s.den == Approx((2 - lambda) / lambda).epsilon(1e-9));
             CHECK(s.num / s.den == Approx(3.0).epsilon(1e-12));
         }
-        // Ten matches at λ = 0.3: Σw² = 0.09·(1 − 0.49^10)/(1 − 0.49) + 0.49^10, closed form.
-        const double q2 = 0.49, sumW2 = 0.09 * (1 - std::pow(q2, 10)) / (1 - q2) + std::pow(q2, 10);
-        CHECK(windowSum(series, 9, ewma(0.3), 3.0).den == Approx(1 / sumW2).epsilon(1e-12));
+        // Ten matches at λ = 0.3, weights 0.3·0.7^k, k = 0..9: Σw = 1 − 0.7^10,
+        // Σw² = 0.09·(1 − 0.49^10)/(1 − 0.49).
+        const double sumW = 1 - std::pow(0.7, 10);
+        const double sumW2 = 0.09 * (1 - std::pow(0.49, 10)) / (1 - 0.49);
+        // den = Σw·d · (Σw·d / Σw²·d) = (Σw)² / Σw² for d = 1.
+        CHECK(windowSum(series, 9, ewma(0.3)).den == Approx(sumW * sumW / sumW2).epsilon(1e-12));
     }
-    SECTION("rates: the seed counts as a match of mean size") {
-        // 3/10 then 8/20, λ = 0.5, seed 0.5. Mean den = 15. Weights: 0.5 (match 2), 0.25
-        // (match 1), 0.25 (seed, a pseudo-match 0.5·15 of 15).
-        // num = 0.5·8 + 0.25·3 + 0.25·7.5 = 6.625; den = 0.5·20 + 0.25·10 + 0.25·15 = 16.25.
-        // Σw²·d = 0.25·20 + 0.0625·10 + 0.0625·15 = 6.5625; scale = 16.25/6.5625.
-        const WindowSum s = windowSum({{3, 10}, {8, 20}}, 1, ewma(0.5), 0.5);
-        const double scale = 16.25 / 6.5625;
-        CHECK(s.num == Approx(6.625 * scale).epsilon(1e-12));
-        CHECK(s.den == Approx(16.25 * scale).epsilon(1e-12));
-        CHECK(s.num / s.den == Approx(6.625 / 16.25).epsilon(1e-12));
+    SECTION("rates: a match with one chance weighs less than one with twenty") {
+        // 1/1 then 2/20, λ = 0.5: weights 0.5 (match 2), 0.25 (match 1).
+        // num = 0.5·2 + 0.25·1 = 1.25; den = 0.5·20 + 0.25·1 = 10.25 → value 0.1220, near the
+        // big match's 0.10 (an average of the two ratios would say 0.55).
+        // Σw²·d = 0.25·20 + 0.0625·1 = 5.0625; scale = 10.25/5.0625.
+        const WindowSum s = windowSum({{1, 1}, {2, 20}}, 1, ewma(0.5));
+        const double scale = 10.25 / 5.0625;
+        CHECK(s.num == Approx(1.25 * scale).epsilon(1e-12));
+        CHECK(s.den == Approx(10.25 * scale).epsilon(1e-12));
+        CHECK(s.num / s.den == Approx(1.25 / 10.25).epsilon(1e-12));
+    }
+    SECTION("after one match of 2/20 the EWMA claims 20 chances, not 34, and stays at 0.10") {
+        FlagSettings s = pure();
+        s.window = ewma(0.3);
+        SeasonFixture f(ZoneGrid::equal(1, 1), {"2026-08-08"});
+        f.set("pass_completion", 0, 1, 1, 2, 20);
+        const Target t = target("pass_completion", 1, 1, Direction::AtLeast, 0.45, 0.05, 30);
+        const auto all = computeStatus(f.season, 0, {builtin("pass_completion")}, {t}, f.grid,
+                                       {ewma(0.3)}, s);
+        const ZoneStatus& z = statusOf(all, "pass_completion", 1, 1, "ewma0.3");
+        CHECK(z.sum.den == Approx(20).epsilon(1e-12));
+        CHECK(z.value == Approx(0.10).epsilon(1e-12));
+        CHECK(z.state == FlagState::TooLittleData); // 20 < the minimum of 30
     }
 }
 
@@ -214,15 +241,16 @@ TEST_CASE("a rate zone gets its value, Wilson interval and evidence against the 
     CHECK(whole.sum.den == 40);
 }
 
-TEST_CASE("flag states: too little data, off target, watch and on target", "[status]") {
-    // pass_completion at least 0.8, watch margin 0.05, min sample 30; default settings
-    // (off when P(miss) ≥ 0.999, watch when P(p < 0.85) ≥ 0.5). Evidence from scipy:
+TEST_CASE("flag states: too little data, off, likely off, close to the line, on target", "[status]") {
+    // pass_completion at least 0.8, watch margin 0.05, min sample 30; off when P(miss) ≥
+    // 0.999, likely off when P(miss) ≥ 0.5, close to the line when P(p < 0.85) ≥ 0.5.
+    // Evidence from scipy:
     //   x/n    st.beta.cdf(0.8, x+.5, n-x+.5)   st.beta.cdf(0.85, x+.5, n-x+.5)
     //   20/25  0.52049                           0.76861   (but 25 < 30: too little data)
-    //   24/30  0.51862                           0.78606   (30 is enough: watch)
+    //   24/30  0.51862                           0.78606   (30 is enough: likely off)
     //   23/40  0.99944                           0.99999   off target
-    //   24/40  0.99827                           0.99995   watch (0.99827 < 0.999)
-    //   33/40  0.35943                           0.68580   watch: inside the margin
+    //   24/40  0.99827                           0.99995   likely off (0.99827 < 0.999)
+    //   33/40  0.35943                           0.68580   close to the line: inside the margin
     //   39/40  0.00050                           0.00482   on target
     const Target t = target("pass_completion", 1, 1, Direction::AtLeast, 0.8, 0.05, 30);
     struct Case {
@@ -232,10 +260,10 @@ TEST_CASE("flag states: too little data, off target, watch and on target", "[sta
     };
     const double nan = std::nan("");
     for (const Case& c : {Case{20, 25, FlagState::TooLittleData, nan},
-                          Case{24, 30, FlagState::Watch, 0.5186220566454827},
+                          Case{24, 30, FlagState::LikelyOff, 0.5186220566454827},
                           Case{23, 40, FlagState::OffTarget, 0.9994442003088474},
-                          Case{24, 40, FlagState::Watch, 0.9982739863995285},
-                          Case{33, 40, FlagState::Watch, 0.3594314330178428},
+                          Case{24, 40, FlagState::LikelyOff, 0.9982739863995285},
+                          Case{33, 40, FlagState::CloseToLine, 0.3594314330178428},
                           Case{39, 40, FlagState::OnTarget, 0.0004982808202382745}}) {
         INFO(c.x << "/" << c.n);
         const auto all = statusAt(oneZoneRate(c.x, c.n), 0, {"pass_completion"}, {t}, {kMatch});
@@ -250,7 +278,7 @@ TEST_CASE("flag states: too little data, off target, watch and on target", "[sta
     }
 
     SECTION("the off threshold is a setting: P(miss) ≥ threshold is off") {
-        FlagSettings lower;
+        FlagSettings lower = pure();
         lower.offThreshold = 0.998; // 24/40 has P(miss) 0.99827
         const auto all = statusAt(oneZoneRate(24, 40), 0, {"pass_completion"}, {t}, {kMatch}, lower);
         CHECK(statusOf(all, "pass_completion", 1, 1, "match").state == FlagState::OffTarget);
@@ -320,11 +348,14 @@ TEST_CASE("every window of a status ends at the focal match", "[status]") {
     const auto at1 = statusAt(f, 1, {"pass_completion"}, {t}, {kSeason});
     CHECK(statusOf(at1, "pass_completion", 1, 1, "season").sum.num == 65);
     CHECK(statusOf(at1, "pass_completion", 1, 1, "season").sum.matches == 2);
-    // The EWMA starts from the target (0.8) when there is one.
+    // The EWMA is not pulled towards the target: after one match it is that match's 30/40.
     const auto e = statusAt(f, 0, {"pass_completion"}, {t}, {ewma(0.3)});
-    // z_1 = 0.3·0.75 + 0.7·0.8 = 0.785
-    CHECK(statusOf(e, "pass_completion", 1, 1, "ewma0.3").value == Approx(0.785).epsilon(1e-12));
-    // Without a target it starts from the season's value so far (30/40 = 0.75): z_1 = 0.75.
+    CHECK(statusOf(e, "pass_completion", 1, 1, "ewma0.3").value == Approx(0.75).epsilon(1e-12));
+    // After three: (0.3·23 + 0.21·35 + 0.147·30) / (0.3·40 + 0.21·40 + 0.147·40) = 18.66/26.28.
+    const auto e2 = statusAt(f, 2, {"pass_completion"}, {t}, {ewma(0.3)});
+    CHECK(statusOf(e2, "pass_completion", 1, 1, "ewma0.3").value ==
+          Approx(18.66 / 26.28).epsilon(1e-12));
+    // Without a target the same.
     const auto noTarget = statusAt(f, 0, {"pass_completion"}, {}, {ewma(0.3)});
     CHECK(statusOf(noTarget, "pass_completion", 1, 1, "ewma0.3").value == Approx(0.75).epsilon(1e-12));
 }
@@ -378,7 +409,7 @@ TEST_CASE("per-match counts use Gamma evidence over the matches of the window", 
     CHECK(w.sum.den == 3);
     CHECK(w.value == 7.0);
     CHECK(close(w.pMiss, 0.9333060226718153));
-    CHECK(w.state == FlagState::Watch);
+    CHECK(w.state == FlagState::LikelyOff);
     // In the match window alone: 9 in 1 match.
     const ZoneStatus& wm = statusOf(all, "pre_shot_passes_against", 0, 0, "match");
     CHECK(wm.sum.num == 9);
@@ -448,13 +479,13 @@ TEST_CASE("chance of an off-target flag and p-values agree with scipy", "[status
         const auto all = statusAt(f, 0, {"shot_after_loss"}, {t}, {kMatch});
         const ZoneStatus& s = statusOf(all, "shot_after_loss", 1, 1, "match");
         CHECK(close(s.pMiss, 0.9985341370472325));
-        CHECK(s.state == FlagState::Watch);
+        CHECK(s.state == FlagState::LikelyOff);
         CHECK(close(s.pValue, 0.0023732631384098322, 1e-8));
         CHECK(close(s.chanceOff, 0.0008894023558947131, 1e-8));
     }
 }
 
-TEST_CASE("with fdr on, off-target zones that Benjamini–Hochberg does not reject are watched",
+TEST_CASE("with fdr on, off-target zones that Benjamini–Hochberg does not reject are likely off",
           "[status]") {
     // pass_completion at least 0.5 in all 30 zones of the 6 × 5 grid, one match, off when
     // P(miss) ≥ 0.95. Zone (1,1): 10/50; zone (1,2): 19/50; the other 28: 40/50.
@@ -473,7 +504,7 @@ TEST_CASE("with fdr on, off-target zones that Benjamini–Hochberg does not reje
         }
     f.set("pass_completion", 0, 1, 1, 10, 50);
     f.set("pass_completion", 0, 1, 2, 19, 50);
-    FlagSettings s;
+    FlagSettings s = pure();
     s.offThreshold = 0.95;
     s.fdrQ = 0.1;
 
@@ -488,7 +519,7 @@ TEST_CASE("with fdr on, off-target zones that Benjamini–Hochberg does not reje
     s.fdr = true;
     const auto fdr = statusAt(f, 0, {"pass_completion"}, targets, {kMatch}, s);
     CHECK(statusOf(fdr, "pass_completion", 1, 1, "match").state == FlagState::OffTarget);
-    CHECK(statusOf(fdr, "pass_completion", 1, 2, "match").state == FlagState::Watch);
+    CHECK(statusOf(fdr, "pass_completion", 1, 2, "match").state == FlagState::LikelyOff);
     int off = 0, rejected = 0, onTarget = 0;
     for (const auto& z : fdr) {
         off += z.state == FlagState::OffTarget;
@@ -530,7 +561,7 @@ TEST_CASE("expectedChanceFlags counts only zones with a target and enough data",
     };
     const std::vector<ZoneStatus> all{zone(true, FlagState::OnTarget, 0.01),
                                       zone(true, FlagState::OffTarget, 0.02),
-                                      zone(true, FlagState::Watch, 0.04),
+                                      zone(true, FlagState::CloseToLine, 0.04),
                                       zone(true, FlagState::TooLittleData, 0.5),
                                       zone(false, FlagState::NoTarget, 0.25)};
     CHECK(expectedChanceFlags(all) == Approx(0.07).epsilon(1e-12));
