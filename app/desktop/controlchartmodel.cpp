@@ -4,6 +4,7 @@
 
 #include <QVariantMap>
 
+#include <algorithm>
 #include <cmath>
 
 namespace pitchloop::desktop {
@@ -16,10 +17,13 @@ void ControlChartModel::reset(const Review& review) {
     beginResetModel();
     m_points = review.chart;
     m_dates = review.before.dates;
+    m_dates.insert(m_dates.end(), review.trigger.dates.begin(), review.trigger.dates.end());
     m_dates.insert(m_dates.end(), review.after.dates.begin(), review.after.dates.end());
     m_kind = review.kind;
     m_better = review.better;
-    m_firstAfter = static_cast<int>(review.before.matchIds.size());
+    // The chart runs baseline, the flag's own matches, then after.
+    m_firstAfter = static_cast<int>(std::count_if(review.chart.begin(), review.chart.end(),
+                                                  [](const model::ChartPoint& p) { return !p.after; }));
     const ChartReading reading = readChart(review);
     m_axis = scaleDomain(m_kind, {reading.low, reading.high});
     m_axisLabels = scaleLabels(m_kind, m_axis);

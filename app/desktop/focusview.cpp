@@ -367,36 +367,65 @@ void FocusView::showReview(const Review& r, bool stored) {
                  kind == MetricKind::Count ? tr(" a match") : QString(), level,
                  intervalText(kind, w.interval));
     };
-    m_beforeText = window(tr("Before"), r.before);
+    m_beforeText = r.before.matchIds.empty()
+                       ? tr("Before · %1.").arg(qs(r.baselineNote))
+                       : window(tr("Before"), r.before) + tr(" — %1.").arg(qs(r.baselineNote));
     m_afterText = window(tr("After"), r.after);
-    if (kind == MetricKind::Rate)
-        m_changeText = tr("Change %1 points (%2, Newcombe: %3 to %4 points)")
-                           .arg(signedNumber(100 * r.difference, 1), level,
-                                signedNumber(100 * r.differenceInterval.low, 1),
-                                signedNumber(100 * r.differenceInterval.high, 1));
-    else
-        m_changeText = tr("Change %1%2 · after ÷ before = %3")
-                           .arg(signedNumber(r.difference, 2),
-                                kind == MetricKind::Count ? tr(" a match") : QString(),
-                                std::isnan(r.rateRatio) ? QStringLiteral("–")
-                                                        : QLocale().toString(r.rateRatio, 'f', 2));
-    QString test = qs(r.testName);
-    if (!test.isEmpty()) test[0] = test[0].toUpper();
-    m_testText = tr("%1: p = %2 two-sided, %3 one-sided for an improvement")
-                     .arg(test, pText(r.pTwoSided), pText(r.pImproved));
-    // Three decimals, but never a rounded certainty: 0.99977 reads "> 0.999", not "1.000".
-    const QString belief = std::isnan(r.probImproved) ? QStringLiteral("is unknown")
-                           : r.probImproved > 0.999   ? QStringLiteral("> 0.999")
-                           : r.probImproved < 0.001   ? QStringLiteral("< 0.001")
-                                                      : QStringLiteral("= ") + QLocale().toString(r.probImproved, 'f', 3);
-    m_beliefText = tr("P(the metric improved) %1 (Jeffreys priors)").arg(belief);
+    const bool rate = kind == MetricKind::Rate;
+    auto amount = [&](double v, int decimals) {
+        return rate ? tr("%1 points").arg(signedNumber(100 * v, decimals))
+                    : signedNumber(v, 2) + (kind == MetricKind::Count ? tr(" a match") : QString());
+    };
+    if (r.finding == ReviewFinding::NoBaseline) {
+        m_changeText = tr("No fair baseline, so no change can be measured.");
+    } else {
+        m_changeText = tr("Change %1. The untrained zones moved too; had this zone moved like them "
+                          "it would be at %2, so the training zone did %3 (%4 range %5 to %6).")
+                           .arg(amount(r.difference, 1), valueText(kind, r.expected),
+                                amount(r.effect, 1), level, amount(r.effectInterval.low, 1),
+                                amount(r.effectInterval.high, 1));
+    }
+    // One plain sentence for what the numbers can say, then how sure.
+    QString finding;
+    switch (r.finding) {
+    case ReviewFinding::ImprovedByMinChange:
+        finding = tr("Probably improved by at least %1 more than the untrained zones.").arg(amount(r.minChange, 0).remove(QLatin1Char('+')));
+        break;
+    case ReviewFinding::Improved:
+        finding = tr("Probably improved more than the untrained zones, but not surely by %1.").arg(amount(r.minChange, 0).remove(QLatin1Char('+')));
+        break;
+    case ReviewFinding::Worse: finding = tr("Probably worse than the untrained zones."); break;
+    case ReviewFinding::NoClearChange: finding = tr("No clear change beyond what the untrained zones did."); break;
+    case ReviewFinding::NoBaseline: finding = tr("Read against the target only."); break;
+    }
+    m_testText = finding + QLatin1Char(' ') +
+                 tr("A few matches cannot show that the drills caused a change: opponents, "
+                    "line-ups and luck vary too. The range allows for the usual swing from match "
+                    "to match.");
+    auto prob = [](double p) {
+        return std::isnan(p) ? QStringLiteral("unknown")
+               : p > 0.999   ? QStringLiteral("more than 99.9 %")
+               : p < 0.001   ? QStringLiteral("less than 0.1 %")
+                             : QLocale().toString(100 * p, 'f', 0) + QStringLiteral(" %");
+    };
+    QString belief;
+    if (r.finding != ReviewFinding::NoBaseline)
+        belief = tr("Chance it improved by at least %1: %2 (by anything: %3).")
+                     .arg(amount(r.minChange, 0).remove(QLatin1Char('+')), prob(r.probImprovedByMinChange),
+                          prob(r.probImproved));
+    if (r.target)
+        belief += (belief.isEmpty() ? QString() : QStringLiteral(" ")) +
+                  tr("Target %1 %2: chance the after matches meet it %3.")
+                      .arg(r.target->direction == Direction::AtLeast ? tr("at least") : tr("at most"),
+                           valueText(kind, r.target->value), prob(r.probAfterMeetsTarget));
+    m_beliefText = belief;
     m_trainingText = r.trainingMinutes
                          ? tr("Training: %1 %2.").arg(static_cast<int>(*r.trainingMinutes)).arg(qs(r.trainingNote))
                          : tr("Training: %1.").arg(qs(r.trainingNote));
     m_chart->reset(r);
     const ChartReading c = readChart(r);
-    m_chartTitle = tr("%1 · centre line and 3σ limits from the %2 matches before the start "
-                      "(NIST/SEMATECH e-Handbook §6.3.3.2)")
+    m_chartTitle = tr("%1 · centre line and limits from the %2 baseline matches, allowing for "
+                      "the usual swing from match to match (NIST/SEMATECH e-Handbook §6.3.3.2)")
                        .arg(m_chart->kindText())
                        .arg(c.beforeMatches);
     m_chartReadingText = tr("After the start: %1 of %2 matches beyond the limits on the better side, "

@@ -74,14 +74,23 @@ TEST_CASE("a focus opened from the planted slip and reviewed after five matches"
     const auto review = cli({"--db", club.db, "review", "1", "--format", "json"});
     REQUIRE(review.code == 0);
     const auto r = nlohmann::json::parse(review.out);
-    CHECK(r["before"]["matches"].size() == 5);
-    CHECK(r["before"]["matches"][0]["match_id"] == "KB-2026-04");
+    // The flag was raised over the last five matches (KB-2026-04 … 08): they are left out, and
+    // the baseline is what came before them, KB-2026-01 … 03.
+    CHECK(r["trigger"]["matches"].size() == 5);
+    CHECK(r["trigger"]["matches"][0]["match_id"] == "KB-2026-04");
+    CHECK(r["before"]["matches"].size() == 3);
+    CHECK(r["before"]["matches"][0]["match_id"] == "KB-2026-01");
     CHECK(r["after"]["matches"][4]["match_id"] == "KB-2026-13");
-    CHECK(r["test"] == "exact conditional test for two Poisson rates");
-    // The story eases from match 9 on: fewer passes after, with a clear improvement.
-    CHECK(r["after"]["num"].get<long>() < r["before"]["num"].get<long>());
-    CHECK(r["prob_improved"].get<double>() > 0.99);
-    CHECK(r["chart"]["points"].size() == 10);
+    CHECK(contains(r["baseline_note"].get<std::string>(), "only 3 of the 5 wanted"));
+    CHECK(contains(r["test"].get<std::string>(), "difference in differences"));
+    // The story's slip runs from match 1 and eases from match 9 on: fewer passes after than in
+    // the baseline, read against the rest of the pitch and with match-to-match variation.
+    CHECK(r["after"]["num"].get<long>() < r["before"]["num"].get<long>() * 5 / 3);
+    CHECK(r["dispersion"].get<double>() > 0);
+    CHECK(r["prob_improved"].get<double>() > 0.5);
+    CHECK(r["target"]["value"] == 2.0);
+    CHECK(r["min_change"] > 0);
+    CHECK(r["chart"]["points"].size() == 13);
     CHECK(r["training_minutes"] == 0); // no training session saved in this club file
 
     // Recording the verdict stores these numbers; the review then shows them as stored.
@@ -130,7 +139,7 @@ TEST_CASE("focus and review refuse bad input and change nothing", "[cli]") {
     CHECK(early.code == 2);
     CHECK(contains(early.err, "2 have been played (3 missing)"));
     CHECK(dataSnapshot(club.db) == opened);
-    refused({"review", "1", "--after", "2", "--before", "9"}, "(1 missing)");
+    refused({"review", "1", "--after", "3", "--before", "9"}, "2 have been played (1 missing)");
 }
 
 TEST_CASE("after a grid change a focus keeps its zones and its review's numbers", "[cli]") {

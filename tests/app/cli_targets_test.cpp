@@ -358,6 +358,8 @@ TEST_CASE("copy-season carries targets over with last season's achieved values",
                    "85%", "--author", "R. Tamsin", "--from", "2026-07-01"})
                 .code == 0);
 
+    // The hand-worked intervals below assume pure binomial noise (no match-to-match variation).
+    REQUIRE(w.run({"settings", "set", "match_variation", "off"}).code == 0);
     const auto copy = w.run({"targets", "copy-season", "--from-season", "2026-27", "--to-season",
                              "2027-28", "--author", "P. Okafor"});
     INFO(copy.out);
@@ -411,6 +413,8 @@ TEST_CASE("status prints every zone in csv and json; an unknown match exits 2", 
                    "0.9", "--min-sample", "5", "--author", "R. Tamsin", "--from", "2026-07-01"})
                 .code == 0);
 
+    // The scipy numbers below assume pure binomial noise (no match-to-match variation).
+    REQUIRE(w.run({"settings", "set", "match_variation", "off"}).code == 0);
     const auto csv = w.run({"status", "KB-TEST-02", "--format", "csv"});
     INFO(csv.err);
     REQUIRE(csv.code == 0);
@@ -424,12 +428,11 @@ TEST_CASE("status prints every zone in csv and json; an unknown match exits 2", 
     CHECK(rows.size() == 1 + 7 * 31 * 4);
 
     // Pass completion over the whole pitch, last5 at KB-TEST-02: 5 of 7 in each match → 10/14.
-    //   P(miss) = st.beta.cdf(0.9, 10.5, 4.5) → 0.9791065226366727 (< 0.999);
-    //   P(p < 0.95) = st.beta.cdf(0.95, 10.5, 4.5) → 0.99862 ≥ 0.5: watch.
+    //   P(miss) = st.beta.cdf(0.9, 10.5, 4.5) → 0.9791065226366727 (< 0.999, ≥ 0.5: likely off).
     //   Wilson 90 %: st.binomtest(10, 14).proportion_ci(confidence_level=0.9,
     //   method='wilson') → 0.4944962194951345, 0.864665996118335 (printed to 6 digits).
     const std::string prefix = "KB-TEST-02,pass_completion,0,0,last5,10,14,0.714286,0.494496,"
-                               "0.864666,0.9,0.9,watch,0.979107,at_least,2,";
+                               "0.864666,0.9,0.9,likely_off,0.979107,at_least,2,";
     CHECK(std::count_if(rows.begin(), rows.end(),
                         [&](const std::string& r) { return r.rfind(prefix, 0) == 0; }) == 1);
 
@@ -448,7 +451,7 @@ TEST_CASE("status prints every zone in csv and json; an unknown match exits 2", 
     REQUIRE(whole);
     CHECK((*whole)["num"] == 10);
     CHECK((*whole)["den"] == 14);
-    CHECK((*whole)["state"] == "watch");
+    CHECK((*whole)["state"] == "likely_off");
     CHECK((*whole)["p_miss"].get<double>() == Approx(0.9791065226366727).epsilon(1e-9));
     CHECK((*whole)["target"]["value"] == 0.9);
     CHECK((*whole)["target"]["min_sample"] == 5);
@@ -486,10 +489,16 @@ TEST_CASE("settings set changes what status and debrief flag; bad settings exit 
     CHECK(contains(shown.out, "off_threshold    0.999   "));
     CHECK(contains(shown.out, "window           last5   "));
 
+    CHECK(contains(shown.out, "false_flags_per_season 1   "));
+    // A fixed threshold applies once the season budget is switched off (and the hand-worked
+    // P(miss) below assumes pure binomial noise).
+    REQUIRE(w.run({"settings", "set", "false_flags_per_season", "0"}).code == 0);
+    REQUIRE(w.run({"settings", "set", "match_variation", "off"}).code == 0);
     const auto set = w.run({"settings", "set", "off_threshold", "0.9"});
     CHECK(set.code == 0);
     const auto after = w.run({"settings", "show"});
     CHECK(contains(after.out, "off_threshold    0.9   (P(miss) for off target)"));
+    CHECK(contains(after.out, "match_variation  off   "));
     CHECK(contains(after.out, "level            0.9   "));
 
     // 10/14 against at least 90 %: P(miss) 0.97911 (scipy, above) ≥ 0.9 → now off target.
@@ -527,7 +536,9 @@ TEST_CASE("settings set changes what status and debrief flag; bad settings exit 
     for (const std::vector<std::string>& bad :
          {std::vector<std::string>{"off_threshold", "1.5"}, {"off_threshold", "0"},
           {"off_threshold", "high"}, {"level", "95%x"}, {"window", "weekly"},
-          {"interval", "exact"}, {"fdr", "yes"}, {"colour", "blue"}}) {
+          {"interval", "exact"}, {"fdr", "yes"}, {"colour", "blue"},
+          {"false_flags_per_season", "-1"}, {"season_matches", "0"}, {"season_matches", "3.5"},
+          {"match_variation", "maybe"}}) {
         const auto r = w.run({"settings", "set", bad[0], bad[1]});
         INFO(bad[0] << " " << bad[1]);
         CHECK(r.code == 2);

@@ -317,15 +317,16 @@ void FocusViewTest::reviewAgainstModel() {
     const model::Review& r = *result.review;
     QCOMPARE(view.beforeValueText(), valueText(r.kind, r.before.value));
     QCOMPARE(view.afterValueText(), valueText(r.kind, r.after.value));
-    QVERIFY(view.beforeText().contains(QStringLiteral("%1 in 5 matches").arg(r.before.totalNum)));
+    QVERIFY(view.beforeText().contains(QStringLiteral("%1 in %2 matches").arg(r.before.totalNum).arg(r.before.matchIds.size())));
+    QVERIFY(view.beforeText().contains(QString::fromStdString(r.baselineNote)));
     QVERIFY(view.afterText().contains(QString::fromStdString(r.after.matchIds.front())));
-    QVERIFY(view.testText().contains(QString::fromStdString(r.testName).mid(1))); // "Exact conditional test…"
-    QVERIFY(view.testText().contains(QStringLiteral("p = %1 two-sided").arg(QLocale().toString(r.pTwoSided, 'g', 3))));
+    QVERIFY(view.testText().contains(QStringLiteral("cannot show that the drills caused")));
+    QVERIFY(view.beliefText().contains(QStringLiteral("Target at most")));
     QVERIFY(view.trainingText().contains(QStringLiteral("25 minutes"))); // the planned session
 
     // The chart: every point and limit as model/ computed them.
     QCOMPARE(view.chart()->rowCount(), static_cast<int>(r.chart.size()));
-    QCOMPARE(view.chart()->firstAfter(), 5);
+    QCOMPARE(view.chart()->firstAfter(), static_cast<int>(r.chart.size() - r.after.matchIds.size()));
     QCOMPARE(view.chart()->kindText(), QStringLiteral("u-chart")); // a count metric
     const auto values = view.chart()->values();
     const auto lcls = view.chart()->lowerLimits();

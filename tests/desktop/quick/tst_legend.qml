@@ -72,11 +72,11 @@ TestCase {
     }
 
     function test_statesAndSwatchesOnRequest() {
-        for (const name of ["Slipped", "Watch", "On target", "Too little data", "no items"])
+        for (const name of ["Slipped", "Likely off", "Close to the line", "On target", "Too little data", "no items"])
             verify(shown(name), name + " shown")
         legend.showStates = false
         legend.showSwatches = false
-        for (const name of ["Slipped", "Watch", "On target", "Too little data", "no items"])
+        for (const name of ["Slipped", "Likely off", "Close to the line", "On target", "Too little data", "no items"])
             verify(!shown(name), name + " hidden")
         verify(shown(legend.title))
     }
