@@ -7,6 +7,7 @@
 // numbers); finite ones with 17 significant digits, so they read back exactly.
 
 #include "stats.h"
+#include "variation.h"
 
 #include <cmath>
 #include <iostream>
@@ -16,6 +17,7 @@
 
 using nlohmann::json;
 namespace stats = pitchloop::model::stats;
+using namespace pitchloop::model;
 
 namespace {
 
@@ -119,6 +121,25 @@ json call(const std::string& fn, const json& a) {
                            {"above", p.above},
                            {"below", p.below}});
         return out;
+    }
+    if (fn == "designEffect") {
+        const auto kind = a.at(0).get<std::string>() == "rate" ? MetricKind::Rate : MetricKind::Count;
+        return number(designEffect(kind, real(a, 1), real(a, 2), real(a, 3)));
+    }
+    if (fn == "rateDispersion" || fn == "countDispersion") {
+        // args: [[[num, den], ...] per series, ...], matches; no prior weight (the raw estimate).
+        std::vector<TallySeries> series;
+        for (const auto& zs : a.at(0)) {
+            TallySeries t;
+            for (const auto& m : zs) t.push_back({m.at(0).get<long>(), m.at(1).get<long>()});
+            series.push_back(std::move(t));
+        }
+        VariationPrior none;
+        none.priorWeight = 0;
+        const int matches = a.at(1).get<int>();
+        const Dispersion d = fn == "rateDispersion" ? estimateRateDispersion(series, matches, none)
+                                                    : estimateCountDispersion(series, matches, none);
+        return number(d.estimate);
     }
     throw std::invalid_argument("unknown function " + fn);
 }

@@ -44,6 +44,10 @@ FocusVerbs::FocusVerbs(CLI::App& app) {
         ->check(CLI::Range(1, 20));
     m_open->add_option("--review-on", m_reviewOn, "Or review on this date");
     m_open->add_option("--note", m_note, "A note for the staff");
+    m_open->add_option("--min-change", m_minChange,
+                       "The smallest improvement that would matter, in the metric's unit (a "
+                       "share for rates: 0.08 is 8 points; default: the target's watch margin)")
+        ->check(CLI::Range(0.0, 1000.0));
 
     m_link = m_group->add_subcommand("link", "Link a drill to a focus");
     m_unlink = m_group->add_subcommand("unlink", "Unlink a drill from a focus");
@@ -152,6 +156,7 @@ int FocusVerbs::runOpen(ClubRepository& repo, std::ostream& out, std::ostream& e
     f.reviewOn = m_reviewOn;
     f.evidence = evidence.json;
     f.note = m_note;
+    if (m_minChange) f.minChange = *m_minChange;
     f.openedBy = m_by;
     f.drills = m_drills;
     const auto id = store.open(f, nowUtc());

@@ -7,6 +7,7 @@
 
 #include <cstdint>
 #include <ostream>
+#include <optional>
 #include <string>
 #include <vector>
 
@@ -41,6 +42,7 @@ private:
     int m_reviewAfter = 5;
     std::string m_reviewOn;
     std::string m_note;
+    std::optional<double> m_minChange;
     std::int64_t m_focus = 0;
     std::int64_t m_drill = 0;
     int m_before = 0;

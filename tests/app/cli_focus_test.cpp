@@ -53,7 +53,7 @@ TEST_CASE("a focus opened from the planted slip and reviewed after five matches"
     DemoClub club(13);
     const auto open = cli({"--db", club.db, "focus", "open", "--match", "KB-2026-08", "--metric",
                            "pre_shot_passes_against", "--zone", "2,5", "--by", "D. Arkwright",
-                           "--note", "rechts überladen — ⚽"});
+                           "--note", "rechts überladen — ⚽", "--min-change", "1.5"});
     REQUIRE(open.code == 0);
     CHECK(open.out == "1\n");
     // The zone was off target at that match, so no "opened anyway" note.
@@ -89,7 +89,7 @@ TEST_CASE("a focus opened from the planted slip and reviewed after five matches"
     CHECK(r["dispersion"].get<double>() > 0);
     CHECK(r["prob_improved"].get<double>() > 0.5);
     CHECK(r["target"]["value"] == 2.0);
-    CHECK(r["min_change"] > 0);
+    CHECK(r["min_change"] == 1.5); // the coach's, stored with the focus
     CHECK(r["chart"]["points"].size() == 13);
     CHECK(r["training_minutes"] == 0); // no training session saved in this club file
 
