@@ -567,3 +567,86 @@ TEST_CASE("expectedChanceFlags counts only zones with a target and enough data",
     CHECK(expectedChanceFlags(all) == Approx(0.07).epsilon(1e-12));
     CHECK(expectedChanceFlags({}) == 0);
 }
+
+// ---- edges of what a value can be -------------------------------------------------------------
+
+TEST_CASE("targets at the edge: a perfect zone is not off target", "[status][edges]") {
+    SECTION("at least 100 %: 100 of 100 is on target, one failure is off for certain") {
+        const Target t = target("pass_completion", 1, 1, Direction::AtLeast, 1.0, 0.05, 30);
+        const auto perfect = statusAt(oneZoneRate(100, 100), 0, {"pass_completion"}, {t}, {kMatch});
+        const ZoneStatus& p = statusOf(perfect, "pass_completion", 1, 1, "match");
+        CHECK(p.state == FlagState::OnTarget);
+        CHECK(p.pMiss == 0);
+        CHECK(p.chanceOff == 0);
+        const auto one = statusAt(oneZoneRate(99, 100), 0, {"pass_completion"}, {t}, {kMatch});
+        CHECK(statusOf(one, "pass_completion", 1, 1, "match").state == FlagState::OffTarget);
+        CHECK(statusOf(one, "pass_completion", 1, 1, "match").pMiss == 1);
+    }
+    SECTION("at most 0 a match: a match without their passes is on target") {
+        SeasonFixture f(ZoneGrid{}, {"2026-08-01", "2026-08-08", "2026-08-15"});
+        f.addMetric("pre_shot_passes_against");
+        const Target t = target("pre_shot_passes_against", 2, 5, Direction::AtMost, 0, 1, 3);
+        const auto none = statusAt(f, 2, {"pre_shot_passes_against"}, {t}, {lastN(5)});
+        CHECK(statusOf(none, "pre_shot_passes_against", 2, 5, "last5").state == FlagState::OnTarget);
+        f.set("pre_shot_passes_against", 1, 2, 5, 1, 1);
+        const auto onePass = statusAt(f, 2, {"pre_shot_passes_against"}, {t}, {lastN(5)});
+        CHECK(statusOf(onePass, "pre_shot_passes_against", 2, 5, "last5").state ==
+              FlagState::OffTarget);
+    }
+    SECTION("at least 0 % is met whatever happens") {
+        const Target t = target("pass_completion", 1, 1, Direction::AtLeast, 0.0, 0.05, 30);
+        const auto zero = statusAt(oneZoneRate(0, 50), 0, {"pass_completion"}, {t}, {kMatch});
+        CHECK(statusOf(zero, "pass_completion", 1, 1, "match").state == FlagState::OnTarget);
+    }
+}
+
+TEST_CASE("a watch line never leaves what the value can be", "[status][edges]") {
+    // At least 0.97 with margin 0.05: the line is 0.97 + min(0.05, 0.03/2) = 0.985, not 1.02.
+    // 49/50 = 0.98: P(p < 0.97) = st.beta.cdf(0.97, 49.5, 1.5) → 0.3869 (< 0.5);
+    // P(p < 0.985) = st.beta.cdf(0.985, 49.5, 1.5) → 0.6814 ≥ 0.5: close to the line.
+    // 200/200: P(p < 0.985) = st.beta.cdf(0.985, 200.5, 0.5) → 0.0139: on target (with the old
+    // line at 1.02 every zone was watched whatever the data).
+    const Target t = target("pass_completion", 1, 1, Direction::AtLeast, 0.97, 0.05, 30);
+    const auto near = statusAt(oneZoneRate(49, 50), 0, {"pass_completion"}, {t}, {kMatch});
+    CHECK(statusOf(near, "pass_completion", 1, 1, "match").state == FlagState::CloseToLine);
+    const auto perfect = statusAt(oneZoneRate(200, 200), 0, {"pass_completion"}, {t}, {kMatch});
+    CHECK(statusOf(perfect, "pass_completion", 1, 1, "match").state == FlagState::OnTarget);
+}
+
+TEST_CASE("one match of a count says how unusual it was, not whether the target slipped",
+          "[status][edges]") {
+    // 11 of their passes before shots in band 2 lane 5 against at most 2 a match: one match is
+    // too little data to judge the target, but for a team exactly on it such a match has
+    // probability st.poisson.sf(10, 2) → 8.3e-06 (pure Poisson, no variation).
+    SeasonFixture f(ZoneGrid{}, {"2026-08-01"});
+    f.set("pre_shot_passes_against", 0, 2, 5, 11, 1);
+    const Target t = target("pre_shot_passes_against", 2, 5, Direction::AtMost, 2, 1, 3);
+    const auto all = statusAt(f, 0, {"pre_shot_passes_against"}, {t}, {kMatch});
+    const ZoneStatus& s = statusOf(all, "pre_shot_passes_against", 2, 5, "match");
+    CHECK(s.state == FlagState::TooLittleData);
+    CHECK(close(s.matchTail, 8.3082e-06, 1e-4));
+}
+
+TEST_CASE("variation widens the evidence and the budget sets the threshold", "[status]") {
+    // 10, 30 and 20 of 40 against at least 0.5: far more swing than 40 chances' noise, so with
+    // variation on the interval is wider than without; the threshold follows the budget.
+    SeasonFixture f(ZoneGrid::equal(1, 1), {"2026-08-01", "2026-08-08", "2026-08-15"});
+    f.set("pass_completion", 0, 1, 1, 10, 40);
+    f.set("pass_completion", 1, 1, 1, 30, 40);
+    f.set("pass_completion", 2, 1, 1, 20, 40);
+    const Target t = target("pass_completion", 1, 1, Direction::AtLeast, 0.5, 0.05, 30);
+    FlagSettings with;
+    const auto a = statusAt(f, 2, {"pass_completion"}, {t}, {kSeason}, with);
+    const auto b = statusAt(f, 2, {"pass_completion"}, {t}, {kSeason});
+    const ZoneStatus& sa = statusOf(a, "pass_completion", 1, 1, "season");
+    const ZoneStatus& sb = statusOf(b, "pass_completion", 1, 1, "season");
+    CHECK(sa.dispersion > 0);
+    CHECK(sa.sum.effDen < sb.sum.effDen);
+    CHECK(sa.interval.high - sa.interval.low > sb.interval.high - sb.interval.low);
+    // One series with a target, a budget of 1: min(0.05, 1/1)/38 → 1 − 0.05/38.
+    CHECK(sa.offThreshold == Approx(1 - 0.05 / 38).epsilon(1e-12));
+    CHECK(offThresholdFor(with, 200) == Approx(1 - 0.005 / 38).epsilon(1e-12));
+    FlagSettings fixed;
+    fixed.falseFlagsPerSeason = 0;
+    CHECK(offThresholdFor(fixed, 200) == 0.999);
+}
