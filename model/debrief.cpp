@@ -57,6 +57,9 @@ Debrief buildDebrief(const SeasonTallies& season, std::size_t focal,
         const bool judgedWindow = s.window == settings.window;
         if (s.window == matchWindow && s.state == FlagState::OffTarget)
             d.slippedInMatch.push_back(item);
+        if (s.window == matchWindow && s.state == FlagState::TooLittleData &&
+            !std::isnan(s.matchTail) && s.matchTail <= kUnusualMatchTail)
+            d.unusualInMatch.push_back(item);
         if (!judgedWindow) continue;
         if (s.state == FlagState::TooLittleData) {
             ++d.tooLittleData;
@@ -86,6 +89,8 @@ Debrief buildDebrief(const SeasonTallies& season, std::size_t focal,
     d.seriesWithTargets = series;
     for (auto* list : {&d.slippedInMatch, &d.slippedInWindow, &d.newSlips, &d.recovered, &d.watched})
         order(*list);
+    std::stable_sort(d.unusualInMatch.begin(), d.unusualInMatch.end(),
+                     [](const DebriefItem& a, const DebriefItem& b) { return a.now.matchTail < b.now.matchTail; });
     return d;
 }
 

@@ -25,6 +25,10 @@ struct Debrief {
     std::vector<DebriefItem> newSlips;        ///< off target over the window, not before
     std::vector<DebriefItem> recovered;       ///< off, likely off or close before; on target now
     std::vector<DebriefItem> watched;         ///< likely off or close to the line over the window
+    /// Per-match count targets cannot be judged on one match (too little data), but one match
+    /// can be unusual for a team on its target: those whose single-match tail (matchTail) is at
+    /// most kUnusualMatchTail, most unusual first.
+    std::vector<DebriefItem> unusualInMatch;
     int judged = 0;         ///< zones with a target and enough data in the window
     int tooLittleData = 0;  ///< zones with a target but too little data in the window
     double chanceFlags = 0; ///< off-target flags chance alone would give at this one look
@@ -34,6 +38,9 @@ struct Debrief {
     double offThreshold = 0;    ///< the threshold in force (from the alarm budget)
     int seriesWithTargets = 0;  ///< (metric, zone) series with a target, across the board
 };
+
+/// A match a team exactly on its per-match target has about once in a hundred matches or less.
+inline constexpr double kUnusualMatchTail = 0.01;
 
 /// Judges match `focal` of a season. Lists are ordered by how sure (pMiss, highest first),
 /// then by how large (gap).

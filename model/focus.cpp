@@ -70,6 +70,22 @@ std::optional<Verdict> verdictFromString(std::string_view s) {
     return std::nullopt;
 }
 
+std::vector<std::int64_t> overlappingOpenFocuses(const std::vector<Focus>& focuses,
+                                                 const std::string& metric,
+                                                 const std::vector<Zone>& zones) {
+    std::vector<std::int64_t> out;
+    for (const auto& f : focuses) {
+        if (!f.closedAt.empty() || f.metric != metric) continue;
+        const bool shared = std::any_of(f.zones.begin(), f.zones.end(), [&](const Zone& a) {
+            return std::any_of(zones.begin(), zones.end(), [&](const Zone& b) {
+                return a == b || (a.band == 0 && a.lane == 0) || (b.band == 0 && b.lane == 0);
+            });
+        });
+        if (shared) out.push_back(f.id);
+    }
+    return out;
+}
+
 FocusState focusState(const Focus& f, int matchesSinceStart, const std::string& today) {
     if (!f.closedAt.empty()) return FocusState::Closed;
     if (!f.reviewOn.empty() && today >= f.reviewOn) return FocusState::DueForReview;

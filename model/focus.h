@@ -47,6 +47,13 @@ struct Focus {
     ZoneGrid grid;
 };
 
+/// Focuses not yet closed on the same metric that share a zone with `zones` (a whole-pitch
+/// focus shares every zone): a second focus on the same thing splits its review and its
+/// training minutes, so openers are warned.
+std::vector<std::int64_t> overlappingOpenFocuses(const std::vector<Focus>& focuses,
+                                                 const std::string& metric,
+                                                 const std::vector<Zone>& zones);
+
 /// Open, due for review (the review point is reached), or closed.
 FocusState focusState(const Focus& f, int matchesSinceStart, const std::string& today);
 

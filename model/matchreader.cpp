@@ -466,6 +466,64 @@ Point toOurFrame(Point p, Frame frame, Side side, int period, const Pitch& pitch
     return {pitch.lengthM - p.x, pitch.widthM - p.y};
 }
 
+namespace {
+
+/// The literal nlohmann names in "number overflow parsing '1e99999'".
+std::string overflowLiteral(const std::string& what) {
+    const auto open = what.find('\'');
+    const auto close = open == std::string::npos ? open : what.find('\'', open + 1);
+    return open == std::string::npos || close == std::string::npos
+               ? std::string("a number")
+               : what.substr(open + 1, close - open - 1);
+}
+
+/// Where the overflowing literal sits: "events[3]" and "x" when the rest of the file parses
+/// with it replaced by a marker, otherwise its line and column.
+std::pair<std::string, std::string> locateOverflow(std::string_view text, const std::string& what) {
+    const std::string literal = overflowLiteral(what);
+    std::size_t at = std::string_view::npos;
+    for (std::size_t from = 0; (from = text.find(literal, from)) != std::string_view::npos; ++from) {
+        // A number token: not inside a longer one.
+        const char before = from > 0 ? text[from - 1] : ' ';
+        const char after = from + literal.size() < text.size() ? text[from + literal.size()] : ' ';
+        const auto digitish = [](char ch) {
+            return (ch >= '0' && ch <= '9') || ch == '.' || ch == 'e' || ch == 'E' || ch == '-' || ch == '+';
+        };
+        if (!digitish(before) && !digitish(after)) {
+            at = from;
+            break;
+        }
+    }
+    if (at == std::string_view::npos) return {"", ""};
+    const auto [line, column] = lineAndColumn(text, at);
+    const std::string fallback = "line " + std::to_string(line) + ", column " + std::to_string(column);
+    static const std::string marker = "\\u0001pitchloop-overflow"; // a JSON escape
+    std::string patched(text.substr(0, at));
+    patched += "\"" + marker + "\"";
+    patched += text.substr(at + literal.size());
+    try {
+        const json root = json::parse(patched);
+        const std::string wanted = std::string(1, '\x01') + "pitchloop-overflow";
+        if (root.contains("events") && root["events"].is_array()) {
+            const auto& events = root["events"];
+            for (std::size_t i = 0; i < events.size(); ++i)
+                if (events[i].is_object())
+                    for (const auto& [key, value] : events[i].items())
+                        if (value.is_string() && value.get<std::string>() == wanted)
+                            return {"events[" + std::to_string(i) + "]", key};
+        }
+        for (const auto& [section, body] : root.items()) {
+            if (!body.is_object()) continue;
+            for (const auto& [key, value] : body.items())
+                if (value.is_string() && value.get<std::string>() == wanted) return {section, key};
+        }
+    } catch (const json::exception&) {
+    }
+    return {fallback, ""};
+}
+
+} // namespace
+
 ReadResult parseMatch(std::string_view text, const std::string& fileName,
                       const ReadOptions& options) {
     ReadResult result;
@@ -481,6 +539,13 @@ ReadResult parseMatch(std::string_view text, const std::string& fileName,
         if (auto pos = what.find("syntax error"); pos != std::string::npos) what = what.substr(pos);
         c.error("line " + std::to_string(line) + ", column " + std::to_string(column), "",
                 "not valid JSON: " + what);
+        result.errors = c.takeErrors();
+        return result;
+    } catch (const json::out_of_range& e) {
+        // A number too large for a double (e.g. 1e99999): the parser says which literal, not
+        // where. Find it, name its place in the file's own terms, and refuse the file.
+        const auto [place, field] = locateOverflow(text, e.what());
+        c.error(place, field, "number too large: " + overflowLiteral(e.what()));
         result.errors = c.takeErrors();
         return result;
     }

@@ -159,10 +159,14 @@ int FocusVerbs::runOpen(ClubRepository& repo, std::ostream& out, std::ostream& e
     if (m_minChange) f.minChange = *m_minChange;
     f.openedBy = m_by;
     f.drills = m_drills;
+    const auto overlapping = overlappingOpenFocuses(store.list(), f.metric, f.zones);
     const auto id = store.open(f, nowUtc());
+    for (auto other : overlapping)
+        err << "note: focus " << other << " on " << metric->id
+            << " and the same zone is still open; their reviews will count the same matches\n";
     if (!slipped)
         err << "note: " << zonesText(whole ? std::vector<Zone>{{0, 0}} : zones) << " of "
-            << metric->id << " is neither off target nor watched over " << settings.window.name()
+            << metric->id << " is neither off target, likely off nor close to the line over " << settings.window.name()
             << " at " << m_match << "; the focus is opened anyway\n";
     out << id << "\n";
     err << "opened focus " << id << " on " << metric->id << " ("
@@ -316,12 +320,11 @@ int FocusVerbs::runReview(ClubRepository& repo, std::ostream& out, std::ostream&
         return kExitBadInput;
     }
     Review r = *result.review;
-    // Training time between the windows: the focus's drills in saved sessions from the start
-    // to the last match of the after window.
-    r.trainingMinutes = SessionStore(repo).minutesOnDrills(f->squad, f->startDate,
-                                                           r.after.dates.back(), f->drills);
-    r.trainingNote = "minutes of this focus's drills in saved training sessions from " +
-                     f->startDate + " to " + r.after.dates.back();
+    // Training time: the minutes saved sessions gave this focus, from the start to the last
+    // match reviewed (the same count the app's focus list shows up to today).
+    r.trainingMinutes = SessionStore(repo).minutesOnFocus(f->id, f->startDate, r.after.dates.back());
+    r.trainingNote = "minutes saved training sessions gave this focus from " + f->startDate +
+                     " to " + r.after.dates.back() + " (the last match reviewed)";
     const std::string json = reviewToJson(r);
     if (!m_verdict.empty()) {
         if (m_by.empty()) {

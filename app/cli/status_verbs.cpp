@@ -265,7 +265,7 @@ int StatusVerbs::runDebrief(ClubRepository& repo, std::ostream& out, std::ostrea
                     : std::string())
             << (settings.fdr ? ", with Benjamini–Hochberg at q = " + num(settings.fdrQ) : "")
             << "; intervals at " << num(100 * settings.level) << " %.\n\n";
-        auto line = [&](const DebriefItem& item, bool markNew) {
+        auto line = [&](const DebriefItem& item, bool markNew, bool showState) {
             const ZoneStatus& s = item.now;
             const MetricKind kind = byId[s.metric].kind();
             std::string unit = kind == MetricKind::Count ? " a match" : "";
@@ -284,20 +284,36 @@ int StatusVerbs::runDebrief(ClubRepository& repo, std::ostream& out, std::ostrea
                               : "",
                           item.before ? ("  (was " + std::string(toString(*item.before)) + ")").c_str()
                                       : "");
-            out << buf;
+            std::string text = buf;
+            if (showState) text.insert(2, pad(std::string(toString(s.state)), 14));
+            out << text;
         };
         auto section = [&](const std::string& title, const std::vector<DebriefItem>& items,
-                           bool markNew) {
+                           bool markNew, bool showState = false) {
             out << title << " (" << items.size() << ")\n";
             if (items.empty()) out << "  none\n";
-            for (const auto& item : items) line(item, markNew);
+            for (const auto& item : items) line(item, markNew, showState);
             out << "\n";
         };
         section("Off target over " + settings.window.name(), d.slippedInWindow, true);
         section("Off target in this match alone", d.slippedInMatch, false);
+        if (!d.unusualInMatch.empty()) {
+            out << "Unusual in this match alone (" << d.unusualInMatch.size()
+                << "): a per-match count target cannot be judged on one match, but a team on its "
+                   "target has a match like this at most once in a hundred\n";
+            for (const auto& item : d.unusualInMatch) {
+                const ZoneStatus& s = item.now;
+                char buf[300];
+                std::snprintf(buf, sizeof buf, "  %-24s %-18s %6.0f  target %s  chance if on target %.2g\n",
+                              s.metric.c_str(), zoneName(s.band, s.lane).c_str(), s.sum.num,
+                              targetText(byId[s.metric].kind(), s.target).c_str(), s.matchTail);
+                out << buf;
+            }
+            out << "\n";
+        }
         if (!d.previousMatchId.empty())
             section("Recovered since " + d.previousMatchId, d.recovered, false);
-        section("Likely off or close to the line", d.watched, false);
+        section("Likely off or close to the line", d.watched, false, true);
         char chance[400];
         std::snprintf(chance, sizeof chance,
                       "%d zones with targets judged over %s (%d more have too little data). If "

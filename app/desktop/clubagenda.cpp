@@ -77,8 +77,8 @@ void ClubAgenda::refresh() {
             since += m.squad == f.squad && m.season == f.season && m.date >= f.startDate &&
                      m.date <= today; // a match dated after today has not been played
         const bool due = focusState(f, since, today) == FocusState::DueForReview;
-        ++m_open;
-        m_due += due;
+        // The same split as the focus list: open (training on it) or due for review.
+        (due ? m_due : m_open) += 1;
         const MetricSpec* metric = s->metricSpec(f.metric);
         QString zones;
         for (const auto& z : f.zones)

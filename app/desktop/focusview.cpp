@@ -24,6 +24,7 @@
 
 #include <algorithm>
 #include <cmath>
+#include <optional>
 
 namespace pitchloop::desktop {
 
@@ -182,13 +183,18 @@ void FocusView::refreshList() {
                                  .arg(since)
                                  .arg(compactDateText(f.startDate));
         else
-            r.progressText = tr("%1 of %2 matches played since %3")
-                                 .arg(std::min(since, f.reviewAfterMatches))
-                                 .arg(f.reviewAfterMatches)
-                                 .arg(compactDateText(f.startDate));
+            r.progressText = since > f.reviewAfterMatches
+                                 ? tr("%1 of %1 matches for the review played since %2 (%3 in all)")
+                                       .arg(f.reviewAfterMatches)
+                                       .arg(compactDateText(f.startDate))
+                                       .arg(since)
+                                 : tr("%1 of %2 matches for the review played since %3")
+                                       .arg(since)
+                                       .arg(f.reviewAfterMatches)
+                                       .arg(compactDateText(f.startDate));
         r.drillsText = f.drills.size() == 1 ? tr("1 drill linked") : tr("%1 drills linked").arg(f.drills.size());
         const std::string until = state == FocusState::Closed ? f.closedAt.substr(0, 10) : day;
-        r.minutesText = tr("%1 min of training so far")
+        r.minutesText = tr("%1 min of training up to today")
                             .arg(sessions.minutesOnFocus(f.id, f.startDate, until));
         due += state == FocusState::DueForReview;
         open += state == FocusState::Open;
@@ -284,7 +290,7 @@ void FocusView::refreshDetail() {
     m_noteText = qs(f.note);
     const std::string until = m_closed ? f.closedAt.substr(0, 10) : day;
     const int minutes = SessionStore(*repo).minutesOnFocus(f.id, f.startDate, until);
-    m_minutesText = tr("%1 minutes of saved training sessions worked on this focus from %2 to %3.")
+    m_minutesText = tr("%1 minutes of saved training sessions worked on this focus from %2 to %3 (the review counts up to its last match).")
                         .arg(minutes)
                         .arg(compactDateText(f.startDate), compactDateText(until));
     if (m_closed)
@@ -330,10 +336,9 @@ void FocusView::refreshDetail() {
             m_reviewProblem = tr("The review cannot be computed yet: %1.").arg(qs(result.problem));
         } else {
             Review r = *result.review;
-            r.trainingMinutes = SessionStore(*repo).minutesOnDrills(f.squad, f.startDate,
-                                                                    r.after.dates.back(), f.drills);
-            r.trainingNote = "minutes of this focus's drills in saved training sessions from " +
-                             f.startDate + " to " + r.after.dates.back();
+            r.trainingMinutes = SessionStore(*repo).minutesOnFocus(f.id, f.startDate, r.after.dates.back());
+            r.trainingNote = "minutes saved training sessions gave this focus from " + f.startDate +
+                             " to " + r.after.dates.back() + " (the last match reviewed)";
             m_reviewJson = reviewToJson(r);
             showReview(r, false);
             m_reviewSourceText = state == FocusState::DueForReview
@@ -865,6 +870,17 @@ bool FocusView::confirmDraft() {
         else if (!reviewOn.empty() && match && reviewOn <= start)
             problems << tr("Review on: %1 is not after the start of training (%2).")
                             .arg(qs(reviewOn), qs(start));
+        std::optional<double> minChange;
+        if (!m_draftMinChange.trimmed().isEmpty()) {
+            bool ok = false;
+            const double v = QLocale().toDouble(m_draftMinChange.trimmed(), &ok);
+            const double alt = ok ? v : m_draftMinChange.trimmed().toDouble(&ok);
+            if (!ok || alt < 0 || !std::isfinite(alt))
+                problems << tr("Smallest change that matters: “%1” is not a number of zero or more.")
+                                .arg(m_draftMinChange.trimmed());
+            else
+                minChange = metric && metric->kind() == MetricKind::Rate ? alt / 100 : alt;
+        }
         if (repo) {
             FocusStore store(*repo);
             for (auto id : m_draftDrills)
@@ -896,6 +912,8 @@ bool FocusView::confirmDraft() {
         f.note = m_draftNote.trimmed().toStdString();
         f.openedBy = m_draftBy.trimmed().toStdString();
         f.drills = m_draftDrills;
+        f.minChange = minChange;
+        const auto overlapping = overlappingOpenFocuses(FocusStore(*repo).list(), f.metric, f.zones);
         const auto id = FocusStore(*repo).open(f, now);
         m_drafting = false;
         m_draftDrills.clear();
@@ -904,7 +922,14 @@ bool FocusView::confirmDraft() {
         m_draftProblems.clear();
         emit draftFormChanged();
         m_selectedId = id;
-        setStatus(tr("Opened focus %1 on %2 (%3).").arg(id).arg(metricName(f.metric), m_draftZonesText));
+        QString status = tr("Opened focus %1 on %2 (%3).").arg(id).arg(metricName(f.metric), m_draftZonesText);
+        for (auto other : overlapping)
+            status += QLatin1Char(' ') +
+                      tr("Focus %1 on the same metric and zone is still open: both reviews will "
+                         "count the same matches, and neither can tell which drills did it.")
+                          .arg(other);
+        m_draftMinChange.clear();
+        setStatus(status);
         s->reload();
         return true;
     });

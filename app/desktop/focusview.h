@@ -106,6 +106,9 @@ class FocusView : public pitchloop::desktop::SessionClient {
     Q_PROPERTY(pitchloop::desktop::ZoneMapModel* draftMap READ draftMap CONSTANT)
     Q_PROPERTY(pitchloop::desktop::DrillListModel* draftDrills READ draftDrills CONSTANT)
     Q_PROPERTY(QString draftNote READ draftNote WRITE setDraftNote NOTIFY draftFormChanged)
+    /// The smallest improvement that would matter, as typed: points for rates ("8"), the
+    /// metric's unit for counts; empty for the target's margin.
+    Q_PROPERTY(QString draftMinChange READ draftMinChange WRITE setDraftMinChange NOTIFY draftFormChanged)
     Q_PROPERTY(int draftReviewAfter READ draftReviewAfter WRITE setDraftReviewAfter NOTIFY draftFormChanged)
     Q_PROPERTY(QString draftReviewOn READ draftReviewOn WRITE setDraftReviewOn NOTIFY draftFormChanged)
     Q_PROPERTY(QString draftBy READ draftBy WRITE setDraftBy NOTIFY draftFormChanged)
@@ -184,6 +187,12 @@ public:
     ZoneMapModel* draftMap() const { return m_draftMap; }
     DrillListModel* draftDrills() const { return m_draftDrillModel; }
     QString draftNote() const { return m_draftNote; }
+    QString draftMinChange() const { return m_draftMinChange; }
+    void setDraftMinChange(const QString& v) {
+        if (v == m_draftMinChange) return;
+        m_draftMinChange = v;
+        emit draftFormChanged();
+    }
     void setDraftNote(const QString& v);
     int draftReviewAfter() const { return m_draftReviewAfter; }
     void setDraftReviewAfter(int v);
@@ -281,6 +290,7 @@ private:
     ZoneMapModel* m_draftMap;
     DrillListModel* m_draftDrillModel;
     QString m_draftNote;
+    QString m_draftMinChange;
     int m_draftReviewAfter = 5;
     QString m_draftReviewOn, m_draftBy;
     QStringList m_draftProblems;

@@ -188,19 +188,30 @@ void MatchDebrief::refresh() {
                                     s->metricsById(), debriefed.previousMatchId, true);
             auto inMatchOnly = debriefRows(tr("Slipped in this match alone"), debriefed.slippedInMatch,
                                            s->metricsById(), debriefed.previousMatchId, false);
-            auto watch = debriefRows(tr("On watch over %1").arg(phrase), debriefed.watched, s->metricsById(),
+            auto watch = debriefRows(tr("Likely off or close to the line over %1").arg(phrase), debriefed.watched, s->metricsById(),
                                      debriefed.previousMatchId, false);
+            auto unusual = debriefRows(tr("Unusual in this match alone (one match cannot judge a per-match count target; a team on its target has a match like this at most once in a hundred)"),
+                                       debriefed.unusualInMatch, s->metricsById(),
+                                       debriefed.previousMatchId, false);
             rows.insert(rows.end(), inMatchOnly.begin(), inMatchOnly.end());
+            rows.insert(rows.end(), unusual.begin(), unusual.end());
             rows.insert(rows.end(), watch.begin(), watch.end());
             m_items->reset(std::move(rows));
         }
-        m_judgedText = tr("%1 zones with targets judged over %2, %3 with too little data. If every "
-                          "true value sat exactly on its target, chance alone would flag about %4. Flags are "
-                          "evidence for the staff to weigh, not verdicts.")
+        m_judgedText = tr("%1 zones with targets judged over %2, %3 with too little data. A zone is "
+                          "called slipped only when it is almost certainly past its target (chance "
+                          "%4 or more), so that about %5 false flag a season is expected across "
+                          "the board; the ranges shown are %6 ranges. If every true value sat "
+                          "exactly on its target, chance alone would flag at most about %7 of "
+                          "these zones at some point this season. Flags are evidence for the "
+                          "staff to weigh, not verdicts.")
                            .arg(debriefed.judged)
                            .arg(phrase)
                            .arg(debriefed.tooLittleData)
-                           .arg(QLocale().toString(debriefed.chanceFlags, 'f', 1));
+                           .arg(QLocale().toString(100 * debriefed.offThreshold, 'f', 2) + QStringLiteral(" %"))
+                           .arg(QLocale().toString(s->flagSettings().falseFlagsPerSeason, 'g', 3))
+                           .arg(QLocale().toString(100 * s->flagSettings().level, 'f', 0) + QStringLiteral(" %"))
+                           .arg(QLocale().toString(debriefed.seasonChanceFlags, 'f', 1));
     } else {
         m_items->reset({});
         m_itemsSeason.reset();

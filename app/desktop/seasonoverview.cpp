@@ -72,15 +72,15 @@ void SeasonOverview::refresh() {
         m_slipped = static_cast<int>(debriefed.slippedInWindow.size());
         m_watch = static_cast<int>(debriefed.watched.size());
         m_recovered = static_cast<int>(debriefed.recovered.size());
-        m_chanceFlags = debriefed.chanceFlags;
+        m_chanceFlags = debriefed.seasonChanceFlags;
         m_chanceText = tr("If every true value sat exactly on its target, chance alone would flag "
-                          "about %1 of these %2 zones.")
-                           .arg(QLocale().toString(debriefed.chanceFlags, 'f', 1))
+                          "at most about %1 of these %2 zones at some point this season.")
+                           .arg(QLocale().toString(debriefed.seasonChanceFlags, 'f', 1))
                            .arg(debriefed.judged);
         const QString window = windowPhrase(debriefed.window);
         auto rows = debriefRows(tr("Slipped over %1").arg(window), debriefed.slippedInWindow,
                                 s->metricsById(), debriefed.previousMatchId, true);
-        auto watch = debriefRows(tr("On watch over %1").arg(window), debriefed.watched,
+        auto watch = debriefRows(tr("Likely off or close to the line over %1").arg(window), debriefed.watched,
                                  s->metricsById(), debriefed.previousMatchId, false);
         auto back = debriefRows(tr("Back on target since %1").arg(QString::fromStdString(debriefed.previousMatchId)),
                                 debriefed.recovered, s->metricsById(), debriefed.previousMatchId, false);

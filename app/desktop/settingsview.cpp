@@ -33,7 +33,8 @@ std::optional<double> readNumber(const QString& typed) {
 bool sameFlags(const FlagSettings& a, const FlagSettings& b) {
     return a.level == b.level && a.rateInterval == b.rateInterval && a.window == b.window &&
            a.offThreshold == b.offThreshold && a.watchThreshold == b.watchThreshold &&
-           a.fdr == b.fdr && a.fdrQ == b.fdrQ;
+           a.fdr == b.fdr && a.fdrQ == b.fdrQ && a.falseFlagsPerSeason == b.falseFlagsPerSeason &&
+           a.seasonMatches == b.seasonMatches && a.matchVariation == b.matchVariation;
 }
 
 QString gridDescription(const ZoneGrid& g) {
@@ -67,6 +68,9 @@ void SettingsView::setOffThresholdText(const QString& t) { setField(m_form.off, 
 void SettingsView::setWatchThresholdText(const QString& t) { setField(m_form.watch, t); }
 void SettingsView::setFdr(bool on) { setField(m_form.fdr, on); }
 void SettingsView::setFdrQText(const QString& t) { setField(m_form.fdrQ, t); }
+void SettingsView::setBudgetText(const QString& t) { setField(m_form.budget, t); }
+void SettingsView::setSeasonMatchesText(const QString& t) { setField(m_form.seasonMatches, t); }
+void SettingsView::setMatchVariation(bool on) { setField(m_form.variation, on); }
 
 bool SettingsView::edited() const {
     return !(m_form == m_loadedForm) || m_caps->texts() != m_loadedCaps;
@@ -84,6 +88,13 @@ QString SettingsView::watchDefault() const { return tr("Default %1").arg(num(Fla
 QString SettingsView::fdrDefault() const {
     const FlagSettings defaults;
     return tr("Default %1, q = %2").arg(defaults.fdr ? tr("on") : tr("off"), num(defaults.fdrQ));
+}
+
+QString SettingsView::budgetDefault() const {
+    const FlagSettings d;
+    return tr("Default %1 a season over %2 matches, variation allowed for")
+        .arg(num(d.falseFlagsPerSeason))
+        .arg(d.seasonMatches);
 }
 
 QString SettingsView::undoText() const {
@@ -106,6 +117,9 @@ SettingsView::Form SettingsView::formOf(const FlagSettings& f) {
     form.watch = num(f.watchThreshold);
     form.fdr = f.fdr;
     form.fdrQ = num(f.fdrQ);
+    form.budget = num(f.falseFlagsPerSeason);
+    form.seasonMatches = QString::number(f.seasonMatches);
+    form.variation = f.matchVariation;
     return form;
 }
 
@@ -127,10 +141,17 @@ void SettingsView::refresh() {
     m_stored = {repo->flagSettings(), FixtureStore(*repo).caps()};
     m_gridText = gridDescription(repo->tallyGrid());
     const FlagSettings& f = m_stored.flags;
-    m_ruleText = tr("Now: judged over %1; off target at P(miss) ≥ %2%3; watch at %4; a %5 around each value.")
-                     .arg(windowPhrase(f.window), num(f.offThreshold),
+    const QString offRule =
+        f.falseFlagsPerSeason > 0
+            ? tr("off target when almost certain, so that about %1 false flag(s) a season are expected across the board")
+                  .arg(num(f.falseFlagsPerSeason))
+            : tr("off target at P(miss) ≥ %1").arg(num(f.offThreshold));
+    m_ruleText = tr("Now: judged over %1; %2%3; close to the line at %4; a %5 around each value; %6.")
+                     .arg(windowPhrase(f.window), offRule,
                           f.fdr ? tr(" with Benjamini–Hochberg at q = %1").arg(num(f.fdrQ)) : QString(),
-                          num(f.watchThreshold), desktop::levelText(f.level));
+                          num(f.watchThreshold), desktop::levelText(f.level),
+                          f.matchVariation ? tr("the usual swing from match to match allowed for")
+                                           : tr("pure chance only (no match-to-match variation)"));
     // What the coach typed and has not saved stays, unless a save or undo just wrote the file.
     if (m_reloadForm || !edited()) loadForm();
     m_reloadForm = false;
@@ -185,6 +206,20 @@ bool SettingsView::save() {
     share(tr("Watch threshold"), m_form.watch, f.watchThreshold);
     share(tr("FDR q"), m_form.fdrQ, f.fdrQ);
     f.fdr = m_form.fdr;
+    f.matchVariation = m_form.variation;
+    if (const auto b = readNumber(m_form.budget); b && *b >= 0 && *b <= 100 && !m_form.budget.contains(QLatin1Char('%')))
+        f.falseFlagsPerSeason = *b;
+    else
+        problems << tr("False flags a season: '%1' is not a number from 0 (use the fixed threshold) to 100.")
+                        .arg(m_form.budget.trimmed());
+    {
+        bool ok = false;
+        const int n = m_form.seasonMatches.trimmed().toInt(&ok);
+        if (ok && n >= 1 && n <= 120) f.seasonMatches = n;
+        else
+            problems << tr("Matches a season: '%1' is not a whole number from 1 to 120.")
+                            .arg(m_form.seasonMatches.trimmed());
+    }
     f.rateInterval = m_form.interval == 1 ? IntervalMethod::Jeffreys : IntervalMethod::Wilson;
 
     // The window in the text Window::parse reads, so the model's limits decide.

@@ -36,6 +36,11 @@ class SettingsView : public pitchloop::desktop::SessionClient {
     Q_PROPERTY(QString watchThresholdText READ watchThresholdText WRITE setWatchThresholdText NOTIFY formChanged)
     Q_PROPERTY(bool fdr READ fdr WRITE setFdr NOTIFY formChanged)
     Q_PROPERTY(QString fdrQText READ fdrQText WRITE setFdrQText NOTIFY formChanged)
+    /// The season's alarm budget: about this many false off-target flags a season across the board.
+    Q_PROPERTY(QString budgetText READ budgetText WRITE setBudgetText NOTIFY formChanged)
+    Q_PROPERTY(QString seasonMatchesText READ seasonMatchesText WRITE setSeasonMatchesText NOTIFY formChanged)
+    Q_PROPERTY(bool matchVariation READ matchVariation WRITE setMatchVariation NOTIFY formChanged)
+    Q_PROPERTY(QString budgetDefault READ budgetDefault CONSTANT)
     Q_PROPERTY(pitchloop::desktop::IntensityCapModel* caps READ caps CONSTANT)
     /// The form differs from the stored settings.
     Q_PROPERTY(bool edited READ edited NOTIFY formChanged)
@@ -77,6 +82,13 @@ public:
     void setFdr(bool on);
     QString fdrQText() const { return m_form.fdrQ; }
     void setFdrQText(const QString& t);
+    QString budgetText() const { return m_form.budget; }
+    void setBudgetText(const QString& t);
+    QString seasonMatchesText() const { return m_form.seasonMatches; }
+    void setSeasonMatchesText(const QString& t);
+    bool matchVariation() const { return m_form.variation; }
+    void setMatchVariation(bool on);
+    QString budgetDefault() const;
     IntensityCapModel* caps() const { return m_caps; }
     bool edited() const;
 
@@ -115,10 +127,11 @@ protected:
 private:
     /// The form's contents (caps live in the cap model).
     struct Form {
-        QString level, windowN, lambda, off, watch, fdrQ;
+        QString level, windowN, lambda, off, watch, fdrQ, budget, seasonMatches;
         int interval = 0;
         int windowKind = 0;
         bool fdr = false;
+        bool variation = true;
         bool operator==(const Form&) const = default;
     };
     /// Settings as stored: the flags and the caps together.

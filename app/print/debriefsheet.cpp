@@ -508,17 +508,22 @@ DrawReport DebriefLayout::draw(QPainter& p, QPdfWriter& writer) {
         QString summary =
             QStringLiteral("%1 zones with targets judged over %2 (%3 more have too little data); "
                            "if every true value sat exactly on its target, chance alone would "
-                           "flag about %4 of them.")
+                           "flag at most about %4 of them at some point this season.")
                 .arg(m_d.judged)
                 .arg(window)
                 .arg(m_d.tooLittleData)
                 .arg(m_d.chanceFlags, 0, 'f', 1);
         flow.push_back(paragraph(summary, sheetFont(8), colours::kMuted));
-        table(flow, QStringLiteral("On watch over %1").arg(window),
-              QStringLiteral("close to the target, not past it"), m_d.watched);
+        if (!m_d.unusualInMatch.empty())
+            table(flow, QStringLiteral("Unusual in this match alone"),
+                  QStringLiteral("one match cannot judge a per-match count target; a team on its "
+                                 "target has a match like this at most once in a hundred"),
+                  m_d.unusualInMatch);
+        table(flow, QStringLiteral("Likely off or close to the line over %1").arg(window),
+              QStringLiteral("not yet certain enough to flag"), m_d.watched);
         if (!m_d.previousMatchId.empty())
             table(flow, QStringLiteral("Recovered since %1").arg(q(m_d.previousMatchId)),
-                  QStringLiteral("off target or on watch then, on target now"), m_d.recovered);
+                  QStringLiteral("off, likely off or close to the line then, on target now"), m_d.recovered);
     }
 
     // Pages: place the flow, keeping a heading with what follows it.

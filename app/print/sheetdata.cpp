@@ -194,9 +194,12 @@ SheetResult<DebriefSheetData> debriefSheetData(ClubRepository& repo, const std::
             d.recovered.push_back(mark(item, specs, false, hasPrevious));
         for (const auto& item : debrief.watched)
             d.watched.push_back(mark(item, specs, false, hasPrevious));
+        for (const auto& item : debrief.unusualInMatch)
+            d.unusualInMatch.push_back(mark(item, specs, false, hasPrevious));
         d.judged = debrief.judged;
         d.tooLittleData = debrief.tooLittleData;
-        d.chanceFlags = debrief.chanceFlags;
+        d.chanceFlags = debrief.seasonChanceFlags;
+        d.offThreshold = debrief.offThreshold;
     } else if (focal > 0) {
         d.previousMatchId = tallies.matchIds[focal - 1];
     }

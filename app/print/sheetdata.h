@@ -119,7 +119,8 @@ struct DebriefSheetData {
     std::vector<DebriefMark> slippedInWindow; ///< the model's order: most certain first
     std::vector<DebriefMark> slippedInMatch;
     std::vector<DebriefMark> recovered; ///< off target or watched after the previous match
-    std::vector<DebriefMark> watched;   ///< on watch over the window
+    std::vector<DebriefMark> watched;   ///< likely off or close to the line over the window
+    std::vector<DebriefMark> unusualInMatch; ///< per-match counts unusual for a team on target
     int judged = 0;
     int tooLittleData = 0;
     double chanceFlags = 0;

@@ -202,6 +202,15 @@ Card {
             placeholderText: qsTr("what the staff saw, for whoever reads it later")
             onTextEdited: root.view.draftNote = text
         }
+        Label { text: qsTr("Smallest change that matters"); color: Theme.textMuted }
+        TextField {
+            objectName: "draftMinChange"
+            Layout.fillWidth: true
+            Layout.columnSpan: 3
+            text: root.view.draftMinChange
+            placeholderText: qsTr("e.g. 8 (points for a share, the metric's unit for a count); empty: the target's margin")
+            onTextEdited: root.view.draftMinChange = text
+        }
         Label { text: qsTr("Opened by *"); color: Theme.textMuted }
         TextField {
             objectName: "draftBy"

@@ -198,7 +198,7 @@ Page {
                     visible: overview.hasTargets
                     spacing: Theme.margin
                     FigureTile { value: overview.slippedCount; caption: qsTr("slipped"); zoneState: ZoneState.Slipped }
-                    FigureTile { value: overview.watchCount; caption: qsTr("on watch"); zoneState: ZoneState.CloseToLine }
+                    FigureTile { value: overview.watchCount; caption: qsTr("likely off or close"); zoneState: ZoneState.CloseToLine }
                     FigureTile { value: overview.recoveredCount; caption: qsTr("back on target"); zoneState: ZoneState.OnTarget }
                 }
                 Label {
@@ -232,7 +232,7 @@ Page {
             AgendaCard {
                 title: qsTr("Focuses (today is %1)").arg(agenda.todayText)
                 Layout.preferredWidth: 1.4
-                headline: agenda.openFocusCount === 0
+                headline: agenda.openFocusCount + agenda.dueCount === 0
                           ? qsTr("No open focus")
                           : qsTr("%n open", "", agenda.openFocusCount)
                             + (agenda.dueCount > 0 ? qsTr(" · %n due for review", "", agenda.dueCount) : "")

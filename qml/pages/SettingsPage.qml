@@ -198,8 +198,40 @@ Page {
                     }
                     SettingsRow {
                         Layout.fillWidth: true
+                        label: qsTr("False flags a season")
+                        explanation: qsTr("About how many zones truly on target you accept to see called off in a season, across every metric and zone with a target (each zone at most 5 %). 0 uses the fixed threshold below.")
+                        defaultText: settings.budgetDefault
+                        TextField {
+                            objectName: "budget"
+                            Layout.preferredWidth: 60
+                            text: settings.budgetText
+                            onTextEdited: settings.budgetText = text
+                        }
+                        Label {
+                            text: qsTr("over")
+                            color: Theme.textMuted
+                        }
+                        TextField {
+                            objectName: "seasonMatches"
+                            Layout.preferredWidth: 50
+                            text: settings.seasonMatchesText
+                            onTextEdited: settings.seasonMatchesText = text
+                        }
+                        Label {
+                            text: qsTr("matches")
+                            color: Theme.textMuted
+                        }
+                        CheckBox {
+                            objectName: "matchVariation"
+                            text: qsTr("Allow for the swing from match to match")
+                            checked: settings.matchVariation
+                            onToggled: settings.matchVariation = checked
+                        }
+                    }
+                    SettingsRow {
+                        Layout.fillWidth: true
                         label: qsTr("Off-target threshold")
-                        explanation: qsTr("Off target when P(true value on the wrong side of the target) reaches this; chosen by simulation to keep false flags rare.")
+                        explanation: qsTr("Used only when false flags a season is 0: off target when P(true value on the wrong side of the target) reaches this.")
                         defaultText: settings.offDefault
                         TextField {
                             Layout.preferredWidth: 90
@@ -210,7 +242,7 @@ Page {
                     SettingsRow {
                         Layout.fillWidth: true
                         label: qsTr("Watch threshold")
-                        explanation: qsTr("On watch when P(short of the watch line: the target moved by its margin) reaches this.")
+                        explanation: qsTr("Close to the line when P(short of the watch line: the target moved by its margin) reaches this.")
                         defaultText: settings.watchDefault
                         TextField {
                             Layout.preferredWidth: 90

@@ -266,20 +266,21 @@ void FocusViewTest::listAndTrainingMinutes() {
     // The club file holds the whole demo season, but a match dated after "today" has not been
     // played: on 28 Sep none of the matches from the 27 Sep start counts yet.
     QCOMPARE(role(*view.focuses(), 0, "progressText").toString(),
-             QStringLiteral("0 of 5 matches played since %1").arg(compactDateText("2026-09-27")));
+             QStringLiteral("0 of 5 matches for the review played since %1").arg(compactDateText("2026-09-27")));
     QCOMPARE(role(*view.focuses(), 0, "phase").toInt(), static_cast<int>(FocusPhase::Open));
     QCOMPARE(role(*view.focuses(), 0, "minutesText").toString(),
-             QStringLiteral("0 min of training so far")); // the session is after "today"
+             QStringLiteral("0 min of training up to today")); // the session is after "today"
 
     view.setToday(kToday);
     const int minutes = model::SessionStore(*m_reference).minutesOnFocus(m_focusId, f->startDate,
                                                                         kToday.toStdString());
     QCOMPARE(minutes, 25);
     QCOMPARE(role(*view.focuses(), 0, "minutesText").toString(),
-             QStringLiteral("%1 min of training so far").arg(minutes));
-    // By 1 Dec the review point is passed; the progress counts at most the 5.
+             QStringLiteral("%1 min of training up to today").arg(minutes));
+    // By 1 Dec the review point is passed: the 5 the review needs, and how many in all (the
+    // same count the detail's "played so far" gives).
     QCOMPARE(role(*view.focuses(), 0, "progressText").toString(),
-             QStringLiteral("5 of 5 matches played since %1").arg(compactDateText("2026-09-27")));
+             QStringLiteral("5 of 5 matches for the review played since %1 (10 in all)").arg(compactDateText("2026-09-27")));
     // The state is model::focusState's.
     const auto season = m_reference->seasonTallies("First team", "2026-27");
     QVERIFY(model::focusState(*f, model::matchesSince(season, f->startDate), kToday.toStdString()) ==

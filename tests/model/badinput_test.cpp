@@ -309,3 +309,12 @@ TEST_CASE("a storage fault in the middle of an ingest rolls the whole file back"
     CHECK(ingestBytes(repo, bytes, "second.json").status == IngestStatus::Added);
     CHECK(dataSnapshot(club.file) != before);
 }
+
+TEST_CASE("a number too large for a double names the event and the field", "[badinput]") {
+    // events[2].x is 1e99999 (number-overflow.json); the JSON parser stops at it with a bare
+    // "number overflow", which must become a problem of the file, not a crash or an exit 1.
+    const auto report = ingestBad("number-overflow.json");
+    CHECK(report.status == IngestStatus::Invalid);
+    const Problem& p = onlyProblem(report, "number-overflow.json", "events[2]", "x");
+    CHECK(contains(p.message, "number too large: 1e99999"));
+}

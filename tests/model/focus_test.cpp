@@ -279,3 +279,20 @@ TEST_CASE("a focus is stored, linked and closed with its numbers", "[review]") {
     CHECK(reviews[0].note == "better on the left, not yet on the right ✓");
     CHECK_FALSE(store.get(id + 1));
 }
+
+TEST_CASE("a second focus on the same metric and zone is found before it is opened", "[review]") {
+    Focus a = focusOn("pass_completion", {{3, 3}, {3, 4}}, "2026-09-01");
+    a.id = 1;
+    Focus b = focusOn("pass_completion", {{2, 5}}, "2026-09-01");
+    b.id = 2;
+    Focus whole = focusOn("regain_5s", {{0, 0}}, "2026-09-01");
+    whole.id = 3;
+    Focus closed = focusOn("pass_completion", {{3, 3}}, "2026-08-01");
+    closed.id = 4;
+    closed.closedAt = "2026-08-30T10:00:00Z";
+    const std::vector<Focus> all{a, b, whole, closed};
+    CHECK(overlappingOpenFocuses(all, "pass_completion", {{3, 4}}) == std::vector<std::int64_t>{1});
+    CHECK(overlappingOpenFocuses(all, "pass_completion", {{1, 1}}).empty());
+    CHECK(overlappingOpenFocuses(all, "regain_5s", {{4, 2}}) == std::vector<std::int64_t>{3});
+    CHECK(overlappingOpenFocuses(all, "losses", {{3, 3}}).empty());
+}
