@@ -3,6 +3,10 @@
 #include "display.h"
 #include "zonestate.h"
 
+#include <QLocale>
+
+#include <cmath>
+
 namespace pitchloop::desktop {
 
 using namespace pitchloop::model;
@@ -32,6 +36,14 @@ std::vector<DebriefRow> debriefRows(const QString& section, const std::vector<De
         r.certaintyText = certaintyText(s.pMiss);
         r.state = ZoneState::from(s.state);
         r.stateText = stateText(s.state);
+        if (s.state == FlagState::TooLittleData && !std::isnan(s.matchTail)) {
+            // One match of a per-match count: not judged, but how rare such a match is.
+            r.stateText = QStringLiteral("Unusual match");
+            r.certaintyText = s.matchTail > 0
+                                  ? QStringLiteral("1 in %1 if on target")
+                                        .arg(QLocale().toString(std::round(1 / s.matchTail), 'f', 0))
+                                  : QStringLiteral("never if on target");
+        }
         r.isNew = markNew && !previousMatchId.empty() && item.before != FlagState::OffTarget;
         if (r.isNew)
             r.changeText = QStringLiteral("new since %1").arg(QString::fromStdString(previousMatchId));

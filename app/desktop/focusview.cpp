@@ -239,6 +239,7 @@ void FocusView::clearDetail() {
     m_changeText.clear();
     m_testText.clear();
     m_beliefText.clear();
+    m_caveatText.clear();
     m_trainingText.clear();
     m_chartTitle.clear();
     m_chartReadingText.clear();
@@ -384,11 +385,13 @@ void FocusView::showReview(const Review& r, bool stored) {
     if (r.finding == ReviewFinding::NoBaseline) {
         m_changeText = tr("No fair baseline, so no change can be measured.");
     } else {
-        m_changeText = tr("Change %1. The untrained zones moved too; had this zone moved like them "
-                          "it would be at %2, so the training zone did %3 (%4 range %5 to %6).")
+        auto bare = [&](double v) { return rate ? signedNumber(100 * v, 1) : signedNumber(v, 2); };
+        m_changeText = tr("Change %1. The untrained zones moved too: had this zone moved like them "
+                          "it would be at %2, so the training zone's own change is %3 (%4 "
+                          "%5 to %6).")
                            .arg(amount(r.difference, 1), valueText(kind, r.expected),
-                                amount(r.effect, 1), level, amount(r.effectInterval.low, 1),
-                                amount(r.effectInterval.high, 1));
+                                amount(r.effect, 1), level, bare(r.effectInterval.low),
+                                bare(r.effectInterval.high));
     }
     // One plain sentence for what the numbers can say, then how sure.
     QString finding;
@@ -403,10 +406,10 @@ void FocusView::showReview(const Review& r, bool stored) {
     case ReviewFinding::NoClearChange: finding = tr("No clear change beyond what the untrained zones did."); break;
     case ReviewFinding::NoBaseline: finding = tr("Read against the target only."); break;
     }
-    m_testText = finding + QLatin1Char(' ') +
-                 tr("A few matches cannot show that the drills caused a change: opponents, "
-                    "line-ups and luck vary too. The range allows for the usual swing from match "
-                    "to match.");
+    m_testText = finding;
+    m_caveatText = tr("A few matches cannot show that the drills caused a change: opponents, "
+                      "line-ups and luck vary too. The ranges allow for the usual swing from "
+                      "match to match.");
     auto prob = [](double p) {
         return std::isnan(p) ? QStringLiteral("unknown")
                : p > 0.999   ? QStringLiteral("more than 99.9 %")

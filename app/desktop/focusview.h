@@ -73,6 +73,8 @@ class FocusView : public pitchloop::desktop::SessionClient {
     Q_PROPERTY(QString changeText READ changeText NOTIFY detailChanged)
     Q_PROPERTY(QString testText READ testText NOTIFY detailChanged)
     Q_PROPERTY(QString beliefText READ beliefText NOTIFY detailChanged)
+    /// What the review's numbers cannot show, beside every review.
+    Q_PROPERTY(QString caveatText READ caveatText NOTIFY detailChanged)
     Q_PROPERTY(QString trainingText READ trainingText NOTIFY detailChanged)
     Q_PROPERTY(QString chartTitle READ chartTitle NOTIFY detailChanged)
     Q_PROPERTY(QString chartReadingText READ chartReadingText NOTIFY detailChanged)
@@ -152,6 +154,7 @@ public:
     QString changeText() const { return m_changeText; }
     QString testText() const { return m_testText; }
     QString beliefText() const { return m_beliefText; }
+    QString caveatText() const { return m_caveatText; }
     QString trainingText() const { return m_trainingText; }
     QString chartTitle() const { return m_chartTitle; }
     QString chartReadingText() const { return m_chartReadingText; }
@@ -269,7 +272,7 @@ private:
 
     bool m_hasReview = false;
     QString m_reviewProblem, m_reviewSourceText, m_beforeValueText, m_afterValueText, m_beforeText,
-        m_afterText, m_changeText, m_testText, m_beliefText, m_trainingText, m_chartTitle,
+        m_afterText, m_changeText, m_testText, m_beliefText, m_caveatText, m_trainingText, m_chartTitle,
         m_chartReadingText;
     std::string m_reviewJson; ///< the computed review, stored with a verdict
     ControlChartModel* m_chart;

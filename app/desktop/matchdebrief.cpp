@@ -190,7 +190,7 @@ void MatchDebrief::refresh() {
                                            s->metricsById(), debriefed.previousMatchId, false);
             auto watch = debriefRows(tr("Likely off or close to the line over %1").arg(phrase), debriefed.watched, s->metricsById(),
                                      debriefed.previousMatchId, false);
-            auto unusual = debriefRows(tr("Unusual in this match alone (one match cannot judge a per-match count target; a team on its target has a match like this at most once in a hundred)"),
+            auto unusual = debriefRows(tr("Unusual in this match alone"),
                                        debriefed.unusualInMatch, s->metricsById(),
                                        debriefed.previousMatchId, false);
             rows.insert(rows.end(), inMatchOnly.begin(), inMatchOnly.end());
@@ -212,6 +212,10 @@ void MatchDebrief::refresh() {
                            .arg(QLocale().toString(s->flagSettings().falseFlagsPerSeason, 'g', 3))
                            .arg(QLocale().toString(100 * s->flagSettings().level, 'f', 0) + QStringLiteral(" %"))
                            .arg(QLocale().toString(debriefed.seasonChanceFlags, 'f', 1));
+        if (!debriefed.unusualInMatch.empty())
+            m_judgedText += QLatin1Char(' ') +
+                            tr("One match cannot judge a per-match count target; “unusual match” "
+                               "marks one that a team on its target has at most once in a hundred.");
     } else {
         m_items->reset({});
         m_itemsSeason.reset();

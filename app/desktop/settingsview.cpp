@@ -143,8 +143,10 @@ void SettingsView::refresh() {
     const FlagSettings& f = m_stored.flags;
     const QString offRule =
         f.falseFlagsPerSeason > 0
-            ? tr("off target when almost certain, so that about %1 false flag(s) a season are expected across the board")
-                  .arg(num(f.falseFlagsPerSeason))
+            ? (f.falseFlagsPerSeason == 1
+                   ? tr("off target when almost certain, so that about 1 false flag a season is expected across the board")
+                   : tr("off target when almost certain, so that about %1 false flags a season are expected across the board")
+                         .arg(num(f.falseFlagsPerSeason)))
             : tr("off target at P(miss) ≥ %1").arg(num(f.offThreshold));
     m_ruleText = tr("Now: judged over %1; %2%3; close to the line at %4; a %5 around each value; %6.")
                      .arg(windowPhrase(f.window), offRule,

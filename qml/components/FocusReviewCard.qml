@@ -64,11 +64,12 @@ Card {
             caption: qsTr("from the start on")
         }
     }
+    Line { visible: root.view.hasReview; text: root.view.testText; font.bold: true }
+    Line { visible: root.view.hasReview; text: root.view.beliefText }
+    Line { visible: root.view.hasReview; text: root.view.changeText }
     Line { visible: root.view.hasReview; text: root.view.beforeText }
     Line { visible: root.view.hasReview; text: root.view.afterText }
-    Line { visible: root.view.hasReview; text: root.view.changeText; font.bold: true }
-    Line { visible: root.view.hasReview; text: root.view.testText }
-    Line { visible: root.view.hasReview; text: root.view.beliefText }
+    Line { visible: root.view.hasReview; text: root.view.caveatText; color: Theme.textMuted }
     Line { visible: root.view.hasReview; text: root.view.trainingText; color: Theme.textMuted }
 
     Label {

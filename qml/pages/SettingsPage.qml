@@ -221,9 +221,14 @@ Page {
                             text: qsTr("matches")
                             color: Theme.textMuted
                         }
+                    }
+                    SettingsRow {
+                        Layout.fillWidth: true
+                        label: qsTr("Match-to-match swing")
+                        explanation: qsTr("A zone's true rate moves with the opponent, the score and the line-up; allowing for it, estimated from your own matches, keeps busy zones from being flagged by ordinary swings.")
                         CheckBox {
                             objectName: "matchVariation"
-                            text: qsTr("Allow for the swing from match to match")
+                            text: settings.matchVariation ? qsTr("Allowed for") : qsTr("Ignored (pure chance only)")
                             checked: settings.matchVariation
                             onToggled: settings.matchVariation = checked
                         }
@@ -241,7 +246,7 @@ Page {
                     }
                     SettingsRow {
                         Layout.fillWidth: true
-                        label: qsTr("Watch threshold")
+                        label: qsTr("Close-to-line threshold")
                         explanation: qsTr("Close to the line when P(short of the watch line: the target moved by its margin) reaches this.")
                         defaultText: settings.watchDefault
                         TextField {

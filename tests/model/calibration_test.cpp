@@ -1,6 +1,7 @@
 // Calibration with match-to-match variation, in CI: seeded simulations of whole seasons judged
 // by the model's own code (tests/model/variation_sim.h). The full study with more seasons and
-// every table of docs/statistics.md runs on demand: `model_tests "[.study]"`.
+// every table of docs/statistics.md is a benchmark, run on demand:
+// build/tests/bench/pitchloop_variation_study.
 //
 // Numbers are invented (a simulated board); the aims come from docs/statistics.md.
 
@@ -127,23 +128,4 @@ TEST_CASE("a ten-point drop at 15 chances a match is caught within six matches a
     CHECK(at15 >= 0.05);
     CHECK(at40 >= 0.15);
     CHECK(at40 > at15);
-}
-
-TEST_CASE("variation study (on demand)", "[.study]") {
-    // The tables of docs/statistics.md "Match-to-match variation": run with
-    //   build/tests/model_tests "[.study]"
-    std::printf("false flags, share of on-target zone-seasons ever off (34 matches, 200 seasons):\n");
-    std::printf("%-10s %8s %8s %8s\n", "chances", "SD 0", "SD 0.05", "SD 0.08");
-    for (double c : {4.0, 8.0, 15.0, 40.0}) {
-        std::printf("%-10g", c);
-        for (double sd : {0.0, 0.05, 0.08})
-            std::printf(" %7.1f%%", 100 * falseFlags(std::vector<double>(30, c), sd, 200, 11));
-        std::printf("\n");
-    }
-    std::printf("\nreviews of the worst-looking unchanged zone claiming an improvement (1,000 seasons):\n");
-    for (double sd : {0.0, 0.05, 0.08})
-        std::printf("SD %-5g %6.1f%%\n", sd, 100 * falseClaims(spreadChances(), sd, 1000, 12));
-    std::printf("\nten-point drops caught within 6 matches (SD 0.08, 200 seasons × 5 zones):\n");
-    for (double c : {4.0, 8.0, 15.0, 40.0, 80.0})
-        std::printf("%-6g chances %6.1f%%\n", c, 100 * detection(c, 0.08, 200, 13));
 }

@@ -85,8 +85,8 @@ inline std::vector<Target> boardTargets(double value) {
     return out;
 }
 
-/// The first match (0-based) at which each zone is judged off target over the default window
-/// with the default settings, or −1.
+/// The first match (0-based) at which each zone is judged off target over the settings' window,
+/// or −1.
 inline std::vector<int> firstOff(const SeasonTallies& s, const std::vector<Target>& targets,
                                  const FlagSettings& settings, int upTo) {
     const ZoneGrid grid;
