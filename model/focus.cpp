@@ -230,6 +230,7 @@ FocusEvidence readEvidence(const std::string& text, const std::string& judgedWin
         ez.level = numberOr(z, "level");
         ez.state = flagStateFrom(z.value("state", std::string()));
         ez.pMiss = numberOr(z, "p_miss");
+        ez.matchTail = numberOr(z, "match_tail");
         if (const auto t = z.find("target"); t != z.end() && t->is_object()) {
             Target target;
             target.key.metric = z.value("metric", std::string());

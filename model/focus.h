@@ -84,6 +84,7 @@ struct EvidenceZone {
     double level = 0;
     FlagState state = FlagState::NoTarget;
     double pMiss = 0;   ///< NaN when not judged
+    double matchTail = std::numeric_limits<double>::quiet_NaN(); ///< ZoneStatus::matchTail
     std::optional<Target> target; ///< direction, value, watch margin, author, effective date
 };
 

@@ -1,7 +1,5 @@
 #include "status.h"
 
-#include <boost/math/distributions/negative_binomial.hpp>
-#include <boost/math/distributions/poisson.hpp>
 #include <boost/math/special_functions/beta.hpp>
 #include <boost/math/special_functions/gamma.hpp>
 
@@ -140,21 +138,10 @@ Evidence poissonEvidence(double count, double exposure, const Target& t, double 
     return e;
 }
 
-/// How unusual one match's count would be for a team exactly on its per-match target: the
-/// negative binomial (gamma-Poisson with the metric's dispersion; Poisson without) tail at or
-/// past the observed count in the wrong direction.
+/// How unusual one match's count would be for a team exactly on its per-match target.
 double singleMatchTail(double count, const Target& t, double phi) {
-    const double mu = std::max(0.0, t.value);
-    const bool atMost = t.direction == Direction::AtMost;
-    const double c = std::round(count);
-    if (mu <= 0) return atMost ? (c > 0 ? 0.0 : 1.0) : 1.0;
-    auto cdf = [&](double k) { // P(X <= k)
-        if (k < 0) return 0.0;
-        if (phi <= 0) return boost::math::cdf(boost::math::poisson_distribution<double>(mu), k);
-        const double r = 1 / phi;
-        return boost::math::cdf(boost::math::negative_binomial_distribution<double>(r, r / (r + mu)), k);
-    };
-    return atMost ? 1 - cdf(c - 1) : cdf(c);
+    return countTail(std::round(count), std::max(0.0, t.value), phi,
+                     t.direction == Direction::AtMost);
 }
 
 std::vector<ZoneTally> zoneSeries(const std::vector<MatchTally>& tallies, int zoneIndex,

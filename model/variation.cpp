@@ -1,5 +1,8 @@
 #include "variation.h"
 
+#include <boost/math/distributions/negative_binomial.hpp>
+#include <boost/math/distributions/poisson.hpp>
+
 #include <algorithm>
 #include <cmath>
 
@@ -128,6 +131,19 @@ MetricVariation estimateVariation(const std::vector<MatchTally>& tallies, std::s
         v.wholePitch = estimateCountDispersion({whole}, n, prior);
     }
     return v;
+}
+
+double countTail(double count, double mean, double phi, bool upper) {
+    const double c = std::floor(count);
+    if (mean <= 0) return upper ? (c > 0 ? 0.0 : 1.0) : (c >= 0 ? 1.0 : 0.0);
+    auto cdf = [&](double k) { // P(X <= k)
+        if (k < 0) return 0.0;
+        if (phi <= 0) return boost::math::cdf(boost::math::poisson_distribution<double>(mean), k);
+        const double r = 1 / phi;
+        return boost::math::cdf(
+            boost::math::negative_binomial_distribution<double>(r, r / (r + mean)), k);
+    };
+    return upper ? 1 - cdf(c - 1) : cdf(c);
 }
 
 double designEffect(MetricKind kind, double dispersion, double den, double mean) {

@@ -61,6 +61,11 @@ struct MetricVariation {
 MetricVariation estimateVariation(const std::vector<MatchTally>& tallies, std::size_t upTo,
                                   MetricKind kind, const VariationPrior& prior = {});
 
+/// A tail of one match's count under the gamma-Poisson model with mean `mean` and dispersion
+/// `phi` (negative binomial with r = 1/phi, p = r/(r + mean); Poisson when phi is 0):
+/// P(X >= count) when `upper`, else P(X <= count). A mean of 0 puts all its mass at 0.
+double countTail(double count, double mean, double phi, bool upper);
+
 /// The variance inflation of one match with `den` chances (rates) or exposure (counts) over
 /// pure binomial / Poisson noise: 1 + (den − 1)·rho for rates, 1 + phi·mean·den for counts.
 /// Never below 1.

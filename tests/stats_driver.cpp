@@ -122,6 +122,8 @@ json call(const std::string& fn, const json& a) {
                            {"below", p.below}});
         return out;
     }
+    if (fn == "countTail")
+        return number(countTail(real(a, 0), real(a, 1), real(a, 2), a.at(3).get<bool>()));
     if (fn == "designEffect") {
         const auto kind = a.at(0).get<std::string>() == "rate" ? MetricKind::Rate : MetricKind::Count;
         return number(designEffect(kind, real(a, 1), real(a, 2), real(a, 3)));

@@ -39,10 +39,7 @@ std::vector<DebriefRow> debriefRows(const QString& section, const std::vector<De
         if (s.state == FlagState::TooLittleData && !std::isnan(s.matchTail)) {
             // One match of a per-match count: not judged, but how rare such a match is.
             r.stateText = QStringLiteral("Unusual match");
-            r.certaintyText = s.matchTail > 0
-                                  ? QStringLiteral("1 in %1 if on target")
-                                        .arg(QLocale().toString(std::round(1 / s.matchTail), 'f', 0))
-                                  : QStringLiteral("never if on target");
+            r.certaintyText = singleMatchText(s.matchTail).remove(QStringLiteral("unusual match: "));
         }
         r.isNew = markNew && !previousMatchId.empty() && item.before != FlagState::OffTarget;
         if (r.isNew)

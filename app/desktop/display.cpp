@@ -1,5 +1,6 @@
 #include "display.h"
 
+#include "debrief.h"
 #include "focus.h"
 
 #include <QDate>
@@ -93,6 +94,15 @@ QString stateText(FlagState state) {
     case FlagState::NoTarget: return QStringLiteral("No target");
     }
     return {};
+}
+
+QString singleMatchText(double matchTail) {
+    if (std::isnan(matchTail)) return {};
+    if (matchTail > model::kUnusualMatchTail)
+        return QStringLiteral("a usual match for a team on target");
+    if (matchTail <= 0) return QStringLiteral("unusual match: never if on target");
+    return QStringLiteral("unusual match: 1 in %1 if on target")
+        .arg(QLocale().toString(std::round(1 / matchTail), 'f', 0));
 }
 
 QString certaintyText(double pMiss) {

@@ -32,6 +32,10 @@ QString verdictWord(const std::string& verdict);
 QString stateText(model::FlagState state);
 /// How sure a flag is: "P(miss) 0.64", empty when not judged.
 QString certaintyText(double pMiss);
+/// For one match of a per-match count (not judged): how rare such a match is for a team on its
+/// target, "unusual match: 1 in 6,889 if on target" or "a usual match for a team on target";
+/// empty when `matchTail` is NaN.
+QString singleMatchText(double matchTail);
 /// "Last 5 matches", "This match", "Season so far", "EWMA, λ 0.3".
 QString windowText(const model::Window& w);
 /// The same inside a sentence: "the last 5 matches", "this match", "the season so far".

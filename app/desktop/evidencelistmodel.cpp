@@ -41,7 +41,9 @@ void EvidenceListModel::reset(const std::vector<EvidenceZone>& zones, MetricKind
                                 : QStringLiteral("No target");
         r.state = ZoneState::from(z.state);
         r.stateText = stateText(z.state);
-        r.certaintyText = certaintyText(z.pMiss);
+        r.certaintyText = z.state == FlagState::TooLittleData && !std::isnan(z.matchTail)
+                              ? singleMatchText(z.matchTail)
+                              : certaintyText(z.pMiss);
         m_rows.push_back(std::move(r));
     }
     endResetModel();

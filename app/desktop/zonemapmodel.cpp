@@ -30,7 +30,9 @@ std::vector<ZoneCell> zoneCells(const std::vector<const ZoneStatus*>& statuses, 
         c.targetText = targetText(kind, s->target);
         c.state = ZoneState::from(s->state);
         c.stateText = stateText(s->state);
-        c.certaintyText = certaintyText(s->pMiss);
+        c.certaintyText = s->state == FlagState::TooLittleData && !std::isnan(s->matchTail)
+                              ? singleMatchText(s->matchTail)
+                              : certaintyText(s->pMiss);
         out.push_back(std::move(c));
     }
     return out;

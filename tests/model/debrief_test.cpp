@@ -56,17 +56,21 @@ std::optional<FlagState> beforeOf(const std::vector<DebriefItem>& items, int ban
 ///   (1,1)  ≥ 0.8        45/50  45/50  0/50 | 90/100 on target   | 45/100  off   (new slip)
 ///   (1,2)  ≥ 0.8        0/50   0/50   0/50 | 0/100  off         | 0/100   off   (still off)
 ///   (1,3)  ≥ 0.3        0/50   10/50  50/50| 10/100 off         | 60/100  on    (recovered)
-///   (1,4)  ≥ 0.5        26/50  26/50  50/50| 52/100 watch       | 76/100  on    (recovered)
+///   (1,4)  ≥ 0.5        26/50  26/50  50/50| 52/100 close       | 76/100  on    (recovered)
 ///   (1,5)  ≥ 0.5        45/50  45/50  45/50| 90/100 on          | 90/100  on
-///   (2,1)  ≥ 0.8        -      42/50  42/50| 42/50  watch       | 84/100  watch
+///   (2,1)  ≥ 0.8        -      42/50  42/50| 42/50  close       | 84/100  close
 ///   (2,2)  ≥ 0.8, min 30  nothing at all   | too little data    | too little data
 ///
-/// Watch margin 0.05 everywhere, min sample 30. Evidence (scipy, see the file's head):
-///   90/100 vs 0.8: P(miss) 0.0037, P(p < 0.85) 0.075 → on;  45/100 vs 0.8: 1 − 5e-15 → off;
-///   0/100 vs 0.8: 1.0 → off;  10/100 vs 0.3: 0.9999992 → off;  60/100 vs 0.3: 2.7e-10 → on;
-///   52/100 vs 0.5: 0.345, P(p < 0.55) 0.727 → close to the line;  76/100 vs 0.5: 5.0e-08 → on;
-///   90/100 vs 0.5: 5e-18 → on;  42/50 vs 0.8: 0.246, P(p < 0.85) 0.596 → close to the line;
-///   84/100 vs 0.8: 0.158, P(p < 0.85) 0.622 → close to the line.
+/// Watch margin 0.05 everywhere, min sample 30. Evidence, scipy's full values (see the file's
+/// head; P(miss) = st.beta.cdf(T, x+.5, n-x+.5), the line's st.beta.cdf(T+0.05, x+.5, n-x+.5)):
+///   90/100 vs 0.8: P(miss) 0.003694334670360444, line 0.07494211374358506 → on;
+///   45/100 vs 0.8: 0.9999999999999946 → off;  0/100 vs 0.8: 1.0 → off;
+///   10/100 vs 0.3: 0.9999992153400298 → off;  60/100 vs 0.3: 2.7126484799522144e-10 → on;
+///   52/100 vs 0.5: 0.344683158378866, line 0.727358272312953 → close to the line;
+///   76/100 vs 0.5: 5.028473079372215e-08 → on;  90/100 vs 0.5: 5.114057577485567e-18 → on;
+///   42/50 vs 0.8: 0.2455959239683746, line 0.5957989073016254 → close to the line;
+///   84/100 vs 0.8: 0.15844527150869028, line 0.6217152758128714 → close to the line.
+/// (Off at P(miss) ≥ 0.999, likely off from 0.5: no zone here sits between the two.)
 /// In M3 alone: (1,1) and (1,2) are 0/50 (off); (1,3) 50/50, (1,4) 50/50, (1,5) 45/50 on.
 struct StorySeason {
     SeasonFixture f{ZoneGrid{}, {"2026-08-08", "2026-08-15", "2026-08-22"}};

@@ -377,10 +377,13 @@ TEST_CASE("probability that a Poisson rate improved", "[stats]") {
 // ---- p-chart -----------------------------------------------------------------------------
 
 TEST_CASE("p-chart matches the NIST/SEMATECH e-Handbook example", "[stats]") {
-    // NIST/SEMATECH e-Handbook §6.3.3.2 (data also in Montgomery, Introduction to Statistical
-    // Quality Control, 2nd ed.): 30 samples of 50. From memory, unconfirmed, though consistent
-    // with the handbook's p̄ = 0.2313: the data, UCL 0.4102, LCL 0.0524, samples 15 and 23
-    // above the UCL. Limits printed to 4 decimals.
+    // The layout of the NIST/SEMATECH e-Handbook §6.3.3.2 example: 30 samples of 50. The data
+    // below are recalled from the handbook (from memory: the page could not be read here), so
+    // the expected numbers are hand-derived from the formula on these data, not quoted:
+    //   p̄ = 347/1500 = 0.231333…, σ = √(p̄(1 − p̄)/50) = 0.0596353…,
+    //   UCL = p̄ + 3σ = 0.41023911859473844, LCL = p̄ − 3σ = 0.05242754807192823
+    //   (/usr/bin/python3, math.sqrt), samples 15 (22/50) and 23 (24/50) above the UCL.
+    // They agree with the handbook's printed p̄ 0.2313, UCL 0.4102, LCL 0.0524 as recalled.
     const std::vector<long> defectives{12, 15, 8, 10, 4,  7,  16, 9,  14, 10, 5,  6, 17, 12, 22,
                                        8,  10, 5, 13, 11, 20, 18, 24, 15, 9,  12, 7, 13, 9,  6};
     const std::vector<long> sizes(defectives.size(), 50);
@@ -388,8 +391,10 @@ TEST_CASE("p-chart matches the NIST/SEMATECH e-Handbook example", "[stats]") {
     REQUIRE(chart.size() == 30);
     for (std::size_t i = 0; i < chart.size(); ++i) {
         INFO("sample " << i + 1);
-        CHECK_THAT(chart[i].centre, WithinAbs(0.2313, kTable));
-        CHECK_THAT(chart[i].ucl, WithinAbs(0.4102, kTable));
+        CHECK_THAT(chart[i].centre, WithinAbs(347.0 / 1500, 1e-15));
+        CHECK_THAT(chart[i].ucl, WithinAbs(0.41023911859473844, 1e-12));
+        CHECK_THAT(chart[i].lcl, WithinAbs(0.05242754807192823, 1e-12));
+        CHECK_THAT(chart[i].ucl, WithinAbs(0.4102, kTable)); // the printed limits, as recalled
         CHECK_THAT(chart[i].lcl, WithinAbs(0.0524, kTable));
         CHECK(chart[i].above == (i + 1 == 15 || i + 1 == 23));
         CHECK_FALSE(chart[i].below);

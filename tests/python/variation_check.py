@@ -10,6 +10,8 @@ Usage:
    with mean mu and dispersion phi (scipy.stats.nbinom(r = 1/phi, p = r/(r + mu))) the variance
    is mu·(1 + phi·mu). Pitchloop's designEffect must equal scipy's var / (binomial or Poisson
    var) to 1e-9.
+1b. The single-match tail P(X >= k) or P(X <= k) of a per-match count: scipy.stats.nbinom
+   (or poisson when phi = 0) sf / cdf, relative 1e-9.
 2. The estimators, by simulation: seasons of 30 zones × 200 matches drawn with scipy.stats.
    betabinom / nbinom (seeded numpy generator) at known rho / phi; the raw moment estimate
    (no prior) must come within 15 % (relative) or 0.04 of the truth — a count's phi at mean 2
@@ -63,6 +65,27 @@ def main():
             failures += 1
             print("designEffect %s: got %r, scipy %r" % (c["args"], g, e))
     print("design effects: %d cases against scipy betabinom/nbinom variances" % len(cases))
+
+    # 1b. the single-match tail against scipy.stats.nbinom / poisson
+    cases, expected = [], []
+    for _ in range(300):
+        mu = float(rng.uniform(0.2, 12))
+        phi = float(rng.choice([0.0, rng.uniform(0.01, 2)]))
+        k = int(rng.integers(0, 40))
+        upper = bool(rng.integers(0, 2))
+        cases.append({"fn": "countTail", "args": [k, mu, phi, upper]})
+        if phi == 0:
+            d = stats.poisson(mu)
+        else:
+            r = 1 / phi
+            d = stats.nbinom(r, r / (r + mu))
+        expected.append(d.sf(k - 1) if upper else d.cdf(k))
+    got = ask(driver, cases)
+    for c, g, e in zip(cases, got, expected):
+        if abs(g - e) > 1e-9 * max(abs(e), 1e-300) + 1e-15:
+            failures += 1
+            print("countTail %s: got %r, scipy %r" % (c["args"], g, e))
+    print("single-match tails: %d cases against scipy nbinom/poisson" % len(cases))
 
     # 2. estimators by simulation
     def rate_season(rho, p, lam, seed):
