@@ -353,28 +353,52 @@ int FocusVerbs::runReview(ClubRepository& repo, std::ostream& out, std::ostream&
     out << "Focus " << f->id << ": " << r.metric << " in " << zonesText(r.zones) << " ("
         << toString(kind) << ", " << toString(r.better) << " is better), training from "
         << f->startDate << "\n";
-    windowLine("before", r.before);
+    if (r.before.matchIds.empty()) out << "before  none: " << r.baselineNote << "\n";
+    else windowLine("before", r.before);
+    if (!r.trigger.matchIds.empty()) windowLine("flag", r.trigger);
     windowLine("after", r.after);
-    char line[400];
-    if (kind == MetricKind::Rate)
+    if (!r.before.matchIds.empty()) out << "        (baseline: " << r.baselineNote << ")\n";
+    char line[600];
+    auto amount = [&](double v) {
+        char b[64];
+        if (kind == MetricKind::Rate) std::snprintf(b, sizeof b, "%+.1f points", 100 * v);
+        else std::snprintf(b, sizeof b, "%+.2f%s", v, unit.c_str());
+        return std::string(b);
+    };
+    if (r.finding != ReviewFinding::NoBaseline) {
         std::snprintf(line, sizeof line,
-                      "change  %+.1f points [%g %% Newcombe %+.1f to %+.1f]\n", 100 * r.difference,
-                      100 * r.level, 100 * r.differenceInterval.low, 100 * r.differenceInterval.high);
-    else
-        std::snprintf(line, sizeof line, "change  %+.2f%s (after/before %.2f)\n", r.difference,
-                      unit.c_str(), r.rateRatio);
-    out << line;
-    std::snprintf(line, sizeof line,
-                  "test    %s: p = %.4g two-sided, %.4g one-sided for an improvement\n"
-                  "belief  P(the metric improved) = %.3f (Jeffreys priors)\n",
-                  r.testName.c_str(), r.pTwoSided, r.pImproved, r.probImproved);
-    out << line;
+                      "change  %s; the untrained zones moved from %s to %s, so without training "
+                      "this zone would be at %s\n"
+                      "effect  %s [%g %% %s to %s], after − expected (difference in differences)\n",
+                      amount(r.difference).c_str(), formatValue(kind, r.controlBefore.value).c_str(),
+                      formatValue(kind, r.controlAfter.value).c_str(),
+                      formatValue(kind, r.expected).c_str(), amount(r.effect).c_str(),
+                      100 * r.level, amount(r.effectInterval.low).c_str(),
+                      amount(r.effectInterval.high).c_str());
+        out << line;
+        std::snprintf(line, sizeof line,
+                      "belief  P(improved by at least %s) = %.3f, P(improved at all) = %.3f "
+                      "(one-sided p = %.4g; match-to-match dispersion %.3g)\n",
+                      amount(r.minChange).substr(1).c_str(), r.probImprovedByMinChange,
+                      r.probImproved, r.pImproved, r.dispersion);
+        out << line;
+    }
+    out << "finding " << toString(r.finding) << "\n";
+    if (r.target) {
+        std::snprintf(line, sizeof line, "target  %s %s: P(the after matches meet it) = %.3f\n",
+                      r.target->direction == Direction::AtLeast ? "at least" : "at most",
+                      formatValue(kind, r.target->value).c_str(), r.probAfterMeetsTarget);
+        out << line;
+    }
+    out << "A few matches cannot show that the drills caused a change: opponents, line-ups and "
+           "luck vary too.\n";
     out << "\nMatch by match (" << (kind == MetricKind::Rate ? "p-chart" : "u-chart")
-        << ": centre and 3σ limits from the before window; EWMA λ " << r.ewmaLambda
-        << " from the before value)\n";
+        << ": centre and 3σ limits from the baseline, widened for match-to-match variation; "
+           "chance-weighted EWMA λ "
+        << r.ewmaLambda << " from the first match shown)\n";
     for (const auto& p : r.chart) {
         std::snprintf(line, sizeof line, "  %-12s %-6s %9s   limits %s–%s   ewma %s%s\n",
-                      p.matchId.c_str(), p.after ? "after" : "before",
+                      p.matchId.c_str(), p.after ? "after" : p.trigger ? "flag" : "before",
                       formatValue(kind, p.value).c_str(), formatValue(kind, p.lcl).c_str(),
                       formatValue(kind, p.ucl).c_str(), formatValue(kind, p.ewma).c_str(),
                       p.above ? "   above the upper limit" : p.below ? "   below the lower limit" : "");
