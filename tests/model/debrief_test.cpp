@@ -256,3 +256,23 @@ TEST_CASE("a target set between two matches makes a slip new", "[debrief]") {
     REQUIRE(item);
     CHECK(item->before == FlagState::NoTarget);
 }
+
+TEST_CASE("one match of a count target lists as unusual, not as slipped", "[debrief]") {
+    // pre_shot_passes_against in band 2 lane 5, at most 2 a match: 11 in the one match. Too
+    // little data to judge the target (1 match < 3), but for a team exactly on it such a match
+    // has probability st.poisson.sf(10, 2) = 8.308e-06 ≤ 0.01 (pure Poisson here): unusual.
+    // Band 2 lane 1 has 3 against the same target: st.poisson.sf(2, 2) = 0.3233, not unusual.
+    SeasonFixture f(ZoneGrid{}, {"2026-08-01"});
+    f.set("pre_shot_passes_against", 0, 2, 5, 11, 1);
+    f.set("pre_shot_passes_against", 0, 2, 1, 3, 1);
+    const std::vector<Target> targets{
+        target("pre_shot_passes_against", 2, 5, Direction::AtMost, 2, 1, 3),
+        target("pre_shot_passes_against", 2, 1, Direction::AtMost, 2, 1, 3)};
+    const Debrief d = buildDebrief(f.season, 0, {builtin("pre_shot_passes_against")}, targets,
+                                   f.grid, pure());
+    CHECK(d.slippedInMatch.empty());
+    REQUIRE(d.unusualInMatch.size() == 1);
+    CHECK(d.unusualInMatch[0].now.band == 2);
+    CHECK(d.unusualInMatch[0].now.lane == 5);
+    CHECK(d.unusualInMatch[0].now.matchTail == Approx(8.308224368484216e-06).epsilon(1e-6));
+}

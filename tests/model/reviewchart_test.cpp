@@ -212,3 +212,29 @@ TEST_CASE("a focus's dates: matches since its start and the day after its match"
     CHECK(dayAfter("2028-02-28") == "2028-02-29"); // a leap year
     CHECK(dayAfter("2027-02-28") == "2027-03-01");
 }
+
+TEST_CASE("a baseline of 0 % still gives the chart limits of some width", "[review][chart]") {
+    // Before (M1–M3): 0 of 10 each; after: 2, 0, 1, 0 of 10. The plain p-chart's limits would be
+    // 0 ± 0 (every after match with a success "above"); smoothed by half a success,
+    // p̃ = 0.5/31, each limit is 0 ± 3·√(p̃(1 − p̃)/10) → upper 0.1195 (hand-derived): 1 of 10
+    // is inside it, 2 of 10 above.
+    SeasonFixture s(ZoneGrid{}, kDates);
+    const long after[] = {2, 0, 1, 0};
+    for (std::size_t i = 0; i < 3; ++i) s.set("pass_completion", i, 3, 3, 0, 10);
+    for (std::size_t i = 0; i < 4; ++i) s.set("pass_completion", i + 3, 3, 3, after[i], 10);
+    const auto result = computeReview(focusOn("pass_completion", {{3, 3}}, "2026-08-25"),
+                                      builtin("pass_completion"), s.season, s.grid, 3, 4, 0.95,
+                                      0.3, pure);
+    REQUIRE(result.review);
+    const double pt = 0.5 / 31;
+    const auto& chart = result.review->chart;
+    REQUIRE(chart.size() == 7);
+    for (const auto& p : chart) {
+        CHECK_THAT(p.centre, WithinAbs(0.0, 1e-12));
+        CHECK_THAT(p.ucl, WithinAbs(3 * std::sqrt(pt * (1 - pt) / 10), 1e-12));
+        CHECK(p.ucl > 0.119);
+    }
+    CHECK(chart[3].above);       // 2 of 10
+    CHECK_FALSE(chart[4].above); // 0 of 10
+    CHECK_FALSE(chart[5].above); // 1 of 10
+}
