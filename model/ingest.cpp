@@ -70,4 +70,32 @@ std::string_view toString(IngestStatus s) {
     return "?";
 }
 
+IngestReport ingestTableFile(ClubRepository& repo, const std::filesystem::path& file,
+                             const MappingProfile& profile, const MatchDetails& details,
+                             const IngestOptions& options) {
+    IngestReport report;
+    report.file = file.string();
+    std::string bytes;
+    try {
+        bytes = readFileBytes(file);
+    } catch (const IoError& e) {
+        report.errors.push_back({file.string(), "", "", e.what()});
+        return report;
+    }
+    const MappedTable mapped = mapFile(bytes, profile, details, file.string());
+    report.warnings = mapped.warnings;
+    if (!mapped.errors.empty()) {
+        report.errors = mapped.errors;
+        report.status = IngestStatus::Invalid;
+        return report;
+    }
+    // The mapped match in our own format: the same checks and storage as a native file.
+    IngestReport stored = ingestBytes(repo, mapped.match.dump(), file.string(), options);
+    stored.errors = inTableTerms(stored.errors, mapped, profile);
+    Problems warnings = inTableTerms(stored.warnings, mapped, profile);
+    stored.warnings = report.warnings;
+    stored.warnings.insert(stored.warnings.end(), warnings.begin(), warnings.end());
+    return stored;
+}
+
 } // namespace pitchloop::model

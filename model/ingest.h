@@ -1,6 +1,7 @@
 #pragma once
 // Ingest: one match file in, validated, stored with its tallies in one transaction.
 
+#include "importprofile.h"
 #include "matchreader.h"
 #include "problem.h"
 #include "repository.h"
@@ -43,6 +44,13 @@ IngestReport ingestFile(ClubRepository& repo, const std::filesystem::path& file,
 /// The same from bytes already in memory; `fileName` names them in problems.
 IngestReport ingestBytes(ClubRepository& repo, std::string_view bytes,
                          const std::string& fileName, const IngestOptions& options = {});
+
+/// Reads a table (CSV, TSV, JSON Lines...) with a mapping profile (importprofile.h) and ingests
+/// the match it holds like a native file: the same checks, one transaction, nothing stored on
+/// any error. Problems name the table's file, line and column; unmapped words are errors.
+IngestReport ingestTableFile(ClubRepository& repo, const std::filesystem::path& file,
+                             const MappingProfile& profile, const MatchDetails& details,
+                             const IngestOptions& options = {});
 
 std::string_view toString(IngestStatus s);
 

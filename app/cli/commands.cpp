@@ -27,7 +27,39 @@ namespace fs = std::filesystem;
 
 namespace {
 
+/// The match details given on the command line (they override the profile and the file name).
+struct DetailOptions {
+    std::string id, date, opponent, venue, competition, us, periodLengths;
+    MatchDetails details() const {
+        MatchDetails d;
+        const std::pair<const char*, const std::string*> all[] = {
+            {"id", &id}, {"date", &date}, {"opponent", &opponent}, {"venue", &venue},
+            {"competition", &competition}, {"us", &us}, {"period_lengths", &periodLengths}};
+        for (const auto& [key, value] : all)
+            if (!value->empty()) d.values[key] = *value;
+        return d;
+    }
+    void add(CLI::App* cmd) {
+        cmd->add_option("--match-id", id, "With --profile: the match id (else the profile or file name)");
+        cmd->add_option("--date", date, "With --profile: the match date YYYY-MM-DD");
+        cmd->add_option("--opponent", opponent, "With --profile: the opponent's name");
+        cmd->add_option("--venue", venue, "With --profile: home, away or neutral");
+        cmd->add_option("--competition", competition, "With --profile: the competition");
+        cmd->add_option("--us", us, "With --profile: our club's name as the match calls it");
+        cmd->add_option("--period-lengths", periodLengths,
+                        "With --profile: the periods' lengths in seconds, e.g. 2831,2904");
+    }
+};
+
+/// A profile from its file, or the problems on stderr.
+std::optional<MappingProfile> loadProfile(const std::string& path, std::ostream& err) {
+    ProfileResult p = readProfileFile(path);
+    for (const auto& e : p.errors) err << "error: " << e.describe() << "\n";
+    return p.profile;
+}
+
 int cmdIngest(const Globals& g, const std::vector<std::string>& files, const IngestOptions& opts,
+              const std::optional<MappingProfile>& profile, const MatchDetails& details,
               std::ostream& err) {
     auto repo = openClub(g);
     const bool progress = files.size() > 1 && isatty(STDERR_FILENO);
@@ -35,7 +67,8 @@ int cmdIngest(const Globals& g, const std::vector<std::string>& files, const Ing
     for (std::size_t i = 0; i < files.size(); ++i) {
         if (progress)
             err << "\r\033[K[" << i + 1 << "/" << files.size() << "] " << files[i] << std::flush;
-        const IngestReport r = ingestFile(*repo, files[i], opts);
+        const IngestReport r = profile ? ingestTableFile(*repo, files[i], *profile, details, opts)
+                                       : ingestFile(*repo, files[i], opts);
         if (progress && (!r.ok() || !r.warnings.empty())) err << "\r\033[K";
         for (const auto& w : r.warnings) err << "warning: " << w.describe() << "\n";
         switch (r.status) {
@@ -57,6 +90,57 @@ int cmdIngest(const Globals& g, const std::vector<std::string>& files, const Ing
     err << added << " added, " << replaced << " replaced, " << unchanged << " unchanged, "
         << failed << " failed\n";
     return failed ? kExitBadInput : kExitOk;
+}
+
+int cmdProfileCheck(const std::string& profilePath, const std::string& file,
+                    const MatchDetails& details, std::ostream& out, std::ostream& err) {
+    const auto profile = loadProfile(profilePath, err);
+    if (!profile) return kExitBadInput;
+    std::string bytes;
+    try {
+        bytes = readFileBytes(file);
+    } catch (const IoError& e) {
+        err << "error: " << file << ": " << e.what() << "\n";
+        return kExitBadInput;
+    }
+    const MappedTable mapped = mapFile(bytes, *profile, details, file);
+    Problems errors = mapped.errors;
+    Problems warnings = mapped.warnings;
+    if (errors.empty()) {
+        // The same checks a native match file gets, storing nothing.
+        const ReadResult read = parseMatch(mapped.match.dump(), file);
+        const auto more = inTableTerms(read.errors, mapped, *profile);
+        errors.insert(errors.end(), more.begin(), more.end());
+        const auto w = inTableTerms(read.warnings, mapped, *profile);
+        warnings.insert(warnings.end(), w.begin(), w.end());
+    }
+    out << "profile " << (profile->name.empty() ? profilePath : profile->name) << " on " << file
+        << " (" << toString(profile->table.layout) << ", " << toString(profile->encoding) << ")\n";
+    if (mapped.match.contains("events")) {
+        const auto& m = mapped.match["match"];
+        out << "match " << m.value("id", "?") << "  " << m.value("date", "?") << "  "
+            << m.value("us", "?") << " v " << m.value("opponent", "?") << " (" << m.value("venue", "?")
+            << "), frame " << m.value("frame", "?") << "\n";
+        const auto& events = mapped.match["events"];
+        out << events.size() << " events, " << mapped.skipped << " rows skipped; the first mapped:\n";
+        for (std::size_t i = 0; i < events.size() && i < 5; ++i)
+            out << "  " << mapped.rowPlaces[i] << ": " << events[i].dump() << "\n";
+        out << "by side and type:\n";
+        for (const auto& [key, n] : mapped.countsByType)
+            out << "  " << key << std::string(key.size() < 20 ? 20 - key.size() : 1, ' ') << n << "\n";
+    }
+    for (const auto& u : mapped.unmapped)
+        out << "unmapped: '" << u.word << "' in " << u.column << " (" << u.count << "×)\n";
+    for (const auto& w : warnings) err << "warning: " << w.describe() << "\n";
+    for (const auto& e : errors) err << "error: " << e.describe() << "\n";
+    if (!errors.empty()) {
+        err << file << ": the profile does not read it cleanly (" << errors.size() << " problem"
+            << (errors.size() == 1 ? "" : "s") << "); nothing was stored\n";
+        return kExitBadInput;
+    }
+    err << file << ": reads cleanly; nothing was stored (load it with: pitchloop ingest --profile "
+        << profilePath << " " << file << ")\n";
+    return kExitOk;
 }
 
 int cmdMatches(const Globals& g, const std::string& format, std::ostream& out) {
@@ -205,6 +289,21 @@ int run(int argc, char** argv, std::ostream& out, std::ostream& err) {
         ->capture_default_str();
     ingest->add_option("--map-type", typeMaps,
                        "Read a foreign event type as one of ours, e.g. dribble=carry");
+    std::string profilePath;
+    ingest->add_option("--profile", profilePath,
+                       "Read the files as tables with this mapping profile (docs/import.md)");
+    DetailOptions ingestDetails;
+    ingestDetails.add(ingest);
+
+    auto* profileCmd = app.add_subcommand("profile", "Check a mapping profile against a table");
+    profileCmd->require_subcommand(1);
+    auto* profileCheck = profileCmd->add_subcommand(
+        "check", "Print what the profile understands in a table, storing nothing");
+    std::string checkProfile, checkFile;
+    profileCheck->add_option("profile", checkProfile, "The mapping profile (JSON)")->required();
+    profileCheck->add_option("file", checkFile, "A table it should read")->required();
+    DetailOptions checkDetails;
+    checkDetails.add(profileCheck);
 
     auto* matches = app.add_subcommand("matches", "List stored matches");
     std::string matchesFormat = "table";
@@ -269,8 +368,14 @@ int run(int argc, char** argv, std::ostream& out, std::ostream& err) {
                 }
                 ingestOptions.read.typeMap[map.substr(0, eq)] = *type;
             }
-            return cmdIngest(g, files, ingestOptions, err);
+            std::optional<MappingProfile> profile;
+            if (!profilePath.empty()) {
+                profile = loadProfile(profilePath, err);
+                if (!profile) return kExitBadInput;
+            }
+            return cmdIngest(g, files, ingestOptions, profile, ingestDetails.details(), err);
         }
+        if (*profileCheck) return cmdProfileCheck(checkProfile, checkFile, checkDetails.details(), out, err);
         if (*matches) return cmdMatches(g, matchesFormat, out);
         if (*tallies) return cmdTallies(g, talliesFormat, talliesMatch, talliesMetric, talliesGrid, out, err);
         if (targetVerbs.chosen()) return targetVerbs.run(g, out, err);
