@@ -407,19 +407,21 @@ MappedTable mapTable(const Table& table, const MappingProfile& p, const MatchDet
 
     // Match details: the profile's, then the file name's, then the caller's.
     json m = p.match;
+    std::string patternNote;
     if (!p.fileNamePattern.empty()) {
         if (auto found = matchPattern(p.fileNamePattern, baseName(fileName)))
             for (const auto& [k, v] : *found) m[k] = v;
         else
-            error("", "file name", "'" + baseName(fileName) + "' does not follow the profile's pattern '" +
-                                       p.fileNamePattern + "'");
+            patternNote = "; the file name '" + baseName(fileName) +
+                          "' does not follow the profile's pattern '" + p.fileNamePattern + "'";
     }
     for (const auto& [k, v] : details.values) m[k] = v;
     for (const char* needed : {"id", "date", "venue", "us", "opponent"})
         if (!m.contains(needed))
             error("match", needed, std::string("not given: set it in the profile's match details, the "
                                                "file name pattern or the command line (--") +
-                                       (std::string(needed) == "id" ? "match-id" : needed) + ")");
+                                       (std::string(needed) == "id" ? "match-id" : needed) + ")" +
+                                       patternNote);
     if (!m.contains("pitch")) m["pitch"] = {{"length_m", 105}, {"width_m", 68}};
     const double length = m["pitch"].value("length_m", 105.0), width = m["pitch"].value("width_m", 68.0);
     if (!out.errors.empty()) return out;

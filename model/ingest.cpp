@@ -2,11 +2,14 @@
 
 namespace pitchloop::model {
 
-IngestReport ingestBytes(ClubRepository& repo, std::string_view bytes,
-                         const std::string& fileName, const IngestOptions& options) {
+namespace {
+
+/// Stores what the reader made of a file, or says why not; `bytes` are hashed to recognise the
+/// same file again.
+IngestReport ingestRead(ClubRepository& repo, ReadResult read, std::string_view bytes,
+                        const std::string& fileName, const IngestOptions& options) {
     IngestReport report;
     report.file = fileName;
-    ReadResult read = parseMatch(bytes, fileName, options.read);
     report.warnings = std::move(read.warnings);
     if (!read.ok()) {
         report.errors = std::move(read.errors);
@@ -40,6 +43,13 @@ IngestReport ingestBytes(ClubRepository& repo, std::string_view bytes,
     repo.storeMatch(match, {fileName, hash, {}}, options.squad, stored.has_value());
     report.status = stored ? IngestStatus::Replaced : IngestStatus::Added;
     return report;
+}
+
+} // namespace
+
+IngestReport ingestBytes(ClubRepository& repo, std::string_view bytes,
+                         const std::string& fileName, const IngestOptions& options) {
+    return ingestRead(repo, parseMatch(bytes, fileName, options.read), bytes, fileName, options);
 }
 
 IngestReport ingestFile(ClubRepository& repo, const std::filesystem::path& file,
@@ -90,7 +100,10 @@ IngestReport ingestTableFile(ClubRepository& repo, const std::filesystem::path& 
         return report;
     }
     // The mapped match in our own format: the same checks and storage as a native file.
-    IngestReport stored = ingestBytes(repo, mapped.match.dump(), file.string(), options);
+    // What is stored is identified by the mapped match, not the table's bytes: the same table
+    // read with a changed profile is a changed match.
+    IngestReport stored = ingestRead(repo, parseMatchDocument(mapped.match, file.string(), options.read),
+                                     mapped.match.dump(), file.string(), options);
     stored.errors = inTableTerms(stored.errors, mapped, profile);
     Problems warnings = inTableTerms(stored.warnings, mapped, profile);
     stored.warnings = report.warnings;

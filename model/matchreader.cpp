@@ -549,6 +549,13 @@ ReadResult parseMatch(std::string_view text, const std::string& fileName,
         result.errors = c.takeErrors();
         return result;
     }
+    return parseMatchDocument(root, fileName, options);
+}
+
+ReadResult parseMatchDocument(const json& root, const std::string& fileName,
+                              const ReadOptions& options) {
+    ReadResult result;
+    Checker c(fileName, options.maxErrors);
     if (!root.is_object()) {
         c.error("", "", "expected a JSON object at the top, found " + jsonTypeName(root));
         result.errors = c.takeErrors();

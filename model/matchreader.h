@@ -4,6 +4,8 @@
 #include "problem.h"
 #include "types.h"
 
+#include <nlohmann/json_fwd.hpp>
+
 #include <filesystem>
 #include <map>
 #include <optional>
@@ -39,6 +41,10 @@ struct ReadResult {
 /// Parses one match from JSON text; `fileName` is only used in problems.
 ReadResult parseMatch(std::string_view text, const std::string& fileName,
                       const ReadOptions& options = {});
+
+/// The same from a parsed JSON document (a mapped table, which need not be written out).
+ReadResult parseMatchDocument(const nlohmann::json& root, const std::string& fileName,
+                              const ReadOptions& options = {});
 
 /// Reads and parses a file; an unreadable file is reported as a problem, not thrown.
 ReadResult readMatchFile(const std::filesystem::path& path, const ReadOptions& options = {});

@@ -108,7 +108,7 @@ int cmdProfileCheck(const std::string& profilePath, const std::string& file,
     Problems warnings = mapped.warnings;
     if (errors.empty()) {
         // The same checks a native match file gets, storing nothing.
-        const ReadResult read = parseMatch(mapped.match.dump(), file);
+        const ReadResult read = parseMatchDocument(mapped.match, file);
         const auto more = inTableTerms(read.errors, mapped, *profile);
         errors.insert(errors.end(), more.begin(), more.end());
         const auto w = inTableTerms(read.warnings, mapped, *profile);

@@ -268,3 +268,18 @@ TEST_CASE("ingest with a profile stores the match, or nothing at all", "[import]
     std::error_code ec;
     fs::remove_all(dir, ec);
 }
+
+TEST_CASE("sanity checks warn when x looks reversed or a period is far too long", "[import]") {
+    // Six of our shots, all at x 10 of 100 (our own half in the acting frame): a reversed axis.
+    std::string table = "Half;Clock;Team;Action;Outcome;X;Y\n";
+    for (int i = 0; i < 6; ++i)
+        table += "1;0" + std::to_string(i) + ":00;Kestrel Bay;Shot;Saved;10;50\n";
+    table += "2;130:00;Kestrel Bay;Pass;Complete;50;50\n"; // 85 minutes into period 2
+    const MappedTable m = mapText(table, profile());
+    INFO(describeAll(m.errors));
+    REQUIRE(m.errors.empty());
+    REQUIRE(m.warnings.size() == 2);
+    CHECK(contains(m.warnings[0].message, "period 2 lasts 85 minutes"));
+    CHECK(contains(m.warnings[1].message, "6 of our 6 shots are in our own half"));
+    CHECK(m.warnings[1].field == "X");
+}
