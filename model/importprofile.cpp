@@ -119,7 +119,7 @@ ProfileResult parseProfile(std::string_view text, const std::string& fileName) {
     MappingProfile p;
     r.onlyKeys(root, "", {"format", "version", "name", "table", "columns", "time", "periods",
                           "side", "coordinates", "types", "results", "skip", "tag_separator",
-                          "file_name", "match"});
+                          "file_name", "match", "match_columns", "venues"});
     if (r.text(root, "", "format") != std::string(kProfileFormat))
         r.error("", "format", "expected \"" + std::string(kProfileFormat) + "\"");
     if (const auto v = r.number(root, "", "version"); !v || *v != kProfileFormatVersion)
@@ -286,6 +286,26 @@ ProfileResult parseProfile(std::string_view text, const std::string& fileName) {
         for (const auto& [word, ours] : res->items()) {
             if (ours.is_string() && resultFromString(ours.get<std::string>())) p.results[word] = ours.get<std::string>();
             else r.error("results", word, "expected one of our results (ok, fail, goal, saved, blocked, off, post)");
+        }
+    }
+    if (const json* mc = r.object(root, "", "match_columns")) {
+        for (const auto& [detail, column] : mc->items()) {
+            static const std::set<std::string> allowed{"id", "date", "opponent", "venue", "competition",
+                                                       "period_lengths"};
+            if (!allowed.count(detail))
+                r.error("match_columns", detail, "not a match detail read from a column (id, date, "
+                                                 "opponent, venue, competition, period_lengths)");
+            else if (column.is_string()) p.matchColumns[detail] = column.get<std::string>();
+            else if (column.is_number_integer() && column.get<int>() >= 1) p.matchColumns[detail] = std::to_string(column.get<int>());
+            else r.error("match_columns", detail, "expected a column name, or its number from 1");
+        }
+        if (!p.matchColumns.empty() && !p.matchColumns.count("id"))
+            r.error("match_columns", "id", "missing: which column gives each row's match id");
+    }
+    if (const json* v = r.object(root, "", "venues")) {
+        for (const auto& [word, venue] : v->items()) {
+            if (venue == "home" || venue == "away" || venue == "neutral") p.venueWords[word] = venue.get<std::string>();
+            else r.error("venues", word, "expected home, away or neutral");
         }
     }
     p.skip = r.words(root, "", "skip");
@@ -704,6 +724,69 @@ MappedTable mapFile(std::string_view bytes, const MappingProfile& profile,
         return out;
     }
     return mapTable(table.table, profile, details, fileName);
+}
+
+std::vector<MappedTable> mapFileMatches(std::string_view bytes, const MappingProfile& profile,
+                                        const MatchDetails& details, const std::string& fileName) {
+    auto failed = [](Problems errors) {
+        MappedTable t;
+        t.errors = std::move(errors);
+        return std::vector<MappedTable>{std::move(t)};
+    };
+    DecodedText text = decodeText(bytes, profile.encoding, fileName);
+    if (!text.errors.empty()) return failed(std::move(text.errors));
+    TableResult parsed = parseTable(text.text, profile.table, fileName);
+    if (!parsed.errors.empty()) return failed(std::move(parsed.errors));
+    const Table& table = parsed.table;
+    if (profile.matchColumns.empty()) return {mapTable(table, profile, details, fileName)};
+
+    std::map<std::string, std::size_t> at;
+    Problems missing;
+    for (const auto& [detail, name] : profile.matchColumns) {
+        if (auto i = table.column(name)) at[detail] = *i;
+        else missing.push_back({fileName, "", name, "no such column (for the match " + detail + ")"});
+    }
+    if (!missing.empty()) return failed(std::move(missing));
+    // Rows by match id, in the order the ids first appear.
+    std::vector<std::string> order;
+    std::map<std::string, Table> byId;
+    std::map<std::string, MatchDetails> detailsOf;
+    Problems errors;
+    for (const auto& row : table.rows) {
+        const std::string id = trim(row.cells[at["id"]]);
+        if (id.empty()) {
+            errors.push_back({fileName, table.place(row), profile.matchColumns.at("id"), "no match id"});
+            continue;
+        }
+        auto [it, fresh] = byId.try_emplace(id);
+        MatchDetails& d = detailsOf[id];
+        if (fresh) {
+            order.push_back(id);
+            it->second.columns = table.columns;
+            it->second.byLine = table.byLine;
+            d = details;
+            d.values.erase("id");
+            d.values["id"] = id;
+        }
+        for (const auto& [detail, index] : at) {
+            if (detail == "id") continue;
+            std::string value = trim(row.cells[index]);
+            if (detail == "venue")
+                if (const auto w = profile.venueWords.find(value); w != profile.venueWords.end()) value = w->second;
+            if (details.values.count(detail)) continue; // the caller's word wins
+            const auto known = d.values.find(detail);
+            if (fresh || known == d.values.end()) d.values[detail] = value;
+            else if (known->second != value)
+                errors.push_back({fileName, table.place(row), profile.matchColumns.at(detail),
+                                  "'" + value + "' differs from '" + known->second +
+                                      "' earlier in match " + id});
+        }
+        it->second.rows.push_back(row);
+    }
+    if (!errors.empty()) return failed(std::move(errors));
+    std::vector<MappedTable> out;
+    for (const auto& id : order) out.push_back(mapTable(byId[id], profile, detailsOf[id], fileName));
+    return out;
 }
 
 Problems inTableTerms(const Problems& problems, const MappedTable& mapped, const MappingProfile& p) {

@@ -55,6 +55,10 @@ struct MappingProfile {
     std::vector<std::string> skip;
     std::string tagSeparator = "|";
     std::string fileNamePattern; ///< e.g. "{date}_{opponent}.csv"
+    /// Match details read from columns (id, date, opponent, venue, competition, period_lengths):
+    /// a table may then hold many matches, one per id.
+    std::map<std::string, std::string> matchColumns;
+    std::map<std::string, std::string> venueWords; ///< the venue column's words → home/away/neutral
     nlohmann::json match = nlohmann::json::object(); ///< fixed match details
 };
 
@@ -99,6 +103,13 @@ MappedTable mapTable(const Table& table, const MappingProfile& profile,
 /// Reads a file with a profile: decode, cut into a table, map. Problems name `fileName`.
 MappedTable mapFile(std::string_view bytes, const MappingProfile& profile,
                     const MatchDetails& details, const std::string& fileName);
+
+/// The same for a table that may hold several matches (the profile's match columns give each
+/// row's match id): one mapped match per id, in the order they first appear. Without match
+/// columns, one. Every match's problems are its own; decoding or cutting problems come back
+/// as one entry with errors only.
+std::vector<MappedTable> mapFileMatches(std::string_view bytes, const MappingProfile& profile,
+                                        const MatchDetails& details, const std::string& fileName);
 
 /// Rewrites problems the match reader found in mapped JSON ("events[12].x") into the table's
 /// terms ("line 14", column "X").

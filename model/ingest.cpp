@@ -80,35 +80,41 @@ std::string_view toString(IngestStatus s) {
     return "?";
 }
 
-IngestReport ingestTableFile(ClubRepository& repo, const std::filesystem::path& file,
-                             const MappingProfile& profile, const MatchDetails& details,
-                             const IngestOptions& options) {
-    IngestReport report;
-    report.file = file.string();
+std::vector<IngestReport> ingestTableFile(ClubRepository& repo, const std::filesystem::path& file,
+                                          const MappingProfile& profile, const MatchDetails& details,
+                                          const IngestOptions& options) {
     std::string bytes;
     try {
         bytes = readFileBytes(file);
     } catch (const IoError& e) {
+        IngestReport report;
+        report.file = file.string();
         report.errors.push_back({file.string(), "", "", e.what()});
-        return report;
+        return {report};
     }
-    const MappedTable mapped = mapFile(bytes, profile, details, file.string());
-    report.warnings = mapped.warnings;
-    if (!mapped.errors.empty()) {
-        report.errors = mapped.errors;
-        report.status = IngestStatus::Invalid;
-        return report;
+    std::vector<IngestReport> reports;
+    for (const MappedTable& mapped : mapFileMatches(bytes, profile, details, file.string())) {
+        IngestReport report;
+        report.file = file.string();
+        report.warnings = mapped.warnings;
+        if (!mapped.errors.empty()) {
+            report.errors = mapped.errors;
+            report.status = IngestStatus::Invalid;
+            if (mapped.match.contains("match")) report.matchId = mapped.match["match"].value("id", "");
+            reports.push_back(std::move(report));
+            continue;
+        }
+        // What is stored is identified by the mapped match, not the table's bytes: the same
+        // table read with a changed profile is a changed match.
+        IngestReport stored = ingestRead(repo, parseMatchDocument(mapped.match, file.string(), options.read),
+                                         mapped.match.dump(), file.string(), options);
+        stored.errors = inTableTerms(stored.errors, mapped, profile);
+        Problems warnings = inTableTerms(stored.warnings, mapped, profile);
+        stored.warnings = report.warnings;
+        stored.warnings.insert(stored.warnings.end(), warnings.begin(), warnings.end());
+        reports.push_back(std::move(stored));
     }
-    // The mapped match in our own format: the same checks and storage as a native file.
-    // What is stored is identified by the mapped match, not the table's bytes: the same table
-    // read with a changed profile is a changed match.
-    IngestReport stored = ingestRead(repo, parseMatchDocument(mapped.match, file.string(), options.read),
-                                     mapped.match.dump(), file.string(), options);
-    stored.errors = inTableTerms(stored.errors, mapped, profile);
-    Problems warnings = inTableTerms(stored.warnings, mapped, profile);
-    stored.warnings = report.warnings;
-    stored.warnings.insert(stored.warnings.end(), warnings.begin(), warnings.end());
-    return stored;
+    return reports;
 }
 
 } // namespace pitchloop::model

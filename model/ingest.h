@@ -48,9 +48,11 @@ IngestReport ingestBytes(ClubRepository& repo, std::string_view bytes,
 /// Reads a table (CSV, TSV, JSON Lines...) with a mapping profile (importprofile.h) and ingests
 /// the match it holds like a native file: the same checks, one transaction, nothing stored on
 /// any error. Problems name the table's file, line and column; unmapped words are errors.
-IngestReport ingestTableFile(ClubRepository& repo, const std::filesystem::path& file,
-                             const MappingProfile& profile, const MatchDetails& details,
-                             const IngestOptions& options = {});
+/// A table may hold several matches (the profile's match columns): one report each, each match
+/// in its own transaction.
+std::vector<IngestReport> ingestTableFile(ClubRepository& repo, const std::filesystem::path& file,
+                                          const MappingProfile& profile, const MatchDetails& details,
+                                          const IngestOptions& options = {});
 
 std::string_view toString(IngestStatus s);
 

@@ -67,24 +67,28 @@ int cmdIngest(const Globals& g, const std::vector<std::string>& files, const Ing
     for (std::size_t i = 0; i < files.size(); ++i) {
         if (progress)
             err << "\r\033[K[" << i + 1 << "/" << files.size() << "] " << files[i] << std::flush;
-        const IngestReport r = profile ? ingestTableFile(*repo, files[i], *profile, details, opts)
-                                       : ingestFile(*repo, files[i], opts);
-        if (progress && (!r.ok() || !r.warnings.empty())) err << "\r\033[K";
-        for (const auto& w : r.warnings) err << "warning: " << w.describe() << "\n";
-        switch (r.status) {
-        case IngestStatus::Added: ++added; break;
-        case IngestStatus::Replaced: ++replaced; break;
-        case IngestStatus::Unchanged: ++unchanged; break;
-        case IngestStatus::Invalid:
-        case IngestStatus::Refused:
-            ++failed;
-            for (const auto& e : r.errors) err << "error: " << e.describe() << "\n";
-            err << r.file << ": not ingested; the club file is unchanged by it\n";
-            break;
+        const std::vector<IngestReport> reports =
+            profile ? ingestTableFile(*repo, files[i], *profile, details, opts)
+                    : std::vector<IngestReport>{ingestFile(*repo, files[i], opts)};
+        for (const IngestReport& r : reports) {
+            if (progress && (!r.ok() || !r.warnings.empty())) err << "\r\033[K";
+            for (const auto& w : r.warnings) err << "warning: " << w.describe() << "\n";
+            switch (r.status) {
+            case IngestStatus::Added: ++added; break;
+            case IngestStatus::Replaced: ++replaced; break;
+            case IngestStatus::Unchanged: ++unchanged; break;
+            case IngestStatus::Invalid:
+            case IngestStatus::Refused:
+                ++failed;
+                for (const auto& e : r.errors) err << "error: " << e.describe() << "\n";
+                err << r.file << (r.matchId.empty() ? "" : " (match " + r.matchId + ")")
+                    << ": not ingested; the club file is unchanged by it\n";
+                break;
+            }
+            if (!progress && r.ok())
+                err << toString(r.status) << ": " << r.matchId << " (" << r.events << " events) from "
+                    << r.file << "\n";
         }
-        if (!progress && r.ok())
-            err << toString(r.status) << ": " << r.matchId << " (" << r.events << " events) from "
-                << r.file << "\n";
     }
     if (progress) err << "\r\033[K";
     err << added << " added, " << replaced << " replaced, " << unchanged << " unchanged, "
@@ -103,34 +107,37 @@ int cmdProfileCheck(const std::string& profilePath, const std::string& file,
         err << "error: " << file << ": " << e.what() << "\n";
         return kExitBadInput;
     }
-    const MappedTable mapped = mapFile(bytes, *profile, details, file);
-    Problems errors = mapped.errors;
-    Problems warnings = mapped.warnings;
-    if (errors.empty()) {
-        // The same checks a native match file gets, storing nothing.
-        const ReadResult read = parseMatchDocument(mapped.match, file);
-        const auto more = inTableTerms(read.errors, mapped, *profile);
-        errors.insert(errors.end(), more.begin(), more.end());
-        const auto w = inTableTerms(read.warnings, mapped, *profile);
-        warnings.insert(warnings.end(), w.begin(), w.end());
-    }
+    const std::vector<MappedTable> all = mapFileMatches(bytes, *profile, details, file);
+    Problems errors, warnings;
     out << "profile " << (profile->name.empty() ? profilePath : profile->name) << " on " << file
         << " (" << toString(profile->table.layout) << ", " << toString(profile->encoding) << ")\n";
-    if (mapped.match.contains("events")) {
-        const auto& m = mapped.match["match"];
-        out << "match " << m.value("id", "?") << "  " << m.value("date", "?") << "  "
-            << m.value("us", "?") << " v " << m.value("opponent", "?") << " (" << m.value("venue", "?")
-            << "), frame " << m.value("frame", "?") << "\n";
-        const auto& events = mapped.match["events"];
-        out << events.size() << " events, " << mapped.skipped << " rows skipped; the first mapped:\n";
-        for (std::size_t i = 0; i < events.size() && i < 5; ++i)
-            out << "  " << mapped.rowPlaces[i] << ": " << events[i].dump() << "\n";
-        out << "by side and type:\n";
-        for (const auto& [key, n] : mapped.countsByType)
-            out << "  " << key << std::string(key.size() < 20 ? 20 - key.size() : 1, ' ') << n << "\n";
+    for (const MappedTable& mapped : all) {
+        errors.insert(errors.end(), mapped.errors.begin(), mapped.errors.end());
+        warnings.insert(warnings.end(), mapped.warnings.begin(), mapped.warnings.end());
+        if (mapped.errors.empty()) {
+            // The same checks a native match file gets, storing nothing.
+            const ReadResult read = parseMatchDocument(mapped.match, file);
+            const auto more = inTableTerms(read.errors, mapped, *profile);
+            errors.insert(errors.end(), more.begin(), more.end());
+            const auto w = inTableTerms(read.warnings, mapped, *profile);
+            warnings.insert(warnings.end(), w.begin(), w.end());
+        }
+        if (mapped.match.contains("events")) {
+            const auto& m = mapped.match["match"];
+            out << "match " << m.value("id", "?") << "  " << m.value("date", "?") << "  "
+                << m.value("us", "?") << " v " << m.value("opponent", "?") << " ("
+                << m.value("venue", "?") << "), frame " << m.value("frame", "?") << "\n";
+            const auto& events = mapped.match["events"];
+            out << events.size() << " events, " << mapped.skipped << " rows skipped; the first mapped:\n";
+            for (std::size_t i = 0; i < events.size() && i < (all.size() > 1 ? 2u : 5u); ++i)
+                out << "  " << mapped.rowPlaces[i] << ": " << events[i].dump() << "\n";
+            out << "by side and type:\n";
+            for (const auto& [key, n] : mapped.countsByType)
+                out << "  " << key << std::string(key.size() < 20 ? 20 - key.size() : 1, ' ') << n << "\n";
+        }
+        for (const auto& u : mapped.unmapped)
+            out << "unmapped: '" << u.word << "' in " << u.column << " (" << u.count << "×)\n";
     }
-    for (const auto& u : mapped.unmapped)
-        out << "unmapped: '" << u.word << "' in " << u.column << " (" << u.count << "×)\n";
     for (const auto& w : warnings) err << "warning: " << w.describe() << "\n";
     for (const auto& e : errors) err << "error: " << e.describe() << "\n";
     if (!errors.empty()) {

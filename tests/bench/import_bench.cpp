@@ -143,7 +143,7 @@ int main(int argc, char** argv) {
         {
             ClubRepository repo((dir / ("t" + std::to_string(r) + ".sqlite")).string());
             const auto t0 = Clock::now();
-            if (!ingestTableFile(repo, csv, *profile.profile, details).ok()) return 1;
+            if (!ingestTableFile(repo, csv, *profile.profile, details).at(0).ok()) return 1;
             tableIngest.push_back(ms(Clock::now() - t0));
         }
     }

@@ -248,23 +248,25 @@ TEST_CASE("ingest with a profile stores the match, or nothing at all", "[import]
     std::ofstream(bad, std::ios::binary) << std::string(kGoodTable) + "1;00:20,0;Kestrel Bay;Header;;50;50\n";
     {
         ClubRepository repo(club);
-        const IngestReport r = ingestTableFile(repo, bad, profile(), {});
-        CHECK(r.status == IngestStatus::Invalid);
+        const auto r = ingestTableFile(repo, bad, profile(), {});
+        REQUIRE(r.size() == 1);
+        CHECK(r[0].status == IngestStatus::Invalid);
         CHECK(repo.matches().empty());
     }
     const std::string before = dataSnapshot(club);
     {
         ClubRepository repo(club);
-        const IngestReport again = ingestTableFile(repo, bad, profile(), {});
-        CHECK_FALSE(again.ok());
+        const auto again = ingestTableFile(repo, bad, profile(), {});
+        CHECK_FALSE(again.at(0).ok());
     }
     CHECK(dataSnapshot(club) == before); // nothing stored by the bad file
     ClubRepository repo(club);
-    const IngestReport r = ingestTableFile(repo, good, profile(), {});
-    INFO(describeAll(r.errors));
-    CHECK(r.status == IngestStatus::Added);
-    CHECK(r.events == 4);
-    CHECK(ingestTableFile(repo, good, profile(), {}).status == IngestStatus::Unchanged);
+    const auto r = ingestTableFile(repo, good, profile(), {});
+    REQUIRE(r.size() == 1);
+    INFO(describeAll(r[0].errors));
+    CHECK(r[0].status == IngestStatus::Added);
+    CHECK(r[0].events == 4);
+    CHECK(ingestTableFile(repo, good, profile(), {}).at(0).status == IngestStatus::Unchanged);
     std::error_code ec;
     fs::remove_all(dir, ec);
 }
@@ -282,4 +284,36 @@ TEST_CASE("sanity checks warn when x looks reversed or a period is far too long"
     CHECK(contains(m.warnings[0].message, "period 2 lasts 85 minutes"));
     CHECK(contains(m.warnings[1].message, "6 of our 6 shots are in our own half"));
     CHECK(m.warnings[1].field == "X");
+}
+
+TEST_CASE("a table of several matches: match details from columns, one match per id", "[import]") {
+    MappingProfile p = profile(R"(, "match_columns": {"id": "Game", "date": "Day", "opponent": "Against",
+                                                      "venue": "Where"},
+                                  "venues": {"H": "home", "A": "away"})");
+    for (const char* key : {"id", "date", "opponent", "venue"}) p.match.erase(key);
+    const std::string table =
+        "Game;Day;Against;Where;Half;Clock;Team;Action;Outcome;X;Y\n"
+        "KB-1;2026-08-01;Saltmarsh Athletic;H;1;00:03;Kestrel Bay;Pass;Complete;50;50\n"
+        "KB-2;2026-08-08;Duneford City;A;1;00:02;Kestrel Bay;Pass;Complete;50;50\n"
+        "KB-1;2026-08-01;Saltmarsh Athletic;H;1;00:09;Saltmarsh Athletic;Ball won;Complete;40;40\n"
+        "KB-2;2026-08-08;Duneford City;A;1;00:07;Duneford City;Ball won;Complete;40;40\n";
+    const auto all = mapFileMatches(table, p, {}, "season.csv");
+    REQUIRE(all.size() == 2);
+    for (const auto& m : all) {
+        INFO(describeAll(m.errors));
+        REQUIRE(m.errors.empty());
+        CHECK(m.match["events"].size() == 2);
+    }
+    CHECK(all[0].match["match"]["id"] == "KB-1");
+    CHECK(all[0].match["match"]["venue"] == "home");
+    CHECK(all[1].match["match"]["opponent"] == "Duneford City");
+    CHECK(all[1].match["match"]["venue"] == "away");
+    CHECK(all[1].rowPlaces[1] == "line 5");
+    // A row whose details contradict its match's earlier rows is refused where it is.
+    const auto bad = mapFileMatches(table + "KB-1;2026-08-02;Saltmarsh Athletic;H;1;00:30;Kestrel Bay;Pass;Complete;5;5\n",
+                                    p, {}, "season.csv");
+    REQUIRE(bad.size() == 1);
+    REQUIRE(bad[0].errors.size() == 1);
+    CHECK(bad[0].errors[0].place == "line 6");
+    CHECK(bad[0].errors[0].field == "Day");
 }

@@ -14,6 +14,8 @@ For each of three demo matches (one in each of the match format's frames) it wri
     spot with y up, in our attacking direction ("us" frame), outcomes inside the type word;
   * video-notes: tab-separated Windows-1252 without a header, frames at 10 a second, 1050 x 680
     "pixels" from the bottom-right corner, French words for types and results.
+  * season-export: one quoted CSV holding all three matches, the match details (id, date,
+    opponent, venue, period lengths) in columns, metres from the bottom-left corner.
 Python's csv and json modules write the tables (and csv reads the delimited ones back to count
 their rows against what `pitchloop profile check` reports); the command line ingests each with
 its profile into a fresh club file, and `pitchloop tallies --format csv` must equal the tallies
@@ -30,6 +32,15 @@ import subprocess
 import sys
 
 MATCHES = ["KB-2026-01", "KB-2026-05", "KB-2026-07"]  # acting, us, ground
+
+
+def compare(layout, got, native):
+    if got != native:
+        diff = [l for l in set(got.splitlines()) ^ set(native.splitlines())][:10]
+        print("%s: tallies differ from the native files', e.g. %s" % (layout, diff))
+        return 1
+    print("%s: %d tally rows equal the native files'" % (layout, len(native.splitlines()) - 1))
+    return 0
 
 
 def run(cli, *args, check=True):
@@ -162,6 +173,28 @@ def write_video(match, path):
         f.write(buf.getvalue().encode("cp1252"))
 
 
+SEASON_TYPES = {"take_on": "take-on"}
+SEASON_RESULTS = {"fail": "lost", "off": "wide"}
+
+
+def write_season(matches, path):
+    """All matches in one quoted CSV, match details in columns, metres from the bottom-left."""
+    with open(path, "w", newline="", encoding="utf-8") as f:
+        w = csv.writer(f, quoting=csv.QUOTE_NONNUMERIC)
+        w.writerow(["match", "date", "opponent", "venue", "period_lengths", "period", "seconds",
+                    "team", "player", "event", "outcome", "x", "y", "end_x", "end_y", "labels"])
+        for match in matches:
+            m = match["match"]
+            lengths = ",".join(str(p["length_s"]) for p in m["periods"])
+            for e in acting_events(match):
+                w.writerow([m["id"], m["date"], m["opponent"], m["venue"], lengths, e["period"],
+                            e["t"], "us" if e["side"] == "us" else "them", e.get("player", ""),
+                            SEASON_TYPES.get(e["type"], e["type"]),
+                            SEASON_RESULTS.get(e.get("result"), e.get("result", "")),
+                            e["x"], e["y"], e.get("to_x", ""), e.get("to_y", ""),
+                            ";".join(e.get("tags", []))])
+
+
 def main():
     ap = argparse.ArgumentParser()
     ap.add_argument("--cli", required=True)
@@ -208,12 +241,22 @@ def main():
                             "--opponent", m["opponent"]]
             run(a.cli, "--db", db, "ingest", "--profile", profile, path, *details)
         got = run(a.cli, "--db", db, "tallies", "--format", "csv").stdout
-        if got != native:
-            failures += 1
-            diff = [l for l in set(got.splitlines()) ^ set(native.splitlines())][:10]
-            print("%s: tallies differ from the native files', e.g. %s" % (layout, diff))
-        else:
-            print("%s: %d tally rows equal the native files'" % (layout, len(native.splitlines()) - 1))
+        failures += compare(layout, got, native)
+    # One file for all three matches, the match details in columns.
+    path = os.path.join(a.workdir, "season.csv")
+    matches = [json.load(open(os.path.join(a.club_dir, "matches", mid + ".json"), encoding="utf-8"))
+               for mid in MATCHES]
+    write_season(matches, path)
+    with open(path, newline="", encoding="utf-8") as f:
+        rows = sum(1 for _ in csv.reader(f)) - 1
+    check = run(a.cli, "profile", "check", os.path.join(profiles, "season-export.json"), path)
+    counted = sum(int(n) for n in re.findall(r"^(\d+) events, 0 rows skipped", check.stdout, re.M))
+    if counted != rows or check.stdout.count("\nmatch ") != len(MATCHES):
+        failures += 1
+        print("profile check of season.csv: %d events for %d rows:\n%s" % (counted, rows, check.stdout[:400]))
+    db = os.path.join(a.workdir, "season.sqlite")
+    run(a.cli, "--db", db, "ingest", "--profile", os.path.join(profiles, "season-export.json"), path)
+    failures += compare("season-export", run(a.cli, "--db", db, "tallies", "--format", "csv").stdout, native)
     if frames != {"acting", "us", "ground"}:
         failures += 1
         print("the matches should cover the three frames, they cover %s" % sorted(frames))
