@@ -272,20 +272,29 @@ ProfileResult parseProfile(std::string_view text, const std::string& fileName) {
                     for (const auto& tag : *tags)
                         if (tag.is_string()) m.tags.push_back(tag.get<std::string>());
             }
-            if (!eventTypeFromString(m.type))
+            // Our words of either format version; the mapped match is written in version 1's.
+            const auto type = eventTypeFromWord(m.type, 2) ? eventTypeFromWord(m.type, 2) : eventTypeFromWord(m.type, 1);
+            const auto result = resultFromWord(m.result, 2) ? resultFromWord(m.result, 2) : resultFromWord(m.result, 1);
+            if (!type) {
                 r.error("types", word, "'" + m.type + "' is not one of our event types");
-            else if (!m.result.empty() && !resultFromString(m.result))
+            } else if (!m.result.empty() && !result) {
                 r.error("types", word, "'" + m.result + "' is not one of our results");
-            else
+            } else {
+                m.type = std::string(wordOf(*type, 1));
+                if (result) m.result = std::string(wordOf(*result, 1));
                 p.types[word] = m;
+            }
         }
     } else {
         r.error("", "types", "missing: the table's event words and ours");
     }
     if (const json* res = r.object(root, "", "results")) {
         for (const auto& [word, ours] : res->items()) {
-            if (ours.is_string() && resultFromString(ours.get<std::string>())) p.results[word] = ours.get<std::string>();
-            else r.error("results", word, "expected one of our results (ok, fail, goal, saved, blocked, off, post)");
+            const std::string text = ours.is_string() ? ours.get<std::string>() : std::string();
+            const auto result = resultFromWord(text, 2) ? resultFromWord(text, 2) : resultFromWord(text, 1);
+            if (result) p.results[word] = std::string(wordOf(*result, 1));
+            else r.error("results", word, "expected one of our results (ok, lost, scored, stopped, "
+                                          "charged_down, wide, woodwork; or version 1's words)");
         }
     }
     if (const json* mc = r.object(root, "", "match_columns")) {

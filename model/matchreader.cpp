@@ -287,6 +287,7 @@ std::optional<MatchHeader> readHeader(const json& root, Checker& c) {
 }
 
 void readEvent(const json& e, std::size_t index, const MatchHeader& h, const ReadOptions& options,
+               int version,
                Checker& c, std::vector<Event>& out) {
     const std::string place = "events[" + std::to_string(index) + "]";
     if (!e.is_object()) {
@@ -345,7 +346,7 @@ void readEvent(const json& e, std::size_t index, const MatchHeader& h, const Rea
     }
     std::optional<EventType> type;
     if (auto typeName = c.string(e, place, "type")) {
-        type = eventTypeFromString(*typeName);
+        type = eventTypeFromWord(*typeName, version);
         if (!type) {
             if (auto mapped = options.typeMap.find(*typeName); mapped != options.typeMap.end())
                 type = mapped->second;
@@ -354,7 +355,7 @@ void readEvent(const json& e, std::size_t index, const MatchHeader& h, const Rea
             std::string known;
             for (auto name : eventTypeNames()) {
                 if (!known.empty()) known += ", ";
-                known += name;
+                known += wordOf(*eventTypeFromString(name), version);
             }
             c.error(place, "type",
                     "unknown event type '" + *typeName + "' (known: " + known +
@@ -381,15 +382,15 @@ void readEvent(const json& e, std::size_t index, const MatchHeader& h, const Rea
             good = false;
         } else {
             const auto name = result->get<std::string>();
-            auto r = resultFromString(name);
+            auto r = resultFromWord(name, version);
             if (!r || std::find(allowed.begin(), allowed.end(), *r) == allowed.end()) {
                 std::string list;
                 for (Result a : allowed) {
                     if (!list.empty()) list += ", ";
-                    list += toString(a);
+                    list += wordOf(a, version);
                 }
                 c.error(place, "result",
-                        "'" + name + "' is not a result of " + std::string(toString(*type)) +
+                        "'" + name + "' is not a result of " + std::string(wordOf(*type, version)) +
                             " (allowed: " + list + ")");
                 good = false;
             } else {
@@ -567,11 +568,13 @@ ReadResult parseMatchDocument(const json& root, const std::string& fileName,
                     "'" + *format + "' is not a match file (expected '" +
                         std::string(kMatchFormat) + "')");
     }
-    if (auto version = c.integer(root, "", "version")) {
-        if (*version != kMatchFormatVersion)
+    int version = kMatchFormatVersion;
+    if (auto v = c.integer(root, "", "version")) {
+        if (*v != 1 && *v != 2)
             c.error("", "version",
-                    "version " + std::to_string(*version) + " is not supported (this reader knows " +
-                        std::to_string(kMatchFormatVersion) + ")");
+                    "version " + std::to_string(*v) + " is not supported (this reader knows 1 and 2)");
+        else
+            version = static_cast<int>(*v);
     }
     if (c.hasErrors()) {
         result.errors = c.takeErrors();
@@ -590,7 +593,7 @@ ReadResult parseMatchDocument(const json& root, const std::string& fileName,
     match.info = header->info;
     match.events.reserve(events->size());
     for (std::size_t i = 0; i < events->size() && !c.full(); ++i)
-        readEvent((*events)[i], i, *header, options, c, match.events);
+        readEvent((*events)[i], i, *header, options, version, c, match.events);
     if (c.hasErrors()) {
         result.errors = c.takeErrors();
         return result;

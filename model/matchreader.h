@@ -16,7 +16,8 @@ namespace pitchloop::model {
 
 /// The format's name and the versions this reader understands.
 inline constexpr std::string_view kMatchFormat = "pitchloop-match";
-inline constexpr int kMatchFormatVersion = 1;
+/// The newest match format version (our own event words); version 1 is read too.
+inline constexpr int kMatchFormatVersion = 2;
 
 /// Pitch sizes allowed by the Laws of the Game, Law 1 (touchline 90–120 m, goal line 45–90 m).
 inline constexpr double kMinLengthM = 90, kMaxLengthM = 120;

@@ -55,6 +55,34 @@ constexpr std::array<std::pair<Result, std::string_view>, 8> kResults{{
     {Result::Post, "post"},
 }};
 
+// Match format version 2: our own words where version 1 shared another vocabulary's
+// (docs/match-format.md, "Version 2").
+constexpr std::array<std::pair<EventType, std::string_view>, 12> kTypesV2{{
+    {EventType::Pass, "pass"},
+    {EventType::Carry, "carry"},
+    {EventType::TakeOn, "beat"},
+    {EventType::Shot, "shot"},
+    {EventType::Recovery, "recovery"},
+    {EventType::Interception, "interception"},
+    {EventType::Tackle, "tackle"},
+    {EventType::Keeper, "keeper"},
+    {EventType::Clearance, "clearance"},
+    {EventType::Block, "block"},
+    {EventType::Foul, "foul"},
+    {EventType::Out, "out"},
+}};
+
+constexpr std::array<std::pair<Result, std::string_view>, 8> kResultsV2{{
+    {Result::None, ""},
+    {Result::Ok, "ok"},
+    {Result::Fail, "lost"},
+    {Result::Goal, "scored"},
+    {Result::Saved, "stopped"},
+    {Result::Blocked, "charged_down"},
+    {Result::Off, "wide"},
+    {Result::Post, "woodwork"},
+}};
+
 constexpr std::array<std::pair<Frame, std::string_view>, 3> kFrames{{
     {Frame::Acting, "acting"},
     {Frame::Us, "us"},
@@ -84,6 +112,20 @@ std::optional<Result> resultFromString(std::string_view s) {
     return lookup(kResults, s);
 }
 std::optional<Frame> frameFromString(std::string_view s) { return lookup(kFrames, s); }
+
+std::optional<EventType> eventTypeFromWord(std::string_view s, int version) {
+    return version >= 2 ? lookup(kTypesV2, s) : lookup(kTypes, s);
+}
+std::optional<Result> resultFromWord(std::string_view s, int version) {
+    if (s.empty()) return std::nullopt;
+    return version >= 2 ? lookup(kResultsV2, s) : lookup(kResults, s);
+}
+std::string_view wordOf(EventType t, int version) {
+    return version >= 2 ? nameOf(kTypesV2, t) : nameOf(kTypes, t);
+}
+std::string_view wordOf(Result r, int version) {
+    return version >= 2 ? nameOf(kResultsV2, r) : nameOf(kResults, r);
+}
 
 const std::vector<std::string_view>& eventTypeNames() {
     static const std::vector<std::string_view> names = [] {

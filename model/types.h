@@ -102,6 +102,12 @@ std::string_view toString(Result r);
 std::string_view toString(Frame f);
 std::optional<Side> sideFromString(std::string_view s);
 std::optional<EventType> eventTypeFromString(std::string_view s);
+/// The words of a match file's format version: 1 (the first words, also the program's own
+/// names above) or 2 (our own: beat; lost, scored, stopped, charged_down, wide, woodwork).
+std::optional<EventType> eventTypeFromWord(std::string_view s, int version);
+std::optional<Result> resultFromWord(std::string_view s, int version);
+std::string_view wordOf(EventType t, int version);
+std::string_view wordOf(Result r, int version);
 std::optional<Result> resultFromString(std::string_view s);
 std::optional<Frame> frameFromString(std::string_view s);
 

@@ -295,7 +295,7 @@ int run(int argc, char** argv, std::ostream& out, std::ostream& err) {
     ingest->add_option("--squad", ingestOptions.squad, "Squad the matches belong to")
         ->capture_default_str();
     ingest->add_option("--map-type", typeMaps,
-                       "Read a foreign event type as one of ours, e.g. dribble=carry");
+                       "Read a foreign event type as one of ours, e.g. run=carry");
     std::string profilePath;
     ingest->add_option("--profile", profilePath,
                        "Read the files as tables with this mapping profile (docs/import.md)");

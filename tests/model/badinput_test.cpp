@@ -124,7 +124,8 @@ TEST_CASE("a file of an unknown format version is refused", "[badinput]") {
     const auto report = ingestBad("wrong-version.json");
     CHECK(report.status == IngestStatus::Invalid);
     const Problem& p = onlyProblem(report, "wrong-version.json", "", "version");
-    CHECK(contains(p.message, "version 2"));
+    CHECK(contains(p.message, "version 3"));
+    CHECK(contains(p.message, "knows 1 and 2"));
 }
 
 TEST_CASE("an event without a required field is refused", "[badinput]") {

@@ -485,3 +485,45 @@ TEST_CASE("a match date must be a real calendar date") {
     CHECK_FALSE(isIsoDate("2100-02-29")); // a century that is not one
     CHECK(isIsoDate("2000-02-29"));
 }
+
+TEST_CASE("format version 2 says the same match in our own words", "[reader]") {
+    // tests/data/minimal-match.json (version 1) with version 1's words replaced by version 2's:
+    // take_on → beat; fail → lost, goal → scored, saved → stopped, blocked → charged_down,
+    // off → wide, post → woodwork. The two files must read to the same events.
+    const std::string v1 = pitchloop::model::readFileBytes(
+        pitchloop::testutil::sourcePath("tests/data/minimal-match.json"));
+    std::string v2 = v1;
+    auto replaceAll = [&](const std::string& from, const std::string& to) {
+        for (std::size_t at = 0; (at = v2.find(from, at)) != std::string::npos; at += to.size())
+            v2.replace(at, from.size(), to);
+    };
+    replaceAll("\"version\": 1", "\"version\": 2");
+    replaceAll("\"take_on\"", "\"beat\"");
+    replaceAll("\"result\": \"fail\"", "\"result\": \"lost\"");
+    replaceAll("\"result\": \"goal\"", "\"result\": \"scored\"");
+    replaceAll("\"result\": \"saved\"", "\"result\": \"stopped\"");
+    replaceAll("\"result\": \"blocked\"", "\"result\": \"charged_down\"");
+    replaceAll("\"result\": \"off\"", "\"result\": \"wide\"");
+    replaceAll("\"result\": \"post\"", "\"result\": \"woodwork\"");
+    REQUIRE(v2 != v1);
+    const auto a = pitchloop::model::parseMatch(v1, "v1.json");
+    const auto b = pitchloop::model::parseMatch(v2, "v2.json");
+    INFO(pitchloop::model::describeAll(b.errors));
+    REQUIRE(a.ok());
+    REQUIRE(b.ok());
+    REQUIRE(a.match->events.size() == b.match->events.size());
+    for (std::size_t i = 0; i < a.match->events.size(); ++i) {
+        CHECK(a.match->events[i].type == b.match->events[i].type);
+        CHECK(a.match->events[i].result == b.match->events[i].result);
+    }
+    // Each version's words belong to it alone: a version 2 file with "fail" is refused, naming
+    // the words version 2 allows.
+    std::string mixed = v2;
+    const auto at = mixed.find("\"result\": \"lost\"");
+    REQUIRE(at != std::string::npos);
+    mixed.replace(at, 16, "\"result\": \"fail\"");
+    const auto refused = pitchloop::model::parseMatch(mixed, "mixed.json");
+    REQUIRE_FALSE(refused.ok());
+    CHECK(refused.errors[0].field == "result");
+    CHECK(refused.errors[0].message.find("(allowed: ok, lost)") != std::string::npos);
+}
