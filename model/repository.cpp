@@ -231,6 +231,15 @@ CREATE TABLE grid_change(
     R"sql(
 ALTER TABLE focus ADD COLUMN min_change REAL;
 )sql",
+    // 8: mapping profiles saved in the club file, so a table in a known layout loads on drop
+    // (docs/import.md).
+    R"sql(
+CREATE TABLE import_profile(
+  name TEXT PRIMARY KEY,
+  profile TEXT NOT NULL,
+  saved_by TEXT NOT NULL DEFAULT '',
+  saved_at TEXT NOT NULL DEFAULT '');
+)sql",
 };
 
 static_assert(std::size(kMigrations) == ClubRepository::kSchemaVersion);

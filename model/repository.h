@@ -58,7 +58,7 @@ struct TallyRow {
 /// Owns the SQLite connection; returns domain structs. Throws StorageError on faults.
 class ClubRepository {
 public:
-    static constexpr int kSchemaVersion = 7;
+    static constexpr int kSchemaVersion = 8;
 
     /// Opens (creating when missing) and migrates the club file. ":memory:" works for tests.
     explicit ClubRepository(const std::string& file);

@@ -8,7 +8,9 @@
 #include "verbs.h"
 
 #include "format.h"
+#include "clock.h"
 #include "ingest.h"
+#include "profilestore.h"
 #include "metricspec.h"
 #include "repository.h"
 
@@ -58,6 +60,21 @@ std::optional<MappingProfile> loadProfile(const std::string& path, std::ostream&
     return p.profile;
 }
 
+/// --profile names a file, or else a profile saved in the club file.
+std::optional<MappingProfile> profileByPathOrName(const Globals& g, const std::string& given,
+                                                  std::ostream& err) {
+    if (fs::exists(given)) return loadProfile(given, err);
+    auto repo = openClub(g);
+    if (const auto saved = ProfileStore(*repo).get(given)) {
+        ProfileResult p = parseProfile(saved->text, given);
+        for (const auto& e : p.errors) err << "error: " << e.describe() << "\n";
+        return p.profile;
+    }
+    err << "error: --profile " << given << ": no such file, and no profile of that name is saved "
+        << "in the club file (pitchloop profile list)\n";
+    return std::nullopt;
+}
+
 int cmdIngest(const Globals& g, const std::vector<std::string>& files, const IngestOptions& opts,
               const std::optional<MappingProfile>& profile, const MatchDetails& details,
               std::ostream& err) {
@@ -67,9 +84,22 @@ int cmdIngest(const Globals& g, const std::vector<std::string>& files, const Ing
     for (std::size_t i = 0; i < files.size(); ++i) {
         if (progress)
             err << "\r\033[K[" << i + 1 << "/" << files.size() << "] " << files[i] << std::flush;
+        // A table without --profile is read with the saved profile whose columns it has.
+        std::optional<MappingProfile> found = profile;
+        if (!found && looksLikeTable(files[i])) {
+            std::string bytes;
+            try {
+                bytes = readFileBytes(files[i]);
+            } catch (const IoError&) {
+            }
+            if (const auto saved = profileFor(bytes, ProfileStore(*repo).list())) {
+                found = parseProfile(saved->text, saved->name).profile;
+                err << files[i] << ": read with the saved profile '" << saved->name << "'\n";
+            }
+        }
         const std::vector<IngestReport> reports =
-            profile ? ingestTableFile(*repo, files[i], *profile, details, opts)
-                    : std::vector<IngestReport>{ingestFile(*repo, files[i], opts)};
+            found ? ingestTableFile(*repo, files[i], *found, details, opts)
+                  : std::vector<IngestReport>{ingestFile(*repo, files[i], opts)};
         for (const IngestReport& r : reports) {
             if (progress && (!r.ok() || !r.warnings.empty())) err << "\r\033[K";
             for (const auto& w : r.warnings) err << "warning: " << w.describe() << "\n";
@@ -311,6 +341,16 @@ int run(int argc, char** argv, std::ostream& out, std::ostream& err) {
     profileCheck->add_option("file", checkFile, "A table it should read")->required();
     DetailOptions checkDetails;
     checkDetails.add(profileCheck);
+    auto* profileSave = profileCmd->add_subcommand("save", "Save a profile in the club file under a name: "
+                                                           "tables in its layout then load without --profile");
+    std::string saveName, saveFile, saveBy;
+    profileSave->add_option("name", saveName, "The name the staff know the layout by")->required();
+    profileSave->add_option("file", saveFile, "The profile (JSON)")->required();
+    profileSave->add_option("--by", saveBy, "Who saves it");
+    auto* profileList = profileCmd->add_subcommand("list", "Profiles saved in the club file");
+    auto* profileRemove = profileCmd->add_subcommand("remove", "Remove a saved profile");
+    std::string removeProfile;
+    profileRemove->add_option("name", removeProfile)->required();
 
     auto* matches = app.add_subcommand("matches", "List stored matches");
     std::string matchesFormat = "table";
@@ -377,12 +417,48 @@ int run(int argc, char** argv, std::ostream& out, std::ostream& err) {
             }
             std::optional<MappingProfile> profile;
             if (!profilePath.empty()) {
-                profile = loadProfile(profilePath, err);
+                profile = profileByPathOrName(g, profilePath, err);
                 if (!profile) return kExitBadInput;
             }
             return cmdIngest(g, files, ingestOptions, profile, ingestDetails.details(), err);
         }
         if (*profileCheck) return cmdProfileCheck(checkProfile, checkFile, checkDetails.details(), out, err);
+        if (*profileSave) {
+            auto repo = openClub(g);
+            std::string text;
+            try {
+                text = readFileBytes(saveFile);
+            } catch (const IoError& e) {
+                err << "error: " << saveFile << ": " << e.what() << "\n";
+                return kExitBadInput;
+            }
+            const Problems problems = ProfileStore(*repo).save(saveName, text, saveBy, nowUtcIso());
+            for (Problem p : problems) {
+                p.file = saveFile;
+                err << "error: " << p.describe() << "\n";
+            }
+            if (!problems.empty()) return kExitBadInput;
+            err << "saved profile '" << saveName << "'\n";
+            return kExitOk;
+        }
+        if (*profileList) {
+            auto repo = openClub(g);
+            for (const auto& p : ProfileStore(*repo).list()) {
+                const auto parsed = parseProfile(p.text, p.name);
+                out << p.name << "\t" << (parsed.profile ? parsed.profile->name : std::string("(unreadable)"))
+                    << "\t" << p.savedBy << "\t" << p.savedAt << "\n";
+            }
+            return kExitOk;
+        }
+        if (*profileRemove) {
+            auto repo = openClub(g);
+            if (!ProfileStore(*repo).remove(removeProfile)) {
+                err << "error: no saved profile '" << removeProfile << "'\n";
+                return kExitBadInput;
+            }
+            err << "removed profile '" << removeProfile << "'\n";
+            return kExitOk;
+        }
         if (*matches) return cmdMatches(g, matchesFormat, out);
         if (*tallies) return cmdTallies(g, talliesFormat, talliesMatch, talliesMetric, talliesGrid, out, err);
         if (targetVerbs.chosen()) return targetVerbs.run(g, out, err);

@@ -1,5 +1,7 @@
 #include "importview.h"
 
+#include "profilestore.h"
+
 #include "clubsession.h"
 #include "display.h"
 #include "importresultmodel.h"
@@ -29,9 +31,32 @@ ImportResult ingestOne(ClubRepository& repo, const QString& path, const IngestOp
     ImportResult r;
     r.path = path;
     r.fileName = QFileInfo(path).fileName();
-    IngestReport report;
+    const std::filesystem::path file(QFile::encodeName(path).toStdString());
+    std::vector<IngestReport> reports;
+    QString layout;
     try {
-        report = ingestFile(repo, std::filesystem::path(QFile::encodeName(path).toStdString()), options);
+        if (looksLikeTable(r.fileName.toStdString())) {
+            // A table loads with the saved profile whose columns it has (docs/import.md).
+            std::string bytes;
+            try {
+                bytes = readFileBytes(file);
+            } catch (const IoError&) {
+            }
+            const auto saved = profileFor(bytes, ProfileStore(repo).list());
+            if (!saved) {
+                r.outcome = ImportResult::Failed;
+                r.detail = QStringLiteral("Nothing of this file was stored.");
+                r.problems << QStringLiteral("%1: no saved layout reads this table. Save a mapping "
+                                             "profile for it once (pitchloop profile save NAME "
+                                             "PROFILE.json; see docs/import.md), then drop it again.")
+                                  .arg(r.fileName);
+                return r;
+            }
+            layout = QString::fromStdString(saved->name);
+            reports = ingestTableFile(repo, file, *parseProfile(saved->text, saved->name).profile, {}, options);
+        } else {
+            reports.push_back(ingestFile(repo, file, options));
+        }
     } catch (const std::exception& e) {
         r.outcome = ImportResult::Failed;
         r.detail = QStringLiteral("Nothing of this file was stored.");
@@ -45,29 +70,52 @@ ImportResult ingestOne(ClubRepository& repo, const QString& path, const IngestOp
         p.file = shortName;
         return QString::fromStdString(p.describe());
     };
-    for (const auto& p : report.errors) r.problems << describe(p);
-    for (const auto& p : report.warnings) r.warnings << describe(p);
-    r.matchId = QString::fromStdString(report.matchId);
-    switch (report.status) {
-    case IngestStatus::Added: r.outcome = ImportResult::Stored; break;
-    case IngestStatus::Replaced: r.outcome = ImportResult::Replaced; break;
-    case IngestStatus::Unchanged: r.outcome = ImportResult::Unchanged; break;
-    case IngestStatus::Invalid:
-    case IngestStatus::Refused: r.outcome = ImportResult::Failed; break;
+    bool anyFailed = false, anyRefused = false, allUnchanged = true, anyReplaced = false;
+    int events = 0;
+    QStringList stored;
+    for (const IngestReport& report : reports) {
+        for (const auto& p : report.errors) r.problems << describe(p);
+        for (const auto& p : report.warnings) r.warnings << describe(p);
+        const bool failed = report.status == IngestStatus::Invalid || report.status == IngestStatus::Refused;
+        anyFailed |= failed;
+        anyRefused |= report.status == IngestStatus::Refused;
+        allUnchanged &= report.status == IngestStatus::Unchanged;
+        anyReplaced |= report.status == IngestStatus::Replaced;
+        if (!failed) {
+            r.matchId = QString::fromStdString(report.matchId);
+            stored << r.matchId;
+            events += report.events;
+        }
     }
-    if (r.outcome == ImportResult::Failed) {
-        r.detail = report.status == IngestStatus::Refused
+    r.outcome = anyFailed ? ImportResult::Failed
+                : allUnchanged ? ImportResult::Unchanged
+                : anyReplaced ? ImportResult::Replaced
+                              : ImportResult::Stored;
+    if (anyFailed) {
+        r.detail = anyRefused
                        ? QStringLiteral("Nothing of this file was stored. To store it in place of the "
                                         "stored match, tick “Replace changed matches” and load it again.")
                        : QStringLiteral("Nothing of this file was stored.");
+        if (reports.size() > 1 && !stored.isEmpty())
+            r.detail = QStringLiteral("Stored %1; the other matches of this table were not (each is its own transaction).")
+                           .arg(stored.join(QStringLiteral(", ")));
         return r;
     }
-    if (const auto summary = repo.matchSummary(report.matchId)) {
-        r.matchDate = QString::fromStdString(summary->date);
-        r.detail = QStringLiteral("%1 · %2 v %3 · %4 events")
-                       .arg(r.matchId, dateText(summary->date),
-                            QString::fromStdString(summary->opponent), QLocale().toString(report.events));
+    if (reports.size() == 1) {
+        if (const auto summary = repo.matchSummary(reports.front().matchId)) {
+            r.matchDate = QString::fromStdString(summary->date);
+            r.detail = QStringLiteral("%1 · %2 v %3 · %4 events")
+                           .arg(r.matchId, dateText(summary->date),
+                                QString::fromStdString(summary->opponent), QLocale().toString(events));
+        }
+    } else {
+        r.detail = QStringLiteral("%1 matches (%2) · %3 events")
+                       .arg(reports.size())
+                       .arg(stored.join(QStringLiteral(", ")), QLocale().toString(events));
+        if (const auto summary = repo.matchSummary(reports.back().matchId))
+            r.matchDate = QString::fromStdString(summary->date);
     }
+    if (!layout.isEmpty()) r.detail += QStringLiteral(" · read with the saved layout “%1”").arg(layout);
     if (r.outcome == ImportResult::Unchanged)
         r.detail += QStringLiteral(" · this very file is already in the club file");
     return r;
@@ -126,7 +174,9 @@ QStringList ImportView::expandPaths(const QStringList& paths) {
             continue;
         }
         QStringList inside;
-        QDirIterator it(path, {QStringLiteral("*.json")}, QDir::Files | QDir::Readable,
+        QDirIterator it(path, {QStringLiteral("*.json"), QStringLiteral("*.csv"), QStringLiteral("*.tsv"),
+                               QStringLiteral("*.jsonl"), QStringLiteral("*.ndjson")},
+                        QDir::Files | QDir::Readable,
                         QDirIterator::Subdirectories);
         while (it.hasNext()) inside << it.next();
         std::sort(inside.begin(), inside.end());
@@ -165,7 +215,7 @@ bool ImportView::loadPaths(const QStringList& given) {
     }
     const QStringList paths = expandPaths(given);
     if (paths.isEmpty()) {
-        setSummary(tr("No match files there: a match file is a .json file (see docs/match.schema.json)."));
+        setSummary(tr("No match files there: a match file is a .json file (see docs/match.schema.json), a table a .csv, .tsv or .jsonl file."));
         return false;
     }
 

@@ -40,7 +40,7 @@ Page {
         id: fileDialog
         title: qsTr("Load match files")
         fileMode: FileDialog.OpenFiles
-        nameFilters: [qsTr("Match files (*.json)"), qsTr("All files (*)")]
+        nameFilters: [qsTr("Match files and tables (*.json *.csv *.tsv *.jsonl)"), qsTr("All files (*)")]
         onAccepted: loader.loadUrls(selectedFiles)
     }
 
@@ -131,7 +131,7 @@ Page {
                 }
                 Label {
                     Layout.alignment: Qt.AlignHCenter
-                    text: qsTr("Match files are .json files in the Pitchloop match format. Each file is stored whole or not at all; a file loaded before is left as it is.")
+                    text: qsTr("Match files are .json files in the Pitchloop match format; tables (.csv, .tsv, .jsonl) load with the saved layout whose columns they have. Each match is stored whole or not at all; a file loaded before is left as it is.")
                     color: Theme.textMuted
                     font.pixelSize: Theme.fontSmall
                 }

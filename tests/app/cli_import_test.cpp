@@ -83,3 +83,24 @@ TEST_CASE("ingest --profile loads a table, refuses a bad one and says where", "[
     CHECK(t.code == 2);
     CHECK(contains(t.err, "typo.json: colums: unknown key"));
 }
+
+TEST_CASE("a saved profile reads tables in its layout without --profile", "[cli][import]") {
+    Workspace w;
+    CHECK(cli({"--db", w.db, "profile", "save", "analyst sheet", w.profile, "--by", "R. Tamsin"}).code == 0);
+    const auto list = cli({"--db", w.db, "profile", "list"});
+    CHECK(contains(list.out, "analyst sheet\tanalyst sheet (semicolons"));
+    const std::string file = w.write("KB-T-01_2026-08-08_home_Nettleby Town.csv", sheet(kRows));
+    const auto r = cli({"--db", w.db, "ingest", file});
+    INFO(r.err);
+    CHECK(r.code == 0);
+    CHECK(contains(r.err, "read with the saved profile 'analyst sheet'"));
+    CHECK(contains(r.err, "added: KB-T-01 (4 events)"));
+    // By name too.
+    const std::string second = w.write("KB-T-02_2026-08-15_away_Duneford City.csv", sheet(kRows));
+    CHECK(cli({"--db", w.db, "ingest", "--profile", "analyst sheet", second}).code == 0);
+    // A table no saved profile reads is refused as a match file would be.
+    const std::string stranger = w.write("other.csv", "a,b\n1,2\n");
+    CHECK(cli({"--db", w.db, "ingest", stranger}).code == 2);
+    CHECK(cli({"--db", w.db, "profile", "remove", "analyst sheet"}).code == 0);
+    CHECK(cli({"--db", w.db, "profile", "remove", "analyst sheet"}).code == 2);
+}

@@ -11,6 +11,7 @@
 #include "importresultmodel.h"
 #include "importview.h"
 #include "ingest.h"
+#include "profilestore.h"
 #include "repository.h"
 #include "testmain.h"
 
@@ -96,6 +97,7 @@ private slots:
     void cancelStopsAfterCurrentFile();
     void foldersExpandToTheirMatchFiles();
     void refusesWithoutAFileOnDisk();
+    void tableLoadsWithTheSavedLayout();
 
 private:
     /// Starts a load and waits until it has finished.
@@ -299,3 +301,39 @@ int main(int argc, char* argv[]) {
 }
 
 #include "import_view_test.moc"
+
+void ImportViewTest::tableLoadsWithTheSavedLayout() {
+    // The analyst-sheet layout (sample-club/import/) saved in the club file; a table in it is
+    // dropped with no profile to pick, and a table in no saved layout says what to do.
+    {
+        model::ClubRepository repo(m_file.toStdString());
+        const std::string profile = model::readFileBytes(
+            std::string(PITCHLOOP_SOURCE_DIR) + "/sample-club/import/analyst-sheet.json");
+        QVERIFY(model::ProfileStore(repo).save("analyst sheet", profile, "R. Tamsin", "t").empty());
+    }
+    const QString table = m_dir->filePath(QStringLiteral("KB-T-01_2026-08-08_home_Nettleby Town.csv"));
+    {
+        QFile f(table);
+        QVERIFY(f.open(QIODevice::WriteOnly));
+        f.write("Half;Clock;Team;Shirt;Action;Outcome;PosX;PosY;EndX;EndY;Labels\n"
+                "1st half;00:01,0;Kestrel Bay;9;Pass;Complete;50;50;60;40;\n"
+                "1st half;00:05,0;Nettleby Town;5;Ball won;Complete;32;72;;;\n");
+    }
+    const QString stranger = m_dir->filePath(QStringLiteral("notes.csv"));
+    {
+        QFile f(stranger);
+        QVERIFY(f.open(QIODevice::WriteOnly));
+        f.write("a,b\n1,2\n");
+    }
+    loadAndWait({table, stranger});
+    const ImportResultModel& results = *m_view->results();
+    QCOMPARE(results.count(), 2);
+    const ImportResult& loaded = results.rows()[0];
+    QCOMPARE(loaded.outcome, ImportResult::Stored);
+    QCOMPARE(loaded.matchId, QStringLiteral("KB-T-01"));
+    QVERIFY2(loaded.detail.contains(QStringLiteral("read with the saved layout “analyst sheet”")), qPrintable(loaded.detail));
+    const ImportResult& refused = results.rows()[1];
+    QCOMPARE(refused.outcome, ImportResult::Failed);
+    QVERIFY(refused.problems.join(QLatin1Char(' ')).contains(QStringLiteral("no saved layout reads this table")));
+    QVERIFY(has(storedIds(m_file), "KB-T-01"));
+}

@@ -5,6 +5,7 @@
 
 #include "importprofile.h"
 #include "ingest.h"
+#include "profilestore.h"
 #include "repository.h"
 #include "table.h"
 #include "testutil.h"
@@ -316,4 +317,36 @@ TEST_CASE("a table of several matches: match details from columns, one match per
     REQUIRE(bad[0].errors.size() == 1);
     CHECK(bad[0].errors[0].place == "line 6");
     CHECK(bad[0].errors[0].field == "Day");
+}
+
+TEST_CASE("saved profiles: stored by name, and the one whose columns a table has is found",
+          "[import]") {
+    ClubRepository repo(":memory:");
+    ProfileStore store(repo);
+    CHECK(store.save("sheet", profileText(), "R. Tamsin", "2026-12-04T09:00:00Z").empty());
+    // A second layout with other column names.
+    std::string other = profileText();
+    for (const auto& [from, to] : std::vector<std::pair<std::string, std::string>>{
+             {"\"Clock\"", "\"Time\""}, {"\"Action\"", "\"Event\""}})
+        other.replace(other.find(from), from.size(), to);
+    CHECK(store.save("other", other, "", "t").empty());
+    // A profile that does not read is refused and nothing is saved.
+    const Problems bad = store.save("broken", R"({"format": "pitchloop-profile"})", "", "t");
+    CHECK_FALSE(bad.empty());
+    REQUIRE(store.list().size() == 2);
+    CHECK(store.get("sheet")->savedBy == "R. Tamsin");
+
+    const auto found = profileFor(kGoodTable, store.list());
+    REQUIRE(found);
+    CHECK(found->name == "sheet");
+    const auto otherFound = profileFor("Half;Time;Team;Event;Outcome;X;Y\n1;3;Kestrel Bay;Pass;Complete;5;5\n",
+                                       store.list());
+    REQUIRE(otherFound);
+    CHECK(otherFound->name == "other");
+    CHECK_FALSE(profileFor("a;b;c\n1;2;3\n", store.list()));
+    CHECK(store.remove("other"));
+    CHECK_FALSE(store.remove("other"));
+    CHECK(looksLikeTable("season.CSV"));
+    CHECK(looksLikeTable("log.jsonl"));
+    CHECK_FALSE(looksLikeTable("KB-2026-01.json"));
 }
