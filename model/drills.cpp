@@ -1,4 +1,5 @@
 #include "drills.h"
+#include "storeguard.h"
 
 #include "repository.h"
 
@@ -569,14 +570,6 @@ std::string writeDrillFile(const std::vector<Drill>& drills) {
 // The drill book ---------------------------------------------------------------------------
 
 namespace {
-
-template <typename F> auto guarded(const char* what, F&& f) -> decltype(f()) {
-    try {
-        return f();
-    } catch (const SQLite::Exception& e) {
-        throw StorageError(std::string(what) + ": " + e.what());
-    }
-}
 
 Problem noDrill(std::int64_t id) {
     return {"", "", "", "no drill " + std::to_string(id)};

@@ -1,4 +1,5 @@
 #include "focus.h"
+#include "storeguard.h"
 
 #include <SQLiteCpp/Database.h>
 #include <SQLiteCpp/Statement.h>
@@ -19,15 +20,6 @@ using nlohmann::json;
 namespace {
 
 constexpr double kNaN = std::numeric_limits<double>::quiet_NaN();
-
-template <typename F>
-auto guarded(const char* what, F&& f) -> decltype(f()) {
-    try {
-        return f();
-    } catch (const SQLite::Exception& e) {
-        throw StorageError(std::string(what) + ": " + e.what());
-    }
-}
 
 json zonesJson(const std::vector<Zone>& zones) {
     json z = json::array();

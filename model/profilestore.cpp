@@ -1,4 +1,5 @@
 #include "profilestore.h"
+#include "storeguard.h"
 
 #include <SQLiteCpp/Column.h>
 #include <SQLiteCpp/Database.h>
@@ -9,19 +10,6 @@
 #include <cctype>
 
 namespace pitchloop::model {
-
-namespace {
-
-template <typename F>
-auto guarded(const char* what, F&& f) -> decltype(f()) {
-    try {
-        return f();
-    } catch (const SQLite::Exception& e) {
-        throw StorageError(std::string(what) + ": " + e.what());
-    }
-}
-
-} // namespace
 
 Problems ProfileStore::save(const std::string& name, const std::string& text, const std::string& by,
                             const std::string& now) {

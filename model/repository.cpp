@@ -1,4 +1,5 @@
 #include "repository.h"
+#include "storeguard.h"
 
 #include "clock.h"
 #include "gridchange.h"
@@ -243,15 +244,6 @@ CREATE TABLE import_profile(
 };
 
 static_assert(std::size(kMigrations) == ClubRepository::kSchemaVersion);
-
-template <typename F>
-auto guarded(const char* what, F&& f) -> decltype(f()) {
-    try {
-        return f();
-    } catch (const SQLite::Exception& e) {
-        throw StorageError(std::string(what) + ": " + e.what());
-    }
-}
 
 void bindOptionalInt(SQLite::Statement& st, int index, const std::optional<int>& v) {
     if (v) st.bind(index, *v);

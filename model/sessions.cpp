@@ -1,4 +1,5 @@
 #include "sessions.h"
+#include "storeguard.h"
 
 #include "repository.h"
 
@@ -11,14 +12,6 @@
 namespace pitchloop::model {
 
 namespace {
-
-template <typename F> auto guarded(const char* what, F&& f) -> decltype(f()) {
-    try {
-        return f();
-    } catch (const SQLite::Exception& e) {
-        throw StorageError(std::string(what) + ": " + e.what());
-    }
-}
 
 const char* kCapsKey = "microcycle.caps";
 
