@@ -4,6 +4,7 @@
 #include "types.h"
 
 #include <algorithm>
+#include <charconv>
 #include <cmath>
 #include <cstdlib>
 #include <set>
@@ -352,30 +353,37 @@ std::string trim(std::string s) {
     return s.substr(b, e - b + 1);
 }
 
-std::optional<double> readNumber(std::string s, char decimal) {
-    s = trim(std::move(s));
+std::optional<double> readNumber(std::string_view s, char decimal) {
+    while (!s.empty() && (s.front() == ' ' || s.front() == '\t')) s.remove_prefix(1);
+    while (!s.empty() && (s.back() == ' ' || s.back() == '\t' || s.back() == '\r')) s.remove_suffix(1);
     if (s.empty()) return std::nullopt;
-    if (decimal == ',') std::replace(s.begin(), s.end(), ',', '.');
-    char* end = nullptr;
-    const double v = std::strtod(s.c_str(), &end);
-    if (end != s.c_str() + s.size() || !std::isfinite(v)) return std::nullopt;
+    if (s.front() == '+') s.remove_prefix(1); // from_chars takes no plus sign
+    std::string swapped;
+    if (decimal == ',' && s.find(',') != std::string_view::npos) {
+        swapped.assign(s);
+        std::replace(swapped.begin(), swapped.end(), ',', '.');
+        s = swapped;
+    }
+    double v = 0;
+    const auto [end, ec] = std::from_chars(s.data(), s.data() + s.size(), v);
+    if (ec != std::errc() || end != s.data() + s.size() || !std::isfinite(v)) return std::nullopt;
     return v;
 }
 
 /// "75.4", "12:05", "1:02:05.250" → seconds.
-std::optional<double> readClock(const std::string& text, char decimal) {
-    std::vector<std::string> parts;
-    std::size_t start = 0;
+std::optional<double> readClock(std::string_view text, char decimal) {
+    std::string_view parts[3];
+    std::size_t n = 0, start = 0;
     while (true) {
         const auto colon = text.find(':', start);
-        parts.push_back(text.substr(start, colon - start));
-        if (colon == std::string::npos) break;
+        if (n == 3) return std::nullopt;
+        parts[n++] = text.substr(start, colon == std::string_view::npos ? std::string_view::npos : colon - start);
+        if (colon == std::string_view::npos) break;
         start = colon + 1;
     }
-    if (parts.size() > 3) return std::nullopt;
     double seconds = 0;
-    for (std::size_t i = 0; i < parts.size(); ++i) {
-        const bool last = i + 1 == parts.size();
+    for (std::size_t i = 0; i < n; ++i) {
+        const bool last = i + 1 == n;
         const auto v = readNumber(parts[i], decimal);
         if (!v || *v < 0) return std::nullopt;
         if (!last && *v != std::floor(*v)) return std::nullopt;
@@ -464,11 +472,21 @@ MappedTable mapTable(const Table& table, const MappingProfile& p, const MatchDet
         ++u.count;
         if (u.lines.size() < 3) u.lines.push_back(line);
     };
-    auto cell = [&](const Table::Row& row, const char* field) -> std::optional<std::string> {
+    // Each field's column, looked up once.
+    using Slot = std::optional<std::size_t>;
+    auto slot = [&](const char* field) -> Slot {
         const auto it = col.find(field);
-        if (it == col.end()) return std::nullopt;
-        return trim(row.cells[it->second]);
+        return it == col.end() ? Slot{} : Slot{it->second};
     };
+    const Slot cPeriod = slot("period"), cTime = slot("time"), cSide = slot("side"),
+               cPlayer = slot("player"), cType = slot("type"), cResult = slot("result"),
+               cX = slot("x"), cY = slot("y"), cToX = slot("to_x"), cToY = slot("to_y"),
+               cTags = slot("tags");
+    auto cell = [&](const Table::Row& row, const Slot& at) -> std::optional<std::string> {
+        if (!at) return std::nullopt;
+        return trim(row.cells[*at]);
+    };
+    std::map<std::pair<std::string_view, const std::string*>, int> counts;
     const auto columnOf = [&](const char* field) { return p.columns.at(field); };
 
     struct Pending {
@@ -483,7 +501,7 @@ MappedTable mapTable(const Table& table, const MappingProfile& p, const MatchDet
     int backwards = 0;
     for (const auto& row : table.rows) {
         const std::string place = table.place(row);
-        const std::string typeWord = *cell(row, "type");
+        const std::string typeWord = *cell(row, cType);
         if (std::find(p.skip.begin(), p.skip.end(), typeWord) != p.skip.end()) {
             ++out.skipped;
             continue;
@@ -491,7 +509,7 @@ MappedTable mapTable(const Table& table, const MappingProfile& p, const MatchDet
         json e = json::object();
         // Period.
         int period = 1;
-        if (auto text = cell(row, "period")) {
+        if (auto text = cell(row, cPeriod)) {
             if (const auto w = p.periodWords.find(*text); w != p.periodWords.end()) {
                 period = w->second;
             } else if (auto v = readNumber(*text, p.decimal); v && *v >= 1 && *v <= 9 && *v == std::floor(*v)) {
@@ -502,7 +520,7 @@ MappedTable mapTable(const Table& table, const MappingProfile& p, const MatchDet
             }
         }
         // Time.
-        const std::string timeText = *cell(row, "time");
+        const std::string timeText = *cell(row, cTime);
         std::optional<double> t;
         switch (p.timeForm) {
         case MappingProfile::TimeForm::Seconds: t = readNumber(timeText, p.decimal); break;
@@ -534,7 +552,7 @@ MappedTable mapTable(const Table& table, const MappingProfile& p, const MatchDet
             *t -= start->second;
         }
         // Side.
-        const std::string sideWord = *cell(row, "side");
+        const std::string sideWord = *cell(row, cSide);
         std::string side;
         if (!p.homeValue.empty()) {
             if (sideWord == p.homeValue) side = venue == "home" ? "us" : "opp";
@@ -557,7 +575,7 @@ MappedTable mapTable(const Table& table, const MappingProfile& p, const MatchDet
         }
         std::string result = meaning->second.result;
         if (result.empty()) {
-            if (auto word = cell(row, "result"); word && !word->empty()) {
+            if (auto word = cell(row, cResult); word && !word->empty()) {
                 if (const auto r = p.results.find(*word); r != p.results.end()) result = r->second;
                 else {
                     unknownWord(columnOf("result"), *word, row.line);
@@ -567,8 +585,9 @@ MappedTable mapTable(const Table& table, const MappingProfile& p, const MatchDet
         }
         // Coordinates: fractions of the stated extent, then metres in our picture (the acting
         // or our team attacking to the right, y = 0 at its right touchline, i.e. the bottom).
-        auto coordinate = [&](const char* fx, const char* fy) -> std::optional<std::pair<double, double>> {
-            const auto xs = cell(row, fx), ys = cell(row, fy);
+        auto coordinate = [&](const char* fx, const char* fy, const Slot& sx,
+                              const Slot& sy) -> std::optional<std::pair<double, double>> {
+            const auto xs = cell(row, sx), ys = cell(row, sy);
             if (!xs || !ys || (xs->empty() && ys->empty())) return std::nullopt;
             const auto x = readNumber(*xs, p.decimal), y = readNumber(*ys, p.decimal);
             bool bad = false;
@@ -595,7 +614,7 @@ MappedTable mapTable(const Table& table, const MappingProfile& p, const MatchDet
             if (bad) return std::pair{-1e9, -1e9};
             return std::pair{fxr * length, fyr * width};
         };
-        const auto at = coordinate("x", "y");
+        const auto at = coordinate("x", "y", cX, cY);
         if (!at) {
             error(place, columnOf("x"), "no position (x and y are empty)");
             continue;
@@ -604,18 +623,18 @@ MappedTable mapTable(const Table& table, const MappingProfile& p, const MatchDet
         e["period"] = period;
         e["t"] = std::round(*t * 1000) / 1000;
         e["side"] = side;
-        if (auto player = cell(row, "player"); player && !player->empty()) e["player"] = *player;
+        if (auto player = cell(row, cPlayer); player && !player->empty()) e["player"] = *player;
         e["type"] = meaning->second.type;
         if (!result.empty()) e["result"] = result;
         e["x"] = std::round(at->first * 100) / 100;
         e["y"] = std::round(at->second * 100) / 100;
-        if (const auto to = coordinate("to_x", "to_y")) {
+        if (const auto to = coordinate("to_x", "to_y", cToX, cToY)) {
             if (to->first < -1e8) continue;
             e["to_x"] = std::round(to->first * 100) / 100;
             e["to_y"] = std::round(to->second * 100) / 100;
         }
         std::vector<std::string> tags = meaning->second.tags;
-        if (auto t2 = cell(row, "tags"); t2 && !t2->empty()) {
+        if (auto t2 = cell(row, cTags); t2 && !t2->empty()) {
             std::size_t s = 0;
             while (s <= t2->size()) {
                 const auto cut = t2->find(p.tagSeparator, s);
@@ -629,8 +648,9 @@ MappedTable mapTable(const Table& table, const MappingProfile& p, const MatchDet
         if (lastT.count(period) && *t < lastT[period]) ++backwards;
         lastT[period] = std::max(lastT[period], *t);
         events.push_back({period, *t, events.size(), std::move(e), place});
-        ++out.countsByType[side + " " + meaning->second.type];
+        ++counts[{side == "us" ? std::string_view("us") : std::string_view("opp"), &meaning->second.type}];
     }
+    for (const auto& [key, n] : counts) out.countsByType[std::string(key.first) + " " + *key.second] += n;
     for (auto& [key, u] : unmapped) {
         out.unmapped.push_back(u);
         std::string lines;
