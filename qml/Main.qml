@@ -133,7 +133,7 @@ ApplicationWindow {
                     Layout.leftMargin: Theme.gapLarge
                     Layout.rightMargin: Theme.gapLarge
                     Layout.fillWidth: true
-                    text: qsTr("Demo club: invented data. Your own club file goes in your data folder, or open one with --db.")
+                    text: qsTr("Demo club: invented data. Open your own club file in Settings (Ctrl+9).")
                     wrapMode: Text.WordWrap
                     color: Theme.watch
                     font.pixelSize: Theme.fontSmall

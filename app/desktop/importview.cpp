@@ -1,5 +1,6 @@
 #include "importview.h"
 
+#include "appclock.h"
 #include "profilestore.h"
 
 #include "clubsession.h"
@@ -46,9 +47,9 @@ ImportResult ingestOne(ClubRepository& repo, const QString& path, const IngestOp
             if (!saved) {
                 r.outcome = ImportResult::Failed;
                 r.detail = QStringLiteral("Nothing of this file was stored.");
-                r.problems << QStringLiteral("%1: no saved layout reads this table. Save a mapping "
-                                             "profile for it once (pitchloop profile save NAME "
-                                             "PROFILE.json; see docs/import.md), then drop it again.")
+                r.problems << QStringLiteral("%1: no saved layout reads this table. Save its "
+                                             "mapping profile once with “Save a table layout…” on "
+                                             "this page (docs/import.md), then drop it again.")
                                   .arg(r.fileName);
                 return r;
             }
@@ -254,6 +255,42 @@ bool ImportView::loadPaths(const QStringList& given) {
     });
     m_thread->setObjectName(QStringLiteral("match import"));
     m_thread->start();
+    return true;
+}
+
+bool ImportView::saveLayout(const QUrl& profileFile) {
+    ClubSession* s = session();
+    ClubRepository* repo = s && s->isOpen() ? s->repository() : nullptr;
+    if (!repo) {
+        setSummary(tr("No club file is open, so there is nowhere to save the layout."));
+        return false;
+    }
+    const QString path = profileFile.isLocalFile() ? profileFile.toLocalFile() : profileFile.toString();
+    const QString shortName = QFileInfo(path).fileName();
+    std::string text;
+    try {
+        text = readFileBytes(QFile::encodeName(path).toStdString());
+    } catch (const std::exception&) {
+        setSummary(tr("%1 cannot be read.").arg(shortName));
+        return false;
+    }
+    const ProfileResult parsed = parseProfile(text, shortName.toStdString());
+    if (!parsed.profile) {
+        QStringList lines;
+        for (const auto& p : parsed.errors) lines << QString::fromStdString(p.describe());
+        setSummary(tr("The layout was not saved:\n%1").arg(lines.join(QLatin1Char('\n'))));
+        return false;
+    }
+    const std::string name = parsed.profile->name.empty() ? QFileInfo(path).completeBaseName().toStdString()
+                                                          : parsed.profile->name;
+    try {
+        ProfileStore(*repo).save(name, text, {}, nowUtcIso());
+    } catch (const std::exception& e) {
+        setSummary(tr("The layout was not saved: %1").arg(QString::fromUtf8(e.what())));
+        return false;
+    }
+    setSummary(tr("Saved the table layout “%1”: tables with its columns now load when dropped here.")
+                   .arg(QString::fromStdString(name)));
     return true;
 }
 

@@ -75,6 +75,9 @@ public:
     Q_INVOKABLE bool loadPaths(const QStringList& paths);
     /// Stops after the file being loaded now; the rest are listed as not loaded.
     Q_INVOKABLE void cancel();
+    /// Saves a mapping profile file (docs/import.md) in the club file under its own name (or
+    /// the file's): tables in its layout then load on drop. Says what happened in the summary.
+    Q_INVOKABLE bool saveLayout(const QUrl& profileFile);
 
     /// The .json files a list of files and folders stands for, in load order.
     static QStringList expandPaths(const QStringList& paths);

@@ -5,6 +5,8 @@
 #include "clubsession.h"
 #include "display.h"
 #include "drills.h"
+#include "fixtures.h"
+#include "matchreader.h"
 #include "planblockmodel.h"
 #include "plandrillchoicemodel.h"
 #include "planfocusmodel.h"
@@ -14,6 +16,7 @@
 #include "sessions.h"
 
 #include <QDate>
+#include <QFile>
 #include <QFileInfo>
 #include <QLocale>
 #include <QSaveFile>
@@ -307,9 +310,9 @@ void PlannerView::fillWeek(model::ClubRepository& repo) {
         m_weekNote.clear();
     } else {
         m_weekNote = tr("%1 has no fixtures in season %2 yet, so these days have no microcycle "
-                        "and no session can be planned. Import the schedule with the command "
-                        "line: pitchloop --db %3 fixtures import FIXTURES.csv")
-                         .arg(qs(m_squad), qs(seasonOf(selected)), session()->clubFile());
+                        "and no session can be planned. Import the schedule with “Import "
+                        "fixtures…” (a CSV or JSON file of dates, kick-offs and opponents).")
+                         .arg(qs(m_squad), qs(seasonOf(selected)));
         m_selectedDayDetail = tr("No fixtures in this season yet.");
     }
     m_planReplacesSaved =
@@ -590,6 +593,51 @@ bool PlannerView::save(const QString& by) {
                               : tr("Saved the session of %1.").arg(day),
                false);
     session()->reload(); // every page sees the new session; this page refreshes its week too
+    return true;
+}
+
+bool PlannerView::importFixtures(const QUrl& file) {
+    model::ClubRepository* repo = repository();
+    const QString path = localPath(file);
+    if (!repo) {
+        setMessage(tr("No club file is open."), true);
+        return false;
+    }
+    if (path.isEmpty()) {
+        setMessage(tr("Choose a fixtures file (CSV or JSON) to import."), true);
+        return false;
+    }
+    const std::string name = QFileInfo(path).fileName().toStdString();
+    auto refuse = [&](const Problems& problems) {
+        QStringList lines;
+        for (const auto& p : problems) lines << QString::fromStdString(p.describe());
+        setMessage(tr("No fixture was imported:\n%1").arg(lines.join(QLatin1Char('\n'))), true);
+        return false;
+    };
+    std::string text;
+    try {
+        text = readFileBytes(QFile::encodeName(path).toStdString());
+    } catch (const std::exception&) {
+        setMessage(tr("%1 cannot be read.").arg(QString::fromStdString(name)), true);
+        return false;
+    }
+    const auto parsed = parseFixtureFile(text, name);
+    if (!parsed.errors.empty()) return refuse(parsed.errors);
+    FixtureImport r;
+    try {
+        r = FixtureStore(*repo).importFixtures(m_squad, parsed.fixtures, name);
+    } catch (const std::exception& e) {
+        setMessage(tr("No fixture was imported: %1").arg(QString::fromUtf8(e.what())), true);
+        return false;
+    }
+    if (!r.errors.empty()) return refuse(r.errors);
+    setMessage(tr("Fixtures imported from %1: %2 added, %3 updated, %4 unchanged.")
+                   .arg(QString::fromStdString(name))
+                   .arg(r.added)
+                   .arg(r.updated)
+                   .arg(r.unchanged),
+               false);
+    session()->reload(); // the week and every page see the schedule
     return true;
 }
 

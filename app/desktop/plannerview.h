@@ -145,6 +145,9 @@ public:
     Q_INVOKABLE bool save(const QString& by);
     /// The chosen day's saved session as the one-page PDF sheet.
     Q_INVOKABLE bool exportSheet(const QUrl& file);
+    /// Imports the squad's fixtures from a CSV or JSON file (docs/planner.md): all or nothing,
+    /// problems in the message naming the file, the line and the field.
+    Q_INVOKABLE bool importFixtures(const QUrl& file);
     /// The week's saved sessions and the open focuses' review dates that fall in it as an
     /// iCalendar file; sessions start at `start` ("HH:MM").
     Q_INVOKABLE bool exportCalendar(const QUrl& file, const QString& start);

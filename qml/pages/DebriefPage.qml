@@ -69,8 +69,7 @@ Page {
         width: Math.min(parent.width - 2 * Theme.margin, 640)
         wrapMode: Text.WordWrap
         horizontalAlignment: Text.AlignHCenter
-        text: qsTr("No matches in this club file yet. Load match files with the command line: "
-                   + "pitchloop --db %1 ingest MATCH.json …").arg(root.session.clubFile)
+        text: qsTr("No matches in this club file yet. Load them on the Load matches page (Ctrl+2), or drop the files on this window.")
         color: Theme.text
     }
 

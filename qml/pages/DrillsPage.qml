@@ -158,7 +158,7 @@ Page {
                     wrapMode: Text.WordWrap
                     color: Theme.text
                     text: book.hasBook ? qsTr("No drill matches these filters.")
-                                       : qsTr("No drills yet. Write the first one in the form (Ctrl+N), or import a drills file: pitchloop drills import drills.json")
+                                       : qsTr("No drills yet. Write the first one in the form (Ctrl+N).")
                 }
             }
         }

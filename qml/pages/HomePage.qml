@@ -102,8 +102,7 @@ Page {
             visible: !overview.hasMatches
             Layout.fillWidth: true
             wrapMode: Text.WordWrap
-            text: qsTr("This club file holds no matches yet. Load match files with the command line: "
-                       + "pitchloop --db %1 ingest MATCH.json …").arg(root.session.clubFile)
+            text: qsTr("This club file holds no matches yet. Load them on the Load matches page (Ctrl+2), or drop the files on this window.")
             color: Theme.text
         }
 
@@ -252,8 +251,7 @@ Page {
             emptyText: overview.hasTargets
                        ? qsTr("Nothing slipped, on watch or back on target over %1.").arg(overview.windowText.toLowerCase())
                        : qsTr("No targets are set for this season, so the debrief has nothing to judge. "
-                              + "Set them with the command line: pitchloop --db %1 targets import FILE.json")
-                         .arg(root.session.clubFile)
+                              + "Set them on the Season targets page (Ctrl+3).")
             onLineClicked: (metricId, band, lane) => root.openZone(metricId, band, lane, overview.lastMatchId)
         }
 

@@ -44,6 +44,14 @@ Page {
         onAccepted: loader.loadUrls(selectedFiles)
     }
 
+    FileDialog {
+        id: layoutDialog
+        title: qsTr("Save a table layout (mapping profile)")
+        fileMode: FileDialog.OpenFile
+        nameFilters: [qsTr("Mapping profiles (*.json)"), qsTr("All files (*)")]
+        onAccepted: loader.saveLayout(selectedFile)
+    }
+
     FolderDialog {
         id: folderDialog
         title: qsTr("Load every match file in a folder")
@@ -96,6 +104,14 @@ Page {
                 ToolTip.text: qsTr("A file for a match already stored, with different content, replaces the stored match. Otherwise it is refused.")
             }
             Button {
+                objectName: "saveLayout"
+                text: qsTr("Save a table layout…")
+                enabled: loader.canLoad && !loader.running
+                ToolTip.visible: hovered
+                ToolTip.text: qsTr("A mapping profile (docs/import.md): tables with its columns then load when dropped here")
+                onClicked: layoutDialog.open()
+            }
+            Button {
                 text: qsTr("Choose a folder…")
                 enabled: loader.canLoad && !loader.running
                 onClicked: folderDialog.open()
@@ -121,6 +137,7 @@ Page {
             ColumnLayout {
                 visible: !loader.running
                 anchors.centerIn: parent
+                width: parent.width - 2 * Theme.margin
                 spacing: Theme.gapSmall
                 Label {
                     Layout.alignment: Qt.AlignHCenter
@@ -131,6 +148,9 @@ Page {
                 }
                 Label {
                     Layout.alignment: Qt.AlignHCenter
+                    Layout.fillWidth: true
+                    horizontalAlignment: Text.AlignHCenter
+                    wrapMode: Text.WordWrap
                     text: qsTr("Match files are .json files in the Pitchloop match format; tables (.csv, .tsv, .jsonl) load with the saved layout whose columns they have. Each match is stored whole or not at all; a file loaded before is left as it is.")
                     color: Theme.textMuted
                     font.pixelSize: Theme.fontSmall

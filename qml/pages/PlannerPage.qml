@@ -127,12 +127,22 @@ Page {
             color: Theme.error
             wrapMode: Text.WordWrap
         }
-        Label {
-            visible: planner.weekNote.length > 0
+        RowLayout {
             Layout.fillWidth: true
-            text: planner.weekNote
-            color: Theme.text
-            wrapMode: Text.WordWrap
+            spacing: Theme.gap
+            Label {
+                visible: planner.weekNote.length > 0
+                Layout.fillWidth: true
+                text: planner.weekNote
+                color: Theme.text
+                wrapMode: Text.WordWrap
+            }
+            Item { Layout.fillWidth: planner.weekNote.length === 0 }
+            Button {
+                objectName: "importFixtures"
+                text: qsTr("Import fixtures…")
+                onClicked: fixturesDialog.open()
+            }
         }
 
         RowLayout {
@@ -416,6 +426,14 @@ Page {
         defaultSuffix: "pdf"
         nameFilters: [qsTr("PDF files (*.pdf)")]
         onAccepted: planner.exportSheet(selectedFile)
+    }
+
+    FileDialog {
+        id: fixturesDialog
+        title: qsTr("Import the squad's fixtures")
+        fileMode: FileDialog.OpenFile
+        nameFilters: [qsTr("Fixtures (*.csv *.json)"), qsTr("All files (*)")]
+        onAccepted: planner.importFixtures(selectedFile)
     }
 
     FileDialog {

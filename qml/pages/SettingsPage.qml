@@ -131,7 +131,7 @@ Page {
                     Label {
                         Layout.fillWidth: true
                         text: (root.session.demo ? qsTr("This is the demo club (invented data). ") : "")
-                              + qsTr("A club file opened here opens again at the next start, unless --db or $PITCHLOOP_DB names another.")
+                              + qsTr("A club file opened here opens again at the next start.")
                         color: Theme.textMuted
                         font.pixelSize: Theme.fontSmall
                         wrapMode: Text.WordWrap

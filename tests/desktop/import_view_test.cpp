@@ -303,13 +303,22 @@ int main(int argc, char* argv[]) {
 #include "import_view_test.moc"
 
 void ImportViewTest::tableLoadsWithTheSavedLayout() {
-    // The analyst-sheet layout (sample-club/import/) saved in the club file; a table in it is
+    // The analyst-sheet layout (sample-club/import/) saved through the page; a table in it is
     // dropped with no profile to pick, and a table in no saved layout says what to do.
+    const QString broken = m_dir->filePath(QStringLiteral("broken.json"));
+    {
+        QFile f(broken);
+        QVERIFY(f.open(QIODevice::WriteOnly));
+        f.write(R"({"format": "pitchloop-profile", "version": 1, "colums": {}})");
+    }
+    QVERIFY(!m_view->saveLayout(QUrl::fromLocalFile(broken)));
+    QVERIFY2(m_view->summaryText().contains(QStringLiteral("colums")), qPrintable(m_view->summaryText()));
+    QVERIFY(m_view->saveLayout(QUrl::fromLocalFile(
+        QStringLiteral(PITCHLOOP_SOURCE_DIR) + QStringLiteral("/sample-club/import/analyst-sheet.json"))));
+    QVERIFY(m_view->summaryText().contains(QStringLiteral("Saved the table layout")));
     {
         model::ClubRepository repo(m_file.toStdString());
-        const std::string profile = model::readFileBytes(
-            std::string(PITCHLOOP_SOURCE_DIR) + "/sample-club/import/analyst-sheet.json");
-        QVERIFY(model::ProfileStore(repo).save("analyst sheet", profile, "R. Tamsin", "t").empty());
+        QCOMPARE(model::ProfileStore(repo).list().size(), std::size_t(1));
     }
     const QString table = m_dir->filePath(QStringLiteral("KB-T-01_2026-08-08_home_Nettleby Town.csv"));
     {
@@ -331,9 +340,10 @@ void ImportViewTest::tableLoadsWithTheSavedLayout() {
     const ImportResult& loaded = results.rows()[0];
     QCOMPARE(loaded.outcome, ImportResult::Stored);
     QCOMPARE(loaded.matchId, QStringLiteral("KB-T-01"));
-    QVERIFY2(loaded.detail.contains(QStringLiteral("read with the saved layout “analyst sheet”")), qPrintable(loaded.detail));
+    QVERIFY2(loaded.detail.contains(QStringLiteral("read with the saved layout “analyst sheet (semicolons")), qPrintable(loaded.detail));
     const ImportResult& refused = results.rows()[1];
     QCOMPARE(refused.outcome, ImportResult::Failed);
     QVERIFY(refused.problems.join(QLatin1Char(' ')).contains(QStringLiteral("no saved layout reads this table")));
+    QVERIFY(refused.problems.join(QLatin1Char(' ')).contains(QStringLiteral("Save a table layout")));
     QVERIFY(has(storedIds(m_file), "KB-T-01"));
 }

@@ -26,6 +26,7 @@
 #include <QAbstractItemModelTester>
 #include <QDate>
 #include <QDir>
+#include <QFile>
 #include <QGuiApplication>
 #include <QLocale>
 #include <QQmlEngine>
@@ -517,6 +518,27 @@ void PlannerViewTest::emptyClub() {
     QVERIFY(!view.hasPlan());
     QVERIFY(!view.problem().isEmpty());
     QCOMPARE(view.drillChoices()->rowCount(), 0);
+    // The note points at the page's own import, not at the command line.
+    QVERIFY(view.weekNote().contains(QStringLiteral("Import fixtures")));
+    QVERIFY(!view.weekNote().contains(QStringLiteral("pitchloop")));
+
+    // A bad fixtures file imports nothing and says where it is wrong.
+    const QString bad = dir.filePath(QStringLiteral("bad-fixtures.csv"));
+    {
+        QFile f(bad);
+        QVERIFY(f.open(QIODevice::WriteOnly));
+        f.write("date,kickoff,opponent,venue,competition\n2026-02-30,15:00,Nettleby Town,home,League\n");
+    }
+    QVERIFY(!view.importFixtures(QUrl::fromLocalFile(bad)));
+    QVERIFY(view.messageIsError());
+    QVERIFY2(view.message().contains(QStringLiteral("bad-fixtures.csv")), qPrintable(view.message()));
+    QVERIFY(model::FixtureStore(*empty.repository()).list(kSquad, "2026-27").empty());
+    // The demo's schedule imports, and the week of 29 Sep then has its microcycle.
+    QVERIFY(view.importFixtures(QUrl::fromLocalFile(kSource + QStringLiteral("/sample-club/fixtures.csv"))));
+    QVERIFY2(!view.messageIsError(), qPrintable(view.message()));
+    QVERIFY(view.message().contains(QStringLiteral("added")));
+    QVERIFY(!model::FixtureStore(*empty.repository()).list(kSquad, "2026-27").empty());
+    QVERIFY(view.weekNote().isEmpty());
 }
 
 int main(int argc, char* argv[]) {
