@@ -739,16 +739,22 @@ MappedTable mapTable(const Table& table, const MappingProfile& p, const MatchDet
     return out;
 }
 
+namespace {
+
+/// Decodes the bytes and cuts them into a table, the profile's way.
+TableResult readTable(std::string_view bytes, const MappingProfile& profile, const std::string& fileName) {
+    DecodedText text = decodeText(bytes, profile.encoding, fileName);
+    if (!text.errors.empty()) return {{}, std::move(text.errors)};
+    return parseTable(text.text, profile.table, fileName);
+}
+
+} // namespace
+
 MappedTable mapFile(std::string_view bytes, const MappingProfile& profile,
                     const MatchDetails& details, const std::string& fileName) {
-    MappedTable out;
-    DecodedText text = decodeText(bytes, profile.encoding, fileName);
-    if (!text.errors.empty()) {
-        out.errors = std::move(text.errors);
-        return out;
-    }
-    TableResult table = parseTable(text.text, profile.table, fileName);
+    TableResult table = readTable(bytes, profile, fileName);
     if (!table.errors.empty()) {
+        MappedTable out;
         out.errors = std::move(table.errors);
         return out;
     }
@@ -762,9 +768,7 @@ std::vector<MappedTable> mapFileMatches(std::string_view bytes, const MappingPro
         t.errors = std::move(errors);
         return std::vector<MappedTable>{std::move(t)};
     };
-    DecodedText text = decodeText(bytes, profile.encoding, fileName);
-    if (!text.errors.empty()) return failed(std::move(text.errors));
-    TableResult parsed = parseTable(text.text, profile.table, fileName);
+    TableResult parsed = readTable(bytes, profile, fileName);
     if (!parsed.errors.empty()) return failed(std::move(parsed.errors));
     const Table& table = parsed.table;
     if (profile.matchColumns.empty()) return {mapTable(table, profile, details, fileName)};

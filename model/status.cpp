@@ -3,6 +3,8 @@
 #include <boost/math/special_functions/beta.hpp>
 #include <boost/math/special_functions/gamma.hpp>
 
+#include <nlohmann/json.hpp>
+
 #include <algorithm>
 #include <map>
 #include <tuple>
@@ -403,6 +405,41 @@ std::vector<ZoneStatus> computeStatus(const SeasonTallies& season, std::size_t f
         }
     }
     return out;
+}
+
+nlohmann::json toJson(const ZoneStatus& s) {
+    using nlohmann::json;
+    json j{{"metric", s.metric},        {"band", s.band},
+           {"lane", s.lane},            {"window", s.window.name()},
+           {"num", s.sum.num},          {"den", s.sum.den},
+           {"matches", s.sum.matches},  {"level", s.level},
+           {"state", toString(s.state)}};
+    auto put = [&](const char* key, double v) {
+        j[key] = std::isnan(v) || std::isinf(v) ? json() : json(v);
+    };
+    put("value", s.value);
+    put("low", s.interval.low);
+    put("high", s.interval.high);
+    put("p_miss", s.pMiss);
+    put("p_value", s.pValue);
+    put("effective_num", s.sum.effNum);
+    put("effective_den", s.sum.effDen);
+    put("dispersion", s.dispersion);
+    put("match_tail", s.matchTail);
+    if (s.target) {
+        j["target"] = {{"direction", toString(s.target->direction)},
+                       {"value", s.target->value},
+                       {"watch_margin", s.target->watchMargin},
+                       {"min_sample", s.target->minSample},
+                       {"author", s.target->author},
+                       {"effective_from", s.target->effectiveFrom}};
+        j["chance_off"] = s.chanceOff;
+        j["bh_rejected"] = s.bhRejected;
+        j["off_threshold"] = s.offThreshold;
+    } else {
+        j["target"] = nullptr;
+    }
+    return j;
 }
 
 double expectedChanceFlags(const std::vector<ZoneStatus>& statuses) {

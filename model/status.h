@@ -9,6 +9,8 @@
 #include "variation.h"
 #include "zones.h"
 
+#include <nlohmann/json_fwd.hpp>
+
 #include <limits>
 #include <map>
 #include <optional>
@@ -143,6 +145,10 @@ std::vector<ZoneStatus> computeStatus(const SeasonTallies& season, std::size_t f
                                       const std::vector<Target>& targets, const ZoneGrid& grid,
                                       const std::vector<Window>& windows,
                                       const FlagSettings& settings);
+
+/// One zone's status as JSON, every number (null where it does not exist): what `status
+/// --format json` prints and what a focus freezes as its evidence (docs/cli.md).
+nlohmann::json toJson(const ZoneStatus& s);
 
 /// How many zones would be flagged off target by chance alone at this look if every true value
 /// sat exactly on its target: the sum of `chanceOff` over zones that have a target and enough

@@ -56,32 +56,26 @@ constexpr std::array<std::pair<Result, std::string_view>, 8> kResults{{
 }};
 
 // Match format version 2: our own words where version 1 shared another vocabulary's
-// (docs/match-format.md, "Version 2").
-constexpr std::array<std::pair<EventType, std::string_view>, 12> kTypesV2{{
-    {EventType::Pass, "pass"},
-    {EventType::Carry, "carry"},
-    {EventType::TakeOn, "beat"},
-    {EventType::Shot, "shot"},
-    {EventType::Recovery, "recovery"},
-    {EventType::Interception, "interception"},
-    {EventType::Tackle, "tackle"},
-    {EventType::Keeper, "keeper"},
-    {EventType::Clearance, "clearance"},
-    {EventType::Block, "block"},
-    {EventType::Foul, "foul"},
-    {EventType::Out, "out"},
+// (docs/match-format.md, "Version 2"); every other word is the same in both.
+constexpr std::array<std::pair<std::string_view, std::string_view>, 7> kRenamedInV2{{
+    {"take_on", "beat"}, {"fail", "lost"}, {"goal", "scored"}, {"saved", "stopped"},
+    {"blocked", "charged_down"}, {"off", "wide"}, {"post", "woodwork"},
 }};
 
-constexpr std::array<std::pair<Result, std::string_view>, 8> kResultsV2{{
-    {Result::None, ""},
-    {Result::Ok, "ok"},
-    {Result::Fail, "lost"},
-    {Result::Goal, "scored"},
-    {Result::Saved, "stopped"},
-    {Result::Blocked, "charged_down"},
-    {Result::Off, "wide"},
-    {Result::Post, "woodwork"},
-}};
+/// A version 2 word as version 1 spells it; nullopt for a version 1 word that version 2 renamed.
+std::optional<std::string_view> asVersion1(std::string_view word) {
+    for (const auto& [v1, v2] : kRenamedInV2) {
+        if (word == v2) return v1;
+        if (word == v1) return std::nullopt;
+    }
+    return word;
+}
+
+std::string_view asVersion2(std::string_view word) {
+    for (const auto& [v1, v2] : kRenamedInV2)
+        if (word == v1) return v2;
+    return word;
+}
 
 constexpr std::array<std::pair<Frame, std::string_view>, 3> kFrames{{
     {Frame::Acting, "acting"},
@@ -114,17 +108,21 @@ std::optional<Result> resultFromString(std::string_view s) {
 std::optional<Frame> frameFromString(std::string_view s) { return lookup(kFrames, s); }
 
 std::optional<EventType> eventTypeFromWord(std::string_view s, int version) {
-    return version >= 2 ? lookup(kTypesV2, s) : lookup(kTypes, s);
+    if (version < 2) return lookup(kTypes, s);
+    const auto v1 = asVersion1(s);
+    return v1 ? lookup(kTypes, *v1) : std::nullopt;
 }
 std::optional<Result> resultFromWord(std::string_view s, int version) {
     if (s.empty()) return std::nullopt;
-    return version >= 2 ? lookup(kResultsV2, s) : lookup(kResults, s);
+    if (version < 2) return lookup(kResults, s);
+    const auto v1 = asVersion1(s);
+    return v1 ? lookup(kResults, *v1) : std::nullopt;
 }
 std::string_view wordOf(EventType t, int version) {
-    return version >= 2 ? nameOf(kTypesV2, t) : nameOf(kTypes, t);
+    return version >= 2 ? asVersion2(nameOf(kTypes, t)) : nameOf(kTypes, t);
 }
 std::string_view wordOf(Result r, int version) {
-    return version >= 2 ? nameOf(kResultsV2, r) : nameOf(kResults, r);
+    return version >= 2 ? asVersion2(nameOf(kResults, r)) : nameOf(kResults, r);
 }
 
 const std::vector<std::string_view>& eventTypeNames() {

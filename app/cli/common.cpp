@@ -83,40 +83,4 @@ std::string formatValue(MetricKind kind, double value) {
     return buf;
 }
 
-
-nlohmann::json statusJson(const ZoneStatus& s) {
-    nlohmann::json j{{"metric", s.metric},        {"band", s.band},
-                     {"lane", s.lane},            {"window", s.window.name()},
-                     {"num", s.sum.num},          {"den", s.sum.den},
-                     {"matches", s.sum.matches},  {"level", s.level},
-                     {"state", toString(s.state)}};
-    auto put = [&](const char* key, double v) {
-        j[key] = std::isnan(v) || std::isinf(v) ? nlohmann::json() : nlohmann::json(v);
-    };
-    put("value", s.value);
-    put("low", s.interval.low);
-    put("high", s.interval.high);
-    put("p_miss", s.pMiss);
-    put("p_value", s.pValue);
-    put("effective_num", s.sum.effNum);
-    put("effective_den", s.sum.effDen);
-    put("dispersion", s.dispersion);
-    put("match_tail", s.matchTail);
-    if (s.target) {
-        j["target"] = {{"direction", toString(s.target->direction)},
-                       {"value", s.target->value},
-                       {"watch_margin", s.target->watchMargin},
-                       {"min_sample", s.target->minSample},
-                       {"author", s.target->author},
-                       {"effective_from", s.target->effectiveFrom}};
-        j["chance_off"] = s.chanceOff;
-        j["bh_rejected"] = s.bhRejected;
-        j["off_threshold"] = s.offThreshold;
-    } else {
-        j["target"] = nullptr;
-    }
-    return j;
-}
-
-
 } // namespace pitchloop::cli

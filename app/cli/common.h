@@ -40,7 +40,4 @@ std::string zoneName(int band, int lane);
 /// A value in its metric's unit for people: "45.2%" for rates, "2.40" otherwise.
 std::string formatValue(model::MetricKind kind, double value);
 
-/// One zone's status as JSON (status --format json, a focus's frozen evidence).
-nlohmann::json statusJson(const model::ZoneStatus& s);
-
 } // namespace pitchloop::cli

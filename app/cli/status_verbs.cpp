@@ -201,7 +201,7 @@ int StatusVerbs::runStatus(ClubRepository& repo, std::ostream& out, std::ostream
         }
         j["chance_off_flags"] = chance;
         j["zones"] = nlohmann::json::array();
-        for (const auto& s : statuses) j["zones"].push_back(statusJson(s));
+        for (const auto& s : statuses) j["zones"].push_back(toJson(s));
         out << j.dump(2) << "\n";
         return kExitOk;
     }

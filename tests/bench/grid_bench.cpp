@@ -3,6 +3,7 @@
 // preview the settings page shows on every choice. Run on demand:
 //   build/tests/bench/pitchloop_bench_grid CLUB.sqlite [runs]
 // The club file itself is never touched: the benchmark works on a copy in the temp folder.
+#include "benchtime.h"
 #include "gridchange.h"
 #include "repository.h"
 
@@ -15,11 +16,9 @@
 
 namespace fs = std::filesystem;
 using namespace pitchloop::model;
-using Clock = std::chrono::steady_clock;
+using namespace pitchloop::bench;
 
 namespace {
-
-double ms(Clock::duration d) { return std::chrono::duration<double, std::milli>(d).count(); }
 
 double quantile(std::vector<double> v, double q) {
     std::sort(v.begin(), v.end());

@@ -3,6 +3,7 @@
 // map + the match reader's checks, against the reader alone on the native file; and a full
 // ingest of each into a real club file. Run on demand:
 //   build/tests/bench/pitchloop_bench_import sample-club [runs]
+#include "benchtime.h"
 #include "importprofile.h"
 #include "ingest.h"
 #include "matchreader.h"
@@ -20,16 +21,9 @@
 
 namespace fs = std::filesystem;
 using namespace pitchloop::model;
-using Clock = std::chrono::steady_clock;
+using namespace pitchloop::bench;
 
 namespace {
-
-double ms(Clock::duration d) { return std::chrono::duration<double, std::milli>(d).count(); }
-
-double median(std::vector<double> v) {
-    std::sort(v.begin(), v.end());
-    return v.size() % 2 ? v[v.size() / 2] : (v[v.size() / 2 - 1] + v[v.size() / 2]) / 2;
-}
 
 std::string comma(double v) {
     char buf[32];

@@ -2,6 +2,7 @@
 // season into a real club file, with peak memory. Run on demand:
 //   build/tests/bench/pitchloop_bench_ingest sample-club/matches [runs]
 // Match files are cloned under new ids so every ingest does the full work.
+#include "benchtime.h"
 #include "ingest.h"
 #include "repository.h"
 
@@ -16,7 +17,7 @@
 
 namespace fs = std::filesystem;
 using namespace pitchloop::model;
-using Clock = std::chrono::steady_clock;
+using namespace pitchloop::bench;
 
 namespace {
 
@@ -27,13 +28,6 @@ std::string withId(const nlohmann::json& match, const std::string& id) {
 }
 
 nlohmann::json load(const fs::path& p) { return nlohmann::json::parse(readFileBytes(p)); }
-
-double ms(Clock::duration d) { return std::chrono::duration<double, std::milli>(d).count(); }
-
-double median(std::vector<double> v) {
-    std::sort(v.begin(), v.end());
-    return v.size() % 2 ? v[v.size() / 2] : (v[v.size() / 2 - 1] + v[v.size() / 2]) / 2;
-}
 
 long peakRssMiB() {
     rusage r{};

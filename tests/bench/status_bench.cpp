@@ -2,6 +2,7 @@
 // with targets and flags, at one match of a 1,000-match club file. Run on demand:
 //   build/tests/bench/pitchloop_bench_status sample-club/matches sample-club/targets.json [runs]
 // The club file is built once (1,000 demo matches cloned over 30 seasons) and reused.
+#include "benchtime.h"
 #include "ingest.h"
 #include "repository.h"
 #include "status.h"
@@ -18,16 +19,9 @@
 
 namespace fs = std::filesystem;
 using namespace pitchloop::model;
-using Clock = std::chrono::steady_clock;
+using namespace pitchloop::bench;
 
 namespace {
-
-double ms(Clock::duration d) { return std::chrono::duration<double, std::milli>(d).count(); }
-
-double median(std::vector<double> v) {
-    std::sort(v.begin(), v.end());
-    return v.size() % 2 ? v[v.size() / 2] : (v[v.size() / 2 - 1] + v[v.size() / 2]) / 2;
-}
 
 /// The same date `years` later (the demo season's dates avoid 29 February).
 std::string shiftYears(const std::string& date, int years) {
