@@ -24,46 +24,69 @@ Dispersion blend(double estimate, double weight, double prior, double priorWeigh
 
 } // namespace
 
-// One-way analysis of variance for clustered binary data, one group per match with chances:
-//   SSB = Σ x_i²/n_i − (Σx)²/N   (k − 1 degrees of freedom)
-//   SSW = Σ x_i − Σ x_i²/n_i     (N − k)
+// One-way random-effects analysis of variance over groups of clusters (each group its own mean):
+//   SSB = Σ S_i²/n_i − S²/N      (k − 1 degrees of freedom)
+//   SSW = Σ Q_i − Σ S_i²/n_i     (N − k)
 //   n0  = (N − Σ n_i²/N)/(k − 1)
-//   rho = (MSB − MSW) / (MSB + (n0 − 1)·MSW)
-// Each series (zone) keeps its own mean: the sums of squares, their degrees of freedom and the
-// n0 numerators add over series. E[MSW] = μ(1 − μ)(1 − rho) and E[MSB] = μ(1 − μ)(1 + (n0 − 1)
-// rho) under the beta-binomial model, which is what makes the ratio estimate rho.
-Dispersion estimateRateDispersion(const std::vector<TallySeries>& series, int matches,
-                                  const VariationPrior& prior) {
+//   ICC = (MSB − MSW) / (MSB + (n0 − 1)·MSW)
+// with S_i and Q_i a cluster's sum and sum of squares; the sums of squares, their degrees of
+// freedom and the n0 numerators add over groups.
+OneWayAnova oneWayAnova(const std::vector<std::vector<ClusterSums>>& groups) {
     double ssb = 0, ssw = 0, dfb = 0, dfw = 0, n0num = 0;
-    for (const auto& s : series) {
-        double k = 0, N = 0, X = 0, sumX2overN = 0, sumN2 = 0;
-        for (const auto& t : s) {
-            if (t.den <= 0) continue;
-            const double n = static_cast<double>(t.den), x = static_cast<double>(t.num);
+    for (const auto& g : groups) {
+        double k = 0, N = 0, S = 0, between = 0, Q = 0, sumN2 = 0;
+        for (const auto& c : g) {
+            if (c.n <= 0) continue;
             k += 1;
-            N += n;
-            X += x;
-            sumX2overN += x * x / n;
-            sumN2 += n * n;
+            N += c.n;
+            S += c.sum;
+            Q += c.sumSquares;
+            between += c.sum * c.sum / c.n;
+            sumN2 += c.n * c.n;
         }
         if (k < 2 || N <= k) continue;
-        ssb += sumX2overN - X * X / N;
-        ssw += X - sumX2overN;
+        ssb += between - S * S / N;
+        ssw += Q - between;
         dfb += k - 1;
         dfw += N - k;
         n0num += N - sumN2 / N;
     }
-    double estimate = prior.rho;
-    double weight = 0;
-    if (dfb > 0 && dfw > 0) {
-        const double msb = ssb / dfb, msw = ssw / dfw, n0 = n0num / dfb;
-        const double denom = msb + (n0 - 1) * msw;
-        if (denom > 0) {
-            estimate = (msb - msw) / denom;
-            weight = std::max(0, matches - 1);
+    OneWayAnova a;
+    a.dfBetween = dfb;
+    a.dfWithin = dfw;
+    if (dfb > 0) {
+        a.msBetween = ssb / dfb;
+        a.n0 = n0num / dfb;
+    }
+    if (dfw > 0) a.msWithin = ssw / dfw;
+    return a;
+}
+
+std::optional<double> OneWayAnova::intraclass() const {
+    if (dfBetween <= 0 || dfWithin <= 0) return std::nullopt;
+    const double denom = msBetween + (n0 - 1) * msWithin;
+    if (denom <= 0) return std::nullopt;
+    return (msBetween - msWithin) / denom;
+}
+
+// Clustered binary data, one cluster per match with chances: a match's x successes of n are a
+// cluster with sum x and sum of squares x (0/1 data). E[MSW] = μ(1 − μ)(1 − rho) and E[MSB] =
+// μ(1 − μ)(1 + (n0 − 1)·rho) under the beta-binomial model, which is what makes the intraclass
+// correlation estimate rho.
+Dispersion estimateRateDispersion(const std::vector<TallySeries>& series, int matches,
+                                  const VariationPrior& prior) {
+    std::vector<std::vector<ClusterSums>> groups;
+    groups.reserve(series.size());
+    for (const auto& s : series) {
+        auto& g = groups.emplace_back();
+        for (const auto& t : s) {
+            const double x = static_cast<double>(t.num);
+            g.push_back({static_cast<double>(t.den), x, x});
         }
     }
-    return blend(estimate, weight, prior.rho, prior.priorWeight, 0.5);
+    if (const auto icc = oneWayAnova(groups).intraclass())
+        return blend(*icc, std::max(0, matches - 1), prior.rho, prior.priorWeight, 0.5);
+    return blend(prior.rho, 0, prior.rho, prior.priorWeight, 0.5);
 }
 
 // For c_i ~ Poisson(e_i·λ_i), λ_i with mean μ and variance phi·μ², and μ̂ = Σc/E:

@@ -9,6 +9,7 @@
 #include "metricengine.h"
 #include "metricspec.h"
 
+#include <optional>
 #include <vector>
 
 namespace pitchloop::model {
@@ -37,6 +38,24 @@ struct VariationPrior {
 
 /// One zone's (or the whole pitch's) per-match tallies, in match order.
 using TallySeries = std::vector<ZoneTally>;
+
+/// One cluster of observations, summarised: its size, sum and sum of squares.
+struct ClusterSums {
+    double n = 0;
+    double sum = 0;
+    double sumSquares = 0;
+};
+
+/// The one-way random-effects analysis of variance of clustered data, groups of clusters each
+/// with its own mean (sums of squares and degrees of freedom added over groups); n0 is the
+/// average cluster size adjusted for unequal sizes, (N − Σn²/N)/(k − 1).
+struct OneWayAnova {
+    double msBetween = 0, msWithin = 0, n0 = 0, dfBetween = 0, dfWithin = 0;
+    /// The intraclass correlation (MSB − MSW)/(MSB + (n0 − 1)·MSW); nullopt without degrees
+    /// of freedom or when the denominator is not positive.
+    std::optional<double> intraclass() const;
+};
+OneWayAnova oneWayAnova(const std::vector<std::vector<ClusterSums>>& groups);
 
 /// Moment estimate of rho pooled over series, each with its own mean: the one-way analysis of
 /// variance estimator for clustered binary data (matches are the clusters), summed over series,
