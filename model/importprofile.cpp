@@ -291,8 +291,8 @@ ProfileResult parseProfile(std::string_view text, const std::string& fileName) {
     }
     if (const json* res = r.object(root, "", "results")) {
         for (const auto& [word, ours] : res->items()) {
-            const std::string text = ours.is_string() ? ours.get<std::string>() : std::string();
-            const auto result = resultFromWord(text, 2) ? resultFromWord(text, 2) : resultFromWord(text, 1);
+            const std::string ourWord = ours.is_string() ? ours.get<std::string>() : std::string();
+            const auto result = resultFromWord(ourWord, 2) ? resultFromWord(ourWord, 2) : resultFromWord(ourWord, 1);
             if (result) p.results[word] = std::string(wordOf(*result, 1));
             else r.error("results", word, "expected one of our results (ok, lost, scored, stopped, "
                                           "charged_down, wide, woodwork; or version 1's words)");
@@ -453,6 +453,10 @@ MappedTable mapTable(const Table& table, const MappingProfile& p, const MatchDet
                           "' does not follow the profile's pattern '" + p.fileNamePattern + "'";
     }
     for (const auto& [k, v] : details.values) m[k] = v;
+    if (details.preview)
+        for (const auto& [k, v] : std::map<std::string, std::string>{
+                 {"id", "preview"}, {"date", "2000-01-01"}, {"venue", "home"}, {"us", "us"}, {"opponent", "them"}})
+            if (!m.contains(k)) m[k] = v;
     for (const char* needed : {"id", "date", "venue", "us", "opponent"})
         if (!m.contains(needed))
             error("match", needed, std::string("not given: set it in the profile's match details, the "
@@ -664,7 +668,7 @@ MappedTable mapTable(const Table& table, const MappingProfile& p, const MatchDet
                    : p.columns.count("period") && u.column == p.columns.at("period") ? "periods"
                                                                                       : "side values"));
     }
-    if (!out.errors.empty()) return out;
+    if (!out.errors.empty() && !details.preview) return out;
     if (events.empty()) {
         error("", "", "no events to load (every row was skipped)");
         return out;
@@ -839,5 +843,8 @@ Problems inTableTerms(const Problems& problems, const MappedTable& mapped, const
     }
     return out;
 }
+
+std::optional<double> readTableNumber(std::string_view text, char decimal) { return readNumber(text, decimal); }
+std::optional<double> readTableClock(std::string_view text, char decimal) { return readClock(text, decimal); }
 
 } // namespace pitchloop::model

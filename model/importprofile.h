@@ -75,6 +75,10 @@ ProfileResult readProfileFile(const std::string& path);
 /// or a form; they override the profile's and the file name's.
 struct MatchDetails {
     std::map<std::string, std::string> values; ///< id, date, opponent, venue, competition, us
+    /// For a preview while a profile is being written (the mapping assistant): match details
+    /// nobody gave yet get placeholders, and the match is built from the rows that map even
+    /// when other rows do not (their problems are still listed). Never stored.
+    bool preview = false;
 };
 
 /// One word of the table that the profile does not map.
@@ -115,5 +119,10 @@ std::vector<MappedTable> mapFileMatches(std::string_view bytes, const MappingPro
 /// terms ("line 14", column "X").
 Problems inTableTerms(const Problems& problems, const MappedTable& mapped,
                       const MappingProfile& profile);
+
+/// A number as a table writes it ("12,5" with a decimal comma); nullopt when it is not one.
+std::optional<double> readTableNumber(std::string_view text, char decimal);
+/// A clock ("75.4", "12:05", "1:02:05.250") in seconds; nullopt when it is not one.
+std::optional<double> readTableClock(std::string_view text, char decimal);
 
 } // namespace pitchloop::model
