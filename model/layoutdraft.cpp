@@ -386,6 +386,40 @@ bool mapWord(MappingProfile& p, const std::string& field, const std::string& wor
     return false;
 }
 
+DraftCheck checkDraft(std::string_view bytes, const MappingProfile& draft, const MatchDetails& details,
+                      const std::string& fileName) {
+    DraftCheck out;
+    const ProfileResult parsed = parseProfile(toJson(draft).dump(), draft.name.empty() ? "layout" : draft.name);
+    if (!parsed.profile) {
+        out.profileErrors = parsed.errors;
+        return out;
+    }
+    const MappingProfile& profile = *parsed.profile;
+    // As ingest would: every match mapped, then read by the match reader (table terms).
+    for (const MappedTable& mapped : mapFileMatches(bytes, profile, details, fileName)) {
+        out.warnings.insert(out.warnings.end(), mapped.warnings.begin(), mapped.warnings.end());
+        if (!mapped.errors.empty()) {
+            out.errors.insert(out.errors.end(), mapped.errors.begin(), mapped.errors.end());
+            continue;
+        }
+        ++out.matches;
+        const ReadResult read = parseMatchDocument(mapped.match, fileName);
+        const Problems errors = inTableTerms(read.errors, mapped, profile);
+        const Problems warnings = inTableTerms(read.warnings, mapped, profile);
+        out.errors.insert(out.errors.end(), errors.begin(), errors.end());
+        out.warnings.insert(out.warnings.end(), warnings.begin(), warnings.end());
+    }
+    MatchDetails preview = details;
+    preview.preview = true;
+    for (const MappedTable& mapped : mapFileMatches(bytes, profile, preview, fileName)) {
+        if (!mapped.match.contains("events")) continue;
+        ReadResult read = parseMatchDocument(mapped.match, fileName);
+        if (read.match) out.preview = std::move(read.match);
+        break;
+    }
+    return out;
+}
+
 json toJson(const MappingProfile& p) {
     json table{{"layout", std::string(toString(p.table.layout))}, {"encoding", std::string(toString(p.encoding))}};
     if (p.table.layout == TableLayout::Delimited) {

@@ -6,6 +6,7 @@
 // guesses are only a start: the person confirms each.
 
 #include "importprofile.h"
+#include "matchreader.h"
 #include "table.h"
 
 #include <nlohmann/json.hpp>
@@ -81,6 +82,20 @@ bool mapWord(MappingProfile& profile, const std::string& field, const std::strin
 /// The choices for a type word, as WordUse::ours writes them: each of our event types, a shot
 /// with each of its results, and "skip".
 const std::vector<std::string>& typeChoices();
+
+/// A draft tried on a file: what ingest would say, and a preview of what it maps so far.
+struct DraftCheck {
+    Problems profileErrors; ///< the draft is not yet a profile (a needed column has no role...)
+    Problems errors;        ///< the file cannot be loaded with it (table terms: line, column)
+    Problems warnings;      ///< sanity checks
+    int matches = 0;        ///< matches the file holds with this draft
+    /// The first match as far as it maps now (preview mode: placeholders for missing details,
+    /// unmapped rows left out), read into our frame; nullopt when nothing maps yet.
+    std::optional<Match> preview;
+    bool ready() const { return profileErrors.empty() && errors.empty() && matches > 0; }
+};
+DraftCheck checkDraft(std::string_view bytes, const MappingProfile& profile, const MatchDetails& details,
+                      const std::string& fileName);
 
 /// The profile as the JSON document parseProfile reads (our format version 2 words).
 nlohmann::json toJson(const MappingProfile& profile);

@@ -43,6 +43,12 @@ ApplicationWindow {
         showPage("zone")
     }
 
+    // Opens a table in the mapping assistant of Load matches (a file path).
+    function mapTable(path: string) {
+        showPage("import")
+        importPage.mapTable(path)
+    }
+
     // Opens a focus on a flagged zone (band 0, lane 0: the whole pitch) after a match.
     function openFocus(metricId: string, band: int, lane: int, matchId: string) {
         focusesPage.openFromZone(metricId, band, lane, matchId)

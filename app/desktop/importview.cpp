@@ -28,7 +28,8 @@ namespace {
 
 /// Loads one file through the worker's own connection and words the outcome. Runs on the
 /// worker thread; touches nothing shared.
-ImportResult ingestOne(ClubRepository& repo, const QString& path, const IngestOptions& options) {
+ImportResult ingestOne(ClubRepository& repo, const QString& path, const MatchDetails& details,
+                       const IngestOptions& options) {
     ImportResult r;
     r.path = path;
     r.fileName = QFileInfo(path).fileName();
@@ -47,14 +48,14 @@ ImportResult ingestOne(ClubRepository& repo, const QString& path, const IngestOp
             if (!saved) {
                 r.outcome = ImportResult::Failed;
                 r.detail = QStringLiteral("Nothing of this file was stored.");
-                r.problems << QStringLiteral("%1: no saved layout reads this table. Save its "
-                                             "mapping profile once with “Save a table layout…” on "
-                                             "this page (docs/import.md), then drop it again.")
+                r.problems << QStringLiteral("%1: no saved layout reads this table. Drop it alone "
+                                             "to map its columns in the mapping assistant, or save "
+                                             "a layout file with “Save a table layout…”.")
                                   .arg(r.fileName);
                 return r;
             }
             layout = QString::fromStdString(saved->name);
-            reports = ingestTableFile(repo, file, *parseProfile(saved->text, saved->name).profile, {}, options);
+            reports = ingestTableFile(repo, file, *parseProfile(saved->text, saved->name).profile, details, options);
         } else {
             reports.push_back(ingestFile(repo, file, options));
         }
@@ -155,10 +156,68 @@ void ImportView::refresh() {
     const ClubSession* s = session();
     const QString file = s && s->isOpen() ? s->clubFile() : QString();
     const bool can = !file.isEmpty() && file != QStringLiteral(":memory:");
+    readLayouts();
     if (can == m_canLoad && file == m_clubFile) return;
     m_canLoad = can;
     m_clubFile = file;
     emit canLoadChanged();
+}
+
+void ImportView::readLayouts() {
+    QVariantList layouts;
+    ClubSession* s = session();
+    if (ClubRepository* repo = s && s->isOpen() ? s->repository() : nullptr) {
+        for (const SavedProfile& saved : ProfileStore(*repo).list()) {
+            QStringList columns;
+            if (const ProfileResult p = parseProfile(saved.text, saved.name); p.profile)
+                for (const auto& [field, column] : p.profile->columns) columns << QString::fromStdString(column);
+            layouts << QVariantMap{{QStringLiteral("name"), QString::fromStdString(saved.name)},
+                                   {QStringLiteral("savedAt"), QString::fromStdString(saved.savedAt.substr(0, 10))},
+                                   {QStringLiteral("columnsText"), columns.join(QStringLiteral(", "))}};
+        }
+    }
+    if (layouts == m_layouts) return;
+    m_layouts = layouts;
+    emit layoutsChanged();
+}
+
+bool ImportView::removeLayout(const QString& name) {
+    ClubSession* s = session();
+    ClubRepository* repo = s && s->isOpen() ? s->repository() : nullptr;
+    if (!repo) return false;
+    bool removed = false;
+    try {
+        removed = ProfileStore(*repo).remove(name.toStdString());
+    } catch (const std::exception& e) {
+        setSummary(tr("The layout was not removed: %1").arg(QString::fromUtf8(e.what())));
+        return false;
+    }
+    if (removed) setSummary(tr("Removed the layout “%1”. Matches loaded with it stay as they are.").arg(name));
+    readLayouts();
+    return removed;
+}
+
+QString ImportView::duplicateLayout(const QString& name) {
+    ClubSession* s = session();
+    ClubRepository* repo = s && s->isOpen() ? s->repository() : nullptr;
+    if (!repo) return {};
+    try {
+        ProfileStore store(*repo);
+        const auto saved = store.get(name.toStdString());
+        if (!saved) return {};
+        QString copy = tr("%1 (copy)").arg(name);
+        for (int n = 2; store.get(copy.toStdString()); ++n) copy = tr("%1 (copy %2)").arg(name).arg(n);
+        // The copy's own name goes into its text too, so that it reads as itself.
+        auto doc = nlohmann::json::parse(saved->text);
+        doc["name"] = copy.toStdString();
+        if (!store.save(copy.toStdString(), doc.dump(2), {}, nowUtcIso()).empty()) return {};
+        setSummary(tr("Saved a copy of “%1” as “%2”.").arg(name, copy));
+        readLayouts();
+        return copy;
+    } catch (const std::exception& e) {
+        setSummary(tr("The layout was not copied: %1").arg(QString::fromUtf8(e.what())));
+        return {};
+    }
 }
 
 void ImportView::setSummary(const QString& text) {
@@ -200,7 +259,13 @@ bool ImportView::loadUrls(const QList<QUrl>& urls) {
     return loadPaths(paths);
 }
 
-bool ImportView::loadPaths(const QStringList& given) {
+bool ImportView::loadPaths(const QStringList& given) { return start(given, {}); }
+
+bool ImportView::loadWithDetails(const QStringList& paths, const QVariantMap& details) {
+    return start(paths, details);
+}
+
+bool ImportView::start(const QStringList& given, const QVariantMap& details_in) {
     if (m_running) {
         setSummary(tr("Still loading the previous files: wait for them, or cancel, then try again."));
         return false;
@@ -214,7 +279,30 @@ bool ImportView::loadPaths(const QStringList& given) {
         setSummary(tr("This club file is not a file on disk, so matches cannot be loaded into it."));
         return false;
     }
-    const QStringList paths = expandPaths(given);
+    QStringList paths = expandPaths(given);
+    // A table no saved layout reads goes to the mapping assistant instead (the first one; any
+    // other is refused with what to do).
+    if (details_in.isEmpty()) {
+        const auto saved = ProfileStore(*s->repository()).list();
+        for (const QString& path : paths) {
+            if (!looksLikeTable(QFileInfo(path).fileName().toStdString())) continue;
+            std::string bytes;
+            try {
+                bytes = readFileBytes(QFile::encodeName(path).toStdString());
+            } catch (const IoError&) {
+                continue;
+            }
+            if (profileFor(bytes, saved)) continue;
+            paths.removeOne(path);
+            emit layoutNeeded(path);
+            if (paths.isEmpty()) {
+                setSummary(tr("%1 is a table in a layout not saved yet: map its columns below, once.")
+                               .arg(QFileInfo(path).fileName()));
+                return false;
+            }
+            break;
+        }
+    }
     if (paths.isEmpty()) {
         setSummary(tr("No match files there: a match file is a .json file (see docs/match.schema.json), a table a .csv, .tsv or .jsonl file."));
         return false;
@@ -235,9 +323,12 @@ bool ImportView::loadPaths(const QStringList& given) {
 
     IngestOptions options;
     options.replace = m_replace;
+    MatchDetails details;
+    for (auto it = details_in.begin(); it != details_in.end(); ++it)
+        if (!it.value().toString().isEmpty()) details.values[it.key().toStdString()] = it.value().toString().toStdString();
     // The worker opens its own connection: an SQLite connection must stay on one thread.
     const std::string file = QFile::encodeName(s->clubFile()).toStdString();
-    m_thread = QThread::create([this, cancel = m_cancel, file, paths, options] {
+    m_thread = QThread::create([this, cancel = m_cancel, file, paths, details, options] {
         QString fault;
         std::unique_ptr<ClubRepository> repo;
         try {
@@ -248,7 +339,7 @@ bool ImportView::loadPaths(const QStringList& given) {
         for (int i = 0; repo && i < paths.size() && !cancel->load(); ++i) {
             const QString name = QFileInfo(paths[i]).fileName();
             QMetaObject::invokeMethod(this, [this, i, name] { fileStarted(i, name); }, Qt::QueuedConnection);
-            const ImportResult result = ingestOne(*repo, paths[i], options);
+            const ImportResult result = ingestOne(*repo, paths[i], details, options);
             QMetaObject::invokeMethod(this, [this, result] { fileDone(result); }, Qt::QueuedConnection);
         }
         QMetaObject::invokeMethod(this, [this, fault] { workerDone(fault); }, Qt::QueuedConnection);
@@ -291,6 +382,7 @@ bool ImportView::saveLayout(const QUrl& profileFile) {
     }
     setSummary(tr("Saved the table layout “%1”: tables with its columns now load when dropped here.")
                    .arg(QString::fromStdString(name)));
+    readLayouts();
     return true;
 }
 

@@ -10,6 +10,8 @@
 #include <QStringList>
 #include <QThread>
 #include <QUrl>
+#include <QVariantList>
+#include <QVariantMap>
 #include <QtQml/qqmlregistration.h>
 
 #include <atomic>
@@ -47,6 +49,8 @@ class ImportView : public pitchloop::desktop::SessionClient {
     Q_PROPERTY(QString latestMatchId READ latestMatchId NOTIFY summaryChanged)
     Q_PROPERTY(QString latestMatchText READ latestMatchText NOTIFY summaryChanged)
     Q_PROPERTY(pitchloop::desktop::ImportResultModel* results READ results CONSTANT)
+    /// The table layouts saved in the club file: [{name, savedAt, columnsText}], by name.
+    Q_PROPERTY(QVariantList layouts READ layouts NOTIFY layoutsChanged)
 public:
     explicit ImportView(QObject* parent = nullptr);
     ~ImportView() override;
@@ -67,12 +71,23 @@ public:
     QString latestMatchId() const { return m_latestMatchId; }
     QString latestMatchText() const { return m_latestMatchText; }
     ImportResultModel* results() const { return m_results; }
+    QVariantList layouts() const { return m_layouts; }
 
     /// Loads files and folders (every .json file inside, sorted, subfolders too) given as
     /// local-file urls. Returns false, with the reason in summaryText, when nothing starts.
     Q_INVOKABLE bool loadUrls(const QList<QUrl>& urls);
-    /// The same with paths.
+    /// The same with paths. A table no saved layout reads is left out of the load and
+    /// handed to the mapping assistant (layoutNeeded), the first such table only.
     Q_INVOKABLE bool loadPaths(const QStringList& paths);
+    /// Loads tables with match details they do not give themselves (the assistant's form:
+    /// id, date, opponent, venue).
+    Q_INVOKABLE bool loadWithDetails(const QStringList& paths, const QVariantMap& details);
+    /// Reads the saved layouts again (after the assistant saved one).
+    Q_INVOKABLE void readLayouts();
+    /// Removes a saved layout; files already loaded with it stay as they are.
+    Q_INVOKABLE bool removeLayout(const QString& name);
+    /// Saves a copy of a layout as "NAME (copy)" (or "(copy 2)"…); returns the new name.
+    Q_INVOKABLE QString duplicateLayout(const QString& name);
     /// Stops after the file being loaded now; the rest are listed as not loaded.
     Q_INVOKABLE void cancel();
     /// Saves a mapping profile file (docs/import.md) in the club file under its own name (or
@@ -90,6 +105,9 @@ signals:
     void summaryChanged();
     /// A load ended (all files done, or cancelled) and the session has been reloaded.
     void finished();
+    void layoutsChanged();
+    /// A table in a layout no saved one reads: open the mapping assistant on it.
+    void layoutNeeded(const QString& path);
 
 protected:
     void refresh() override;
@@ -99,6 +117,7 @@ private:
     void fileDone(ImportResult result);
     void workerDone(const QString& fault);
     void setSummary(const QString& text);
+    bool start(const QStringList& paths, const QVariantMap& details);
 
     ImportResultModel* m_results;
     QThread* m_thread = nullptr;
@@ -113,6 +132,7 @@ private:
     QString m_summary;
     QString m_latestMatchId;
     QString m_latestMatchText;
+    QVariantList m_layouts;
 };
 
 } // namespace pitchloop::desktop

@@ -12,6 +12,7 @@
 
 #include <QCommandLineParser>
 #include <QDir>
+#include <QFileInfo>
 #include <QGuiApplication>
 #include <QQmlApplicationEngine>
 #include <QQuickStyle>
@@ -74,7 +75,12 @@ int main(int argc, char* argv[]) {
     const QCommandLineOption screenshotsOption(
         QStringLiteral("screenshots"), QStringLiteral("Render every page at 1280 × 800 into DIR"),
         QStringLiteral("DIR"));
-    cli.addOptions({dbOption, selfTestOption, screenshotsOption});
+    const QCommandLineOption mapTableOption(
+        QStringLiteral("map-table"),
+        QStringLiteral("Open FILE (an event table) in the mapping assistant of Load matches; with "
+                       "--self-test or --screenshots, check or render it too (NN-layout-assistant.png)"),
+        QStringLiteral("FILE"));
+    cli.addOptions({dbOption, selfTestOption, screenshotsOption, mapTableOption});
     cli.process(app);
     const bool selfTest = cli.isSet(selfTestOption);
     const QString screenshotDir = cli.value(screenshotsOption);
@@ -108,11 +114,23 @@ int main(int argc, char* argv[]) {
         std::fprintf(stderr, "pitchloop-app: the main QML object is not a window\n");
         return 1;
     }
-    if (!headless) return QGuiApplication::exec();
+    const QString tableToMap = cli.value(mapTableOption);
+    auto mapTable = [&] {
+        if (tableToMap.isEmpty()) return;
+        QMetaObject::invokeMethod(window, "mapTable", Q_ARG(QString, QFileInfo(tableToMap).absoluteFilePath()));
+    };
+    if (!headless) {
+        mapTable();
+        return QGuiApplication::exec();
+    }
 
     window->resize(1280, 800);
     window->show();
     QStringList problems = visitPages(window, screenshotDir);
+    if (!tableToMap.isEmpty()) {
+        mapTable();
+        problems << grabCurrent(window, screenshotDir, QStringLiteral("layout-assistant"));
+    }
     if (!session.errorString().isEmpty()) problems << session.errorString();
     if (selfTest && WarningCounter::count() > 0)
         problems << QStringLiteral("%1 QML or Qt warning(s), listed above").arg(WarningCounter::count());

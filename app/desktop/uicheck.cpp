@@ -39,7 +39,20 @@ bool waitForFrames(QQuickWindow* window, int frames) {
     return true;
 }
 
+QStringList save(QQuickWindow* window, const QString& dir, int number, const QString& name) {
+    const QImage image = window->grabWindow();
+    const QString file = QDir(dir).filePath(QStringLiteral("%1-%2.png").arg(number, 2, 10, QLatin1Char('0')).arg(name));
+    if (image.isNull() || !image.save(file)) return {QStringLiteral("cannot write %1").arg(file)};
+    return {};
+}
+
 } // namespace
+
+QStringList grabCurrent(QQuickWindow* window, const QString& screenshotDir, const QString& name) {
+    if (!waitForFrames(window, 3)) return {QStringLiteral("%1 was not drawn").arg(name)};
+    if (screenshotDir.isEmpty()) return {};
+    return save(window, screenshotDir, window->property("pageCount").toInt() + 1, name);
+}
 
 void WarningCounter::install() { previousHandler = qInstallMessageHandler(countingHandler); }
 
@@ -73,11 +86,7 @@ QStringList visitPages(QQuickWindow* window, const QString& screenshotDir) {
             continue;
         }
         if (screenshotDir.isEmpty()) continue;
-        const QImage image = window->grabWindow();
-        const QString file = QDir(screenshotDir).filePath(
-            QStringLiteral("%1-%2.png").arg(page + 1, 2, 10, QLatin1Char('0')).arg(name));
-        if (image.isNull() || !image.save(file))
-            problems << QStringLiteral("cannot write %1").arg(file);
+        problems << save(window, screenshotDir, page + 1, name);
     }
     // A delegate that failed to compile shows only as "Component is not ready"; name it.
     for (const QQmlComponent* c : window->findChildren<QQmlComponent*>())

@@ -24,4 +24,8 @@ public:
 /// written), empty when none.
 QStringList visitPages(QQuickWindow* window, const QString& screenshotDir);
 
+/// Waits until what the window shows now is drawn and, when `screenshotDir` is not empty, saves
+/// it as NN-name.png after the pages' own (NN = pageCount + 1). Returns the problems found.
+QStringList grabCurrent(QQuickWindow* window, const QString& screenshotDir, const QString& name);
+
 } // namespace pitchloop::desktop

@@ -23,6 +23,11 @@ Page {
         loader.loadUrls(urls)
     }
 
+    /// Opens a table in the mapping assistant, whether or not a saved layout reads it.
+    function mapTable(path: string) {
+        assistant.open(path)
+    }
+
     function chooseFiles() {
         root.showRequested()
         if (loader.canLoad && !loader.running)
@@ -34,6 +39,38 @@ Page {
     ImportView {
         id: loader
         session: root.session
+        onLayoutNeeded: path => assistant.open(path)
+    }
+
+    LayoutAssistant {
+        id: assistant
+        session: root.session
+        onSaved: (path, details) => {
+            loader.readLayouts()
+            loader.loadWithDetails([path], details)
+            assistant.close()
+        }
+    }
+
+    property string layoutToEdit
+
+    FileDialog {
+        id: sampleDialog
+        title: qsTr("Choose a table in the layout “%1”").arg(root.layoutToEdit)
+        fileMode: FileDialog.OpenFile
+        nameFilters: [qsTr("Tables (*.csv *.tsv *.txt *.jsonl *.ndjson)"), qsTr("All files (*)")]
+        onAccepted: assistant.openWithLayout(selectedFile, root.layoutToEdit)
+    }
+
+    Dialog {
+        id: removeDialog
+        property string name
+        anchors.centerIn: parent
+        modal: true
+        title: qsTr("Remove the layout “%1”?").arg(name)
+        standardButtons: Dialog.Ok | Dialog.Cancel
+        Label { text: qsTr("Matches already loaded with it stay as they are.") }
+        onAccepted: loader.removeLayout(name)
     }
 
     FileDialog {
@@ -125,8 +162,17 @@ Page {
             }
         }
 
+        LayoutAssistantPanel {
+            Layout.fillWidth: true
+            Layout.fillHeight: true
+            visible: assistant.active
+            assistant: assistant
+            onCloseRequested: assistant.close()
+        }
+
         // Where to drop, or how far the load has come.
         Rectangle {
+            visible: !assistant.active
             Layout.fillWidth: true
             Layout.preferredHeight: 96
             radius: Theme.radius
@@ -151,7 +197,7 @@ Page {
                     Layout.fillWidth: true
                     horizontalAlignment: Text.AlignHCenter
                     wrapMode: Text.WordWrap
-                    text: qsTr("Match files are .json files in the Pitchloop match format; tables (.csv, .tsv, .jsonl) load with the saved layout whose columns they have. Each match is stored whole or not at all; a file loaded before is left as it is.")
+                    text: qsTr("Match files are .json files in the Pitchloop match format; tables (.csv, .tsv, .jsonl) load with the saved layout whose columns they have, and a table in a new layout opens the mapping assistant. Each match is stored whole or not at all; a file loaded before is left as it is.")
                     color: Theme.textMuted
                     font.pixelSize: Theme.fontSmall
                 }
@@ -234,7 +280,17 @@ Page {
             }
         }
 
+        SavedLayoutsCard {
+            Layout.fillWidth: true
+            visible: !assistant.active && loader.layouts.length > 0
+            layouts: loader.layouts
+            onEditRequested: name => { root.layoutToEdit = name; sampleDialog.open() }
+            onDuplicateRequested: name => loader.duplicateLayout(name)
+            onRemoveRequested: name => { removeDialog.name = name; removeDialog.open() }
+        }
+
         Card {
+            visible: !assistant.active
             Layout.fillWidth: true
             Layout.fillHeight: true
             title: loader.results.count > 0 ? qsTr("Files of the last load (%1)").arg(loader.results.count)

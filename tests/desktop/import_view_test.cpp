@@ -334,16 +334,27 @@ void ImportViewTest::tableLoadsWithTheSavedLayout() {
         QVERIFY(f.open(QIODevice::WriteOnly));
         f.write("a,b\n1,2\n");
     }
+    // The table in no saved layout goes to the mapping assistant instead of the load.
+    QSignalSpy needed(m_view.get(), &ImportView::layoutNeeded);
     loadAndWait({table, stranger});
+    QCOMPARE(needed.count(), 1);
+    QCOMPARE(needed.front().front().toString(), stranger);
     const ImportResultModel& results = *m_view->results();
-    QCOMPARE(results.count(), 2);
+    QCOMPARE(results.count(), 1);
     const ImportResult& loaded = results.rows()[0];
     QCOMPARE(loaded.outcome, ImportResult::Stored);
     QCOMPARE(loaded.matchId, QStringLiteral("KB-T-01"));
     QVERIFY2(loaded.detail.contains(QStringLiteral("read with the saved layout “analyst sheet (semicolons")), qPrintable(loaded.detail));
-    const ImportResult& refused = results.rows()[1];
-    QCOMPARE(refused.outcome, ImportResult::Failed);
-    QVERIFY(refused.problems.join(QLatin1Char(' ')).contains(QStringLiteral("no saved layout reads this table")));
-    QVERIFY(refused.problems.join(QLatin1Char(' ')).contains(QStringLiteral("Save a table layout")));
+    // Alone, it starts nothing and says where to map it.
+    QVERIFY(!m_view->loadPaths({stranger}));
+    QCOMPARE(needed.count(), 2);
+    QVERIFY2(m_view->summaryText().contains(QStringLiteral("layout not saved yet")), qPrintable(m_view->summaryText()));
+    // The saved layouts are listed; a copy reads as itself; removing leaves loaded matches.
+    QCOMPARE(m_view->layouts().size(), 1);
+    const QString copy = m_view->duplicateLayout(m_view->layouts().front().toMap().value(QStringLiteral("name")).toString());
+    QVERIFY(copy.endsWith(QStringLiteral("(copy)")));
+    QCOMPARE(m_view->layouts().size(), 2);
+    QVERIFY(m_view->removeLayout(copy));
+    QCOMPARE(m_view->layouts().size(), 1);
     QVERIFY(has(storedIds(m_file), "KB-T-01"));
 }
