@@ -146,6 +146,14 @@ TEST_CASE("zone labels load with the shipped zone-tags layout; other grids say w
     const auto preview = cli({"--db", w.db, "settings", "grid", "equal:8x5", "--preview"});
     CHECK(contains(preview.out, "Match KB-Z-02: positions known only to grid equal:6x5; zone values "
                                 "not computed on grid equal:8x5."));
+    const auto tables = cli({"--db", w.db, "debrief", "KB-Z-02", "--tables", "--grid", "equal:8x5"});
+    CHECK(contains(tables.out, "Zone-only match: positions known only to grid equal:6x5; zone values "
+                               "not computed on grid equal:8x5.\n"));
+    CHECK(cli({"--db", w.db, "settings", "grid", "equal:8x5", "--by", "R. Tamsin"}).code == 0);
+    const auto debrief = cli({"--db", w.db, "debrief", "KB-Z-02"});
+    CHECK(contains(debrief.out, "Zone-only match: positions known only to grid equal:6x5; zone "
+                                "values not computed on grid equal:8x5; it adds nothing"));
+    CHECK(cli({"--db", w.db, "settings", "grid", "equal:6x5", "--by", "R. Tamsin"}).code == 0);
     // A label the layout does not read: the file, line and column, and nothing stored.
     const std::string bad = w.write("bad.csv", header + rows + "2,40.0,ours,7,pass,ok,Z9,,\n");
     const std::string before = dataSnapshot(w.db);

@@ -154,6 +154,33 @@ TEST_CASE("zone labels map to their zone's centre, in each side's own direction"
     CHECK(ZoneGrid{}.zoneOf(interception.at, Pitch{}) == Zone{5, 1});
 }
 
+TEST_CASE("zone labels in the us and ground frames", "[import][zones]") {
+    auto ours = [](const std::string& coordinates, const std::string& rows) {
+        std::string text = zoneProfileText();
+        const std::string acting = R"("coordinates": {"frame": "acting"})";
+        text.replace(text.find(acting), acting.size(), coordinates);
+        const ProfileResult p = parseProfile(text, "zones.json");
+        INFO(describeAll(p.errors));
+        REQUIRE(p.profile);
+        const MappedTable m = mapZones(rows, *p.profile);
+        INFO(describeAll(m.errors));
+        REQUIRE(m.errors.empty());
+        const ReadResult read = parseMatchDocument(m.match, "tags.csv");
+        INFO(describeAll(read.errors));
+        REQUIRE(read.ok());
+        std::vector<Zone> zones;
+        for (const Event& e : read.match->events) zones.push_back(ZoneGrid{}.zoneOf(e.at, Pitch{}));
+        return zones;
+    };
+    // "us": every label in our direction, theirs included.
+    CHECK(ours(R"("coordinates": {"frame": "us"})", "1;1;KB;pass;ok;B1-L2;\n1;2;SA;won;ok;B1-L2;\n") ==
+          std::vector<Zone>{{1, 2}, {1, 2}});
+    // "ground" with us attacking −x in period 2: band 1 is the ground's x = 0 end, which is our
+    // goal line in period 1 and theirs in period 2 (our band 6, lane 5 + 1 − 2 = 4).
+    CHECK(ours(R"("coordinates": {"frame": "ground", "us_attack": {"1": "+x", "2": "-x"}})",
+               "1;1;KB;pass;ok;B1-L2;\n2;2;KB;pass;ok;B1-L2;\n") == std::vector<Zone>{{1, 2}, {6, 4}});
+}
+
 TEST_CASE("zone-only tallies equal the native match's on its grid and on a coarser union",
           "[import][zones]") {
     TwoClubs clubs;
