@@ -84,7 +84,8 @@ GridChangePreview previewGridChange(ClubRepository& repo, const ZoneGrid& to) {
         p.lines.push_back("The club already uses " + describeGrid(to) + "; nothing changes.");
         return p;
     }
-    p.matches = static_cast<int>(repo.matches().size());
+    const std::vector<MatchSummary> matches = repo.matches();
+    p.matches = static_cast<int>(matches.size());
     p.targets = carryTargets(repo.allTargets(p.from), repo.allTargets(to), p.from, to);
     for (const Focus& f : FocusStore(repo).list())
         if (f.grid != to) ++p.focusesOnOtherGrids;
@@ -96,6 +97,20 @@ GridChangePreview previewGridChange(ClubRepository& repo, const ZoneGrid& to) {
     };
     p.lines.push_back("Every match's tallies are counted again on " + describeGrid(to) + " (" +
                       count(p.matches, "match", "matches") + ").");
+    for (const MatchSummary& m : matches) {
+        if (m.zoneOnlyGrid.empty()) continue;
+        const std::string note = m.zoneOnlyNote(to);
+        if (note.empty()) {
+            if (!m.zonesKnownOn(p.from))
+                p.lines.push_back("Match " + m.id + " (zone-only data on " + m.zoneOnlyGrid +
+                                  ") gets its zone values back on " + to.name() + ".");
+            continue;
+        }
+        p.zoneOnlyLeftOut.push_back(m.id);
+        p.lines.push_back("Match " + m.id + ": " + note +
+                          ". Its zone tallies are left out, and so is it from whole-pitch values "
+                          "(they are sums over zones).");
+    }
     const int carried = p.targets.zonesCarried;
     if (carried > 0)
         p.lines.push_back(count(carried, "zone target (season, metric and zone) takes",

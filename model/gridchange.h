@@ -38,6 +38,9 @@ struct GridChangePreview {
     TargetCarry targets;
     int focusesOnOtherGrids = 0; ///< focuses that will be reviewed on the grid they were opened on
     int drillsWithZones = 0;     ///< drill notes whose zones will be read on `to`
+    /// Zone-only matches whose zones `to` cannot know (zonesKnownOn): their zone tallies are
+    /// left out on `to`, one line each in `lines`.
+    std::vector<std::string> zoneOnlyLeftOut;
     std::vector<std::string> lines; ///< the above in plain words, one point a line
 };
 GridChangePreview previewGridChange(ClubRepository& repo, const ZoneGrid& to);

@@ -15,8 +15,8 @@ using nlohmann::json;
 
 namespace {
 
-const std::set<std::string> kFields{"period", "time", "side", "player", "type", "result",
-                                    "x",      "y",    "to_x", "to_y",   "tags"};
+const std::set<std::string> kFields{"period", "time", "side", "player", "type",   "result", "x",
+                                    "y",      "to_x", "to_y", "tags",   "zone", "to_zone"};
 const std::set<std::string> kDetails{"id", "date", "competition", "venue", "us", "opponent",
                                      "period_lengths"};
 
@@ -101,6 +101,68 @@ std::optional<char> oneChar(const std::string& s) {
     return std::nullopt;
 }
 
+/// The profile's zones key (zone-only data): the grid, and listed labels or a pattern.
+void readZones(ProfileReader& r, const json& root, MappingProfile& p) {
+    const bool zoneColumn = p.columns.count("zone") > 0;
+    const json* z = r.object(root, "", "zones");
+    if (!z) {
+        if (zoneColumn && !root.contains("zones"))
+            r.error("", "zones", "missing: a zone column needs the grid its labels name and the "
+                                 "labels (\"zones\": {\"grid\": \"equal:6x5\", \"pattern\": ...})");
+        return;
+    }
+    if (!zoneColumn) r.error("columns", "zone", "missing: which column holds the zone labels?");
+    r.onlyKeys(*z, "zones", {"grid", "labels", "pattern"});
+    if (auto grid = r.text(*z, "zones", "grid")) {
+        if (auto g = ZoneGrid::parse(*grid)) p.zoneGrid = *g;
+        else r.error("zones", "grid", "'" + *grid + "' is not a zone grid: expected equal:BANDSxLANES "
+                                      "(e.g. equal:6x5) or markings:BANDS, 1 to 20 of each");
+    } else if (!z->contains("grid")) {
+        r.error("zones", "grid", "missing: the grid the labels name (e.g. equal:6x5)");
+    }
+    if (const json* labels = r.object(*z, "zones", "labels")) {
+        for (const auto& [label, zone] : labels->items()) {
+            const bool pair = zone.is_array() && zone.size() == 2 && zone[0].is_number_integer() &&
+                              zone[1].is_number_integer();
+            if (!pair) {
+                r.error("zones.labels", label, "expected [band, lane], two whole numbers from 1");
+                continue;
+            }
+            const Zone at{zone[0].get<int>(), zone[1].get<int>()};
+            if (p.zoneGrid && (at.band < 1 || at.band > p.zoneGrid->bands() || at.lane < 1 ||
+                               at.lane > p.zoneGrid->lanes())) {
+                r.error("zones.labels", label,
+                        "[" + std::to_string(at.band) + ", " + std::to_string(at.lane) +
+                            "] is outside the grid " + p.zoneGrid->name() + " (bands 1 to " +
+                            std::to_string(p.zoneGrid->bands()) + ", lanes 1 to " +
+                            std::to_string(p.zoneGrid->lanes()) + ")");
+                continue;
+            }
+            p.zoneLabels[label] = at;
+        }
+    }
+    if (auto pattern = r.text(*z, "zones", "pattern")) {
+        // Exactly {band} and {lane}, apart: "B{band}-L{lane}", "{lane}/{band}".
+        const auto band = pattern->find("{band}"), lane = pattern->find("{lane}");
+        std::size_t braces = 0;
+        for (char ch : *pattern) braces += ch == '{';
+        const bool once = band != std::string::npos && lane != std::string::npos &&
+                          pattern->find("{band}", band + 1) == std::string::npos &&
+                          pattern->find("{lane}", lane + 1) == std::string::npos && braces == 2;
+        if (!once)
+            r.error("zones", "pattern", "'" + *pattern + "': expected {band} and {lane} once each, "
+                                        "with no other braces (e.g. \"B{band}-L{lane}\")");
+        else if (band + 6 == lane || lane + 6 == band)
+            r.error("zones", "pattern", "'" + *pattern + "': put a character between {band} and "
+                                        "{lane}, or \"12\" could be band 1 lane 2 or band 12");
+        else
+            p.zonePattern = *pattern;
+    }
+    if (!z->contains("labels") && !z->contains("pattern"))
+        r.error("zones", "labels", "missing: list the labels ({\"label\": [band, lane]}) or give "
+                                   "a pattern, or both");
+}
+
 } // namespace
 
 ProfileResult parseProfile(std::string_view text, const std::string& fileName) {
@@ -120,7 +182,7 @@ ProfileResult parseProfile(std::string_view text, const std::string& fileName) {
     MappingProfile p;
     r.onlyKeys(root, "", {"format", "version", "name", "table", "columns", "time", "periods",
                           "side", "coordinates", "types", "results", "skip", "tag_separator",
-                          "file_name", "match", "match_columns", "venues"});
+                          "file_name", "match", "match_columns", "venues", "zones"});
     if (r.text(root, "", "format") != std::string(kProfileFormat))
         r.error("", "format", "expected \"" + std::string(kProfileFormat) + "\"");
     if (const auto v = r.number(root, "", "version"); !v || *v != kProfileFormatVersion)
@@ -162,18 +224,33 @@ ProfileResult parseProfile(std::string_view text, const std::string& fileName) {
         for (const auto& [field, col] : c->items()) {
             if (!kFields.count(field)) {
                 r.error("columns", field, "not one of our fields (period, time, side, player, type, "
-                                          "result, x, y, to_x, to_y, tags)");
+                                          "result, x, y, to_x, to_y, tags, zone, to_zone)");
                 continue;
             }
             if (col.is_string()) p.columns[field] = col.get<std::string>();
             else if (col.is_number_integer() && col.get<int>() >= 1) p.columns[field] = std::to_string(col.get<int>());
             else r.error("columns", field, "expected a column name, or its number from 1");
         }
-        for (const char* needed : {"time", "side", "type", "x", "y"})
+        for (const char* needed : {"time", "side", "type"})
             if (!p.columns.count(needed)) r.error("columns", needed, "missing: which column holds it?");
+        // Positions: x and y (with to_x, to_y), or a zone label (with to_zone), not both.
+        if (p.columns.count("zone")) {
+            for (const char* coordinate : {"x", "y", "to_x", "to_y"})
+                if (p.columns.count(coordinate))
+                    r.error("columns", coordinate, "the table gives a zone column: give either the "
+                                                   "zone or x and y, not both");
+        } else {
+            for (const char* needed : {"x", "y"})
+                if (!p.columns.count(needed))
+                    r.error("columns", needed, "missing: which column holds it? (or give a zone column "
+                                               "and the zones key for zone labels)");
+            if (p.columns.count("to_zone"))
+                r.error("columns", "to_zone", "an end zone needs the zone column too");
+        }
     } else {
         r.error("", "columns", "missing: which column holds each of our fields");
     }
+    readZones(r, root, p);
 
     if (const json* t = r.object(root, "", "time")) {
         r.onlyKeys(*t, "time", {"form", "fps", "from", "period_starts"});
@@ -485,13 +562,33 @@ MappedTable mapTable(const Table& table, const MappingProfile& p, const MatchDet
     const Slot cPeriod = slot("period"), cTime = slot("time"), cSide = slot("side"),
                cPlayer = slot("player"), cType = slot("type"), cResult = slot("result"),
                cX = slot("x"), cY = slot("y"), cToX = slot("to_x"), cToY = slot("to_y"),
-               cTags = slot("tags");
+               cTags = slot("tags"), cZone = slot("zone"), cToZone = slot("to_zone");
     auto cell = [&](const Table::Row& row, const Slot& at) -> std::optional<std::string> {
         if (!at) return std::nullopt;
         return trim(row.cells[*at]);
     };
     std::map<std::pair<std::string_view, const std::string*>, int> counts;
     const auto columnOf = [&](const char* field) { return p.columns.at(field); };
+    const Pitch pitch{length, width};
+    // A zone label: a listed word, else the pattern's band and lane numbers.
+    auto zoneOfLabel = [&](const std::string& label) -> std::optional<Zone> {
+        if (const auto listed = p.zoneLabels.find(label); listed != p.zoneLabels.end())
+            return listed->second;
+        if (p.zonePattern.empty()) return std::nullopt;
+        const auto parts = matchPattern(p.zonePattern, label);
+        if (!parts) return std::nullopt;
+        auto whole = [&](const char* key) -> std::optional<int> {
+            const auto it = parts->find(key);
+            if (it == parts->end()) return std::nullopt;
+            int v = 0;
+            const auto [end, ec] = std::from_chars(it->second.data(), it->second.data() + it->second.size(), v);
+            if (ec != std::errc() || end != it->second.data() + it->second.size()) return std::nullopt;
+            return v;
+        };
+        const auto band = whole("band"), lane = whole("lane");
+        if (!band || !lane) return std::nullopt;
+        return Zone{*band, *lane};
+    };
 
     struct Pending {
         int period;
@@ -618,9 +715,33 @@ MappedTable mapTable(const Table& table, const MappingProfile& p, const MatchDet
             if (bad) return std::pair{-1e9, -1e9};
             return std::pair{fxr * length, fyr * width};
         };
-        const auto at = coordinate("x", "y", cX, cY);
+        // Zone labels: the zone's centre in the same picture (the grid cut on the match's
+        // pitch, band 1 at the left goal line, lane 1 at the bottom touchline).
+        auto zoneCentreOf = [&](const char* field,
+                                const Slot& sz) -> std::optional<std::pair<double, double>> {
+            const auto label = cell(row, sz);
+            if (!label || label->empty()) return std::nullopt;
+            const std::optional<Zone> zone = zoneOfLabel(*label);
+            if (!zone) {
+                unknownWord(columnOf(field), *label, row.line);
+                return std::pair{-1e9, -1e9};
+            }
+            if (zone->band < 1 || zone->band > p.zoneGrid->bands() || zone->lane < 1 ||
+                zone->lane > p.zoneGrid->lanes()) {
+                error(place, columnOf(field),
+                      "'" + *label + "' names band " + std::to_string(zone->band) + ", lane " +
+                          std::to_string(zone->lane) + ": outside the profile's grid " +
+                          p.zoneGrid->name() + " (" + describeGrid(*p.zoneGrid) + ")");
+                return std::pair{-1e9, -1e9};
+            }
+            const Point centre = zoneCentre(*zone, *p.zoneGrid, pitch);
+            return std::pair{centre.x, centre.y};
+        };
+        const bool byZone = p.zoneGrid.has_value();
+        const auto at = byZone ? zoneCentreOf("zone", cZone) : coordinate("x", "y", cX, cY);
         if (!at) {
-            error(place, columnOf("x"), "no position (x and y are empty)");
+            if (byZone) error(place, columnOf("zone"), "no zone (the zone cell is empty)");
+            else error(place, columnOf("x"), "no position (x and y are empty)");
             continue;
         }
         if (at->first < -1e8) continue;
@@ -632,7 +753,8 @@ MappedTable mapTable(const Table& table, const MappingProfile& p, const MatchDet
         if (!result.empty()) e["result"] = result;
         e["x"] = std::round(at->first * 100) / 100;
         e["y"] = std::round(at->second * 100) / 100;
-        if (const auto to = coordinate("to_x", "to_y", cToX, cToY)) {
+        if (const auto to = byZone ? zoneCentreOf("to_zone", cToZone)
+                                   : coordinate("to_x", "to_y", cToX, cToY)) {
             if (to->first < -1e8) continue;
             e["to_x"] = std::round(to->first * 100) / 100;
             e["to_y"] = std::round(to->second * 100) / 100;
@@ -664,6 +786,9 @@ MappedTable mapTable(const Table& table, const MappingProfile& p, const MatchDet
                   (u.count == 1 ? "" : "s") + "; lines " + lines +
                   "): add it to the profile's " +
                   (u.column == p.columns.at("type") ? "types (or skip)"
+                   : (p.columns.count("zone") && u.column == p.columns.at("zone")) ||
+                           (p.columns.count("to_zone") && u.column == p.columns.at("to_zone"))
+                       ? "zones.labels (or write it the way zones.pattern reads)"
                    : p.columns.count("result") && u.column == p.columns.at("result") ? "results"
                    : p.columns.count("period") && u.column == p.columns.at("period") ? "periods"
                                                                                       : "side values"));
@@ -712,6 +837,7 @@ MappedTable mapTable(const Table& table, const MappingProfile& p, const MatchDet
     }
     m["periods"] = periods;
     m["frame"] = p.frame;
+    if (p.zoneGrid) m["zone_only"] = {{"grid", p.zoneGrid->name()}};
     if (p.frame == "ground") m["us_attack"] = p.usAttack;
     json list = json::array();
     for (auto& pe : events) {
@@ -836,8 +962,12 @@ Problems inTableTerms(const Problems& problems, const MappedTable& mapped, const
                 {"t", "time"}, {"x", "x"}, {"y", "y"}, {"to_x", "to_x"}, {"to_y", "to_y"},
                 {"side", "side"}, {"type", "type"}, {"result", "result"}, {"period", "period"},
                 {"player", "player"}, {"tags", "tags"}};
-            if (const auto f = ours.find(q.field); f != ours.end() && p.columns.count(f->second))
-                q.field = p.columns.at(f->second);
+            if (const auto f = ours.find(q.field); f != ours.end()) {
+                std::string field = f->second;
+                if (p.zoneGrid && (field == "x" || field == "y")) field = "zone";
+                if (p.zoneGrid && (field == "to_x" || field == "to_y")) field = "to_zone";
+                if (p.columns.count(field)) q.field = p.columns.at(field);
+            }
         }
         out.push_back(std::move(q));
     }

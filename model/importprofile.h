@@ -6,6 +6,7 @@
 
 #include "problem.h"
 #include "table.h"
+#include "zones.h"
 
 #include <nlohmann/json.hpp>
 
@@ -50,6 +51,13 @@ struct MappingProfile {
     bool yUp = true;
     std::string frame = "acting";
     std::map<std::string, std::string> usAttack; ///< ground frame: period → "+x" / "-x"
+    /// Zone-only data (a `zone` column instead of x and y): the grid the labels name, in the
+    /// frame's own direction (band 1 at the acting or our goal line, or at x = 0 on the ground;
+    /// lane 1 at that side's right touchline), and how a label names its zone: listed words
+    /// first, then the pattern ("B{band}-L{lane}").
+    std::optional<ZoneGrid> zoneGrid;
+    std::map<std::string, Zone> zoneLabels;
+    std::string zonePattern;
     std::map<std::string, WordMeaning> types;
     std::map<std::string, std::string> results;
     std::vector<std::string> skip;

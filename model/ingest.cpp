@@ -35,6 +35,9 @@ IngestReport ingestRead(ClubRepository& repo, ReadResult read, std::string_view 
         report.status = IngestStatus::Refused;
         return report;
     }
+    if (const std::string note = zoneOnlyNote(match.info, repo.tallyGrid()); !note.empty())
+        report.warnings.push_back({fileName, "match", "zone_only",
+                                   note + ": the club's zone tallies leave this match out"});
     const std::string club = repo.clubName();
     if (!club.empty() && club != match.info.us)
         report.warnings.push_back({fileName, "match", "us",

@@ -1,5 +1,7 @@
 #include "matchreader.h"
 
+#include "zones.h"
+
 #include <nlohmann/json.hpp>
 
 #include <algorithm>
@@ -136,7 +138,7 @@ const std::set<std::string, std::less<>> kEventFields{"period", "t",    "side", 
                                                       "tags"};
 const std::set<std::string, std::less<>> kMatchFields{
     "id",    "date",   "competition", "venue", "us", "opponent", "score",
-    "pitch", "periods", "frame",      "us_attack"};
+    "pitch", "periods", "frame",      "us_attack", "zone_only"};
 
 std::string extraFields(const json& obj, const std::set<std::string, std::less<>>& known) {
     json extra = json::object();
@@ -280,6 +282,15 @@ std::optional<MatchHeader> readHeader(const json& root, Checker& c) {
                     c.error("match.us_attack", std::to_string(p.n),
                             "missing: the ground frame needs our attacking direction for "
                             "every period");
+        }
+    }
+    if (const json* zoneOnly = c.object(*m, place, "zone_only", false)) {
+        if (auto grid = c.string(*zoneOnly, "match.zone_only", "grid")) {
+            if (auto g = ZoneGrid::parse(*grid))
+                info.zoneOnlyGrid = g->name();
+            else
+                c.error("match.zone_only", "grid",
+                        "'" + *grid + "' is not a zone grid (equal:BANDSxLANES or markings:BANDS)");
         }
     }
     info.extra = extraFields(*m, kMatchFields);
@@ -445,6 +456,23 @@ void readEvent(const json& e, std::size_t index, const MatchHeader& h, const Rea
     const Frame frame = info.sourceFrame;
     ev.at = toOurFrame({*x, *y}, frame, ev.side, ev.period, info.pitch, h.usAttack);
     if (toX) ev.to = toOurFrame({*toX, *toY}, frame, ev.side, ev.period, info.pitch, h.usAttack);
+    if (!info.zoneOnlyGrid.empty()) {
+        // A zone-only match's positions are its grid's zone centres, nothing finer.
+        const ZoneGrid grid = *ZoneGrid::parse(info.zoneOnlyGrid);
+        auto offCentre = [&](Point p) {
+            const Point centre = zoneCentre(grid.zoneOf(p, info.pitch), grid, info.pitch);
+            return std::abs(p.x - centre.x) > kZoneCentreToleranceM ||
+                   std::abs(p.y - centre.y) > kZoneCentreToleranceM;
+        };
+        auto refuse = [&](const char* key, double fx, double fy) {
+            c.error(place, key,
+                    "(" + formatNumber(fx) + ", " + formatNumber(fy) +
+                        ") is not the centre of a zone of " + info.zoneOnlyGrid +
+                        " (the match is marked zone-only on that grid)");
+        };
+        if (offCentre(ev.at)) return refuse("x", *x, *y);
+        if (ev.to && offCentre(*ev.to)) return refuse("to_x", *toX, *toY);
+    }
     ev.extra = extraFields(e, kEventFields);
     out.push_back(std::move(ev));
 }

@@ -35,10 +35,23 @@ void addItem(MatchTally& tally, int zone, WindowOutcome outcome, const MetricSpe
 
 } // namespace
 
+bool zonesKnownOn(const MatchInfo& info, const ZoneGrid& grid) {
+    if (info.zoneOnlyGrid.empty()) return true;
+    const auto own = ZoneGrid::parse(info.zoneOnlyGrid);
+    return own && (*own == grid || coarsens(grid, *own, info.pitch));
+}
+
+std::string zoneOnlyNote(const MatchInfo& info, const ZoneGrid& grid) {
+    if (zonesKnownOn(info, grid)) return {};
+    return "positions known only to grid " + info.zoneOnlyGrid +
+           "; zone values not computed on grid " + grid.name();
+}
+
 MatchTally computeTally(const MatchFacts& facts, const MetricSpec& spec, const ZoneGrid& grid) {
     const Match& m = facts.match;
-    const ZoneLocator locate(grid, m.info.pitch);
     MatchTally tally(static_cast<std::size_t>(grid.zoneCount()));
+    if (!zonesKnownOn(m.info, grid)) return tally;
+    const ZoneLocator locate(grid, m.info.pitch);
     const SuccessSpec& success = spec.success;
 
     if (spec.items.losses) {

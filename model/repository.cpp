@@ -241,6 +241,11 @@ CREATE TABLE import_profile(
   saved_by TEXT NOT NULL DEFAULT '',
   saved_at TEXT NOT NULL DEFAULT '');
 )sql",
+    // 9: zone-only matches (docs/import.md, "Zone-only data"): the grid whose zone centres
+    // their positions are; '' for measured positions, as every match stored before was.
+    R"sql(
+ALTER TABLE match ADD COLUMN zone_grid TEXT NOT NULL DEFAULT '';
+)sql",
 };
 
 static_assert(std::size(kMigrations) == ClubRepository::kSchemaVersion);
@@ -258,7 +263,7 @@ std::optional<int> optionalInt(const SQLite::Column& c) {
 const char* kSummaryColumns =
     "m.code, m.date, m.competition, m.venue, m.opponent, m.goals_us, m.goals_opp, sq.name, "
     "se.name, m.length_m, m.width_m, (SELECT count(*) FROM event e WHERE e.match_id = m.id), "
-    "m.source_name, m.source_hash, m.ingested_at "
+    "m.source_name, m.source_hash, m.ingested_at, m.zone_grid "
     "FROM match m JOIN season se ON se.id = m.season_id JOIN squad sq ON sq.id = se.squad_id ";
 
 MatchSummary readSummary(SQLite::Statement& q) {
@@ -276,10 +281,30 @@ MatchSummary readSummary(SQLite::Statement& q) {
     s.eventCount = q.getColumn(11).getInt();
     s.source = {q.getColumn(12).getString(), q.getColumn(13).getString(),
                 q.getColumn(14).getString()};
+    s.zoneOnlyGrid = q.getColumn(15).getString();
     return s;
 }
 
 } // namespace
+
+namespace {
+
+MatchInfo zoneInfoOf(const MatchSummary& m) {
+    MatchInfo info;
+    info.pitch = m.pitch;
+    info.zoneOnlyGrid = m.zoneOnlyGrid;
+    return info;
+}
+
+} // namespace
+
+bool MatchSummary::zonesKnownOn(const ZoneGrid& grid) const {
+    return model::zonesKnownOn(zoneInfoOf(*this), grid);
+}
+
+std::string MatchSummary::zoneOnlyNote(const ZoneGrid& grid) const {
+    return model::zoneOnlyNote(zoneInfoOf(*this), grid);
+}
 
 std::string contentHash(std::string_view bytes) {
     std::uint64_t h = 14695981039346656037ull;
@@ -462,7 +487,7 @@ std::optional<Match> ClubRepository::loadMatch(const std::string& matchId) const
     return guarded("cannot load match", [&]() -> std::optional<Match> {
         SQLite::Statement q(*m_db,
                             "SELECT id, code, date, competition, venue, us, opponent, goals_us, "
-                            "goals_opp, length_m, width_m, source_frame, extra "
+                            "goals_opp, length_m, width_m, source_frame, extra, zone_grid "
                             "FROM match WHERE code = ?");
         q.bind(1, matchId);
         if (!q.executeStep()) return std::nullopt;
@@ -480,6 +505,7 @@ std::optional<Match> ClubRepository::loadMatch(const std::string& matchId) const
         info.pitch = {q.getColumn(9).getDouble(), q.getColumn(10).getDouble()};
         info.sourceFrame = frameFromString(q.getColumn(11).getString()).value_or(Frame::Acting);
         info.extra = q.getColumn(12).isNull() ? "" : q.getColumn(12).getString();
+        info.zoneOnlyGrid = q.getColumn(13).getString();
 
         SQLite::Statement p(*m_db, "SELECT n, length_s FROM period WHERE match_id = ? ORDER BY n");
         p.bind(1, row);
@@ -575,8 +601,8 @@ void ClubRepository::storeMatch(const Match& match, const SourceFile& source,
         SQLite::Statement ins(*m_db,
                               "INSERT INTO match(code, season_id, date, competition, venue, us, "
                               "opponent, goals_us, goals_opp, length_m, width_m, source_frame, "
-                              "extra, source_name, source_hash, ingested_at) "
-                              "VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)");
+                              "extra, source_name, source_hash, ingested_at, zone_grid) "
+                              "VALUES (?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?, ?)");
         ins.bind(1, info.id);
         ins.bind(2, seasonId);
         ins.bind(3, info.date);
@@ -594,6 +620,7 @@ void ClubRepository::storeMatch(const Match& match, const SourceFile& source,
         ins.bind(14, source.name);
         ins.bind(15, source.hash);
         ins.bind(16, source.ingestedAt.empty() ? systemNowUtcIso() : source.ingestedAt);
+        ins.bind(17, info.zoneOnlyGrid);
         ins.exec();
         const std::int64_t row = m_db->getLastInsertRowid();
 

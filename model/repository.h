@@ -44,6 +44,11 @@ struct MatchSummary {
     Pitch pitch;
     int eventCount = 0;
     SourceFile source;
+    std::string zoneOnlyGrid; ///< zone-only data: the grid its positions are known to; else empty
+
+    /// zonesKnownOn and zoneOnlyNote (metricengine.h) for the stored match.
+    bool zonesKnownOn(const ZoneGrid& grid) const;
+    std::string zoneOnlyNote(const ZoneGrid& grid) const;
 };
 
 struct TallyRow {
@@ -58,7 +63,7 @@ struct TallyRow {
 /// Owns the SQLite connection; returns domain structs. Throws StorageError on faults.
 class ClubRepository {
 public:
-    static constexpr int kSchemaVersion = 8;
+    static constexpr int kSchemaVersion = 9;
 
     /// Opens (creating when missing) and migrates the club file. ":memory:" works for tests.
     explicit ClubRepository(const std::string& file);

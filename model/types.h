@@ -81,6 +81,10 @@ struct MatchInfo {
     Pitch pitch;
     std::vector<Period> periods;
     Frame sourceFrame = Frame::Acting;
+    /// Zone-only data: the events' positions are the centres of this grid's zones (its
+    /// ZoneGrid::name(), e.g. "equal:6x5"), so where they were is known only to that grid.
+    /// Empty when the positions are measured.
+    std::string zoneOnlyGrid;
     std::string extra; ///< unknown fields of the match object, compact JSON text
 
     /// Length of period `n` in seconds, 0 when the match has no such period.

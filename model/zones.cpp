@@ -2,6 +2,7 @@
 
 #include <algorithm>
 #include <charconv>
+#include <cmath>
 
 namespace pitchloop::model {
 
@@ -86,6 +87,24 @@ ZoneLocator::ZoneLocator(const ZoneGrid& grid, const Pitch& pitch)
 
 Zone ZoneLocator::zoneOf(Point p) const {
     return {binOf(p.x, m_bandEdges), binOf(p.y, m_laneEdges)};
+}
+
+Point zoneCentre(Zone z, const ZoneGrid& grid, const Pitch& pitch) {
+    const auto b = grid.bandEdges(pitch);
+    const auto l = grid.laneEdges(pitch);
+    const auto band = static_cast<std::size_t>(z.band), lane = static_cast<std::size_t>(z.lane);
+    return {(b[band - 1] + b[band]) / 2, (l[lane - 1] + l[lane]) / 2};
+}
+
+bool coarsens(const ZoneGrid& coarse, const ZoneGrid& fine, const Pitch& pitch) {
+    auto within = [](const std::vector<double>& outer, const std::vector<double>& inner) {
+        return std::all_of(outer.begin(), outer.end(), [&](double e) {
+            return std::any_of(inner.begin(), inner.end(),
+                               [&](double f) { return std::abs(e - f) <= kEdgeToleranceM; });
+        });
+    };
+    return within(coarse.bandEdges(pitch), fine.bandEdges(pitch)) &&
+           within(coarse.laneEdges(pitch), fine.laneEdges(pitch));
 }
 
 } // namespace pitchloop::model

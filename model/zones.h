@@ -89,6 +89,23 @@ inline constexpr double kEdgeToleranceM = 1e-6;
 /// value on a boundary goes up; v ≥ the last edge falls in the last bin. Returns 1-based.
 int binOf(double v, const std::vector<double>& edges);
 
+// Zone-only data ------------------------------------------------------------------------------
+// A source that gives a zone label instead of a position (docs/import.md, "Zone-only data")
+// puts each event at its zone's centre; where in the zone it was is not known.
+
+/// The centre of zone `z` of `grid` on `pitch`, in our frame. Zones outside the grid are the
+/// caller's error (importprofile checks labels against the grid first).
+Point zoneCentre(Zone z, const ZoneGrid& grid, const Pitch& pitch);
+
+/// Positions stored for zone-only data are centres rounded to the centimetre; a position this
+/// close to a centre is that centre.
+inline constexpr double kZoneCentreToleranceM = 0.011;
+
+/// Whether every zone of `fine` lies inside one zone of `coarse` on `pitch` (every edge of
+/// `coarse` is an edge of `fine`): then a zone-only position on `fine` falls in the right zone
+/// of `coarse` too. True for equal grids; equal:3x5 coarsens equal:6x5, equal:6x3 does not.
+bool coarsens(const ZoneGrid& coarse, const ZoneGrid& fine, const Pitch& pitch);
+
 } // namespace pitchloop::model
 
 namespace pitchloop::model {

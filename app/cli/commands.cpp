@@ -156,7 +156,11 @@ int cmdProfileCheck(const std::string& profilePath, const std::string& file,
             const auto& m = mapped.match["match"];
             out << "match " << m.value("id", "?") << "  " << m.value("date", "?") << "  "
                 << m.value("us", "?") << " v " << m.value("opponent", "?") << " ("
-                << m.value("venue", "?") << "), frame " << m.value("frame", "?") << "\n";
+                << m.value("venue", "?") << "), frame " << m.value("frame", "?");
+            if (m.contains("zone_only"))
+                out << ", zone-only on " << m["zone_only"].value("grid", "?")
+                    << " (each event at its zone's centre)";
+            out << "\n";
             const auto& events = mapped.match["events"];
             out << events.size() << " events, " << mapped.skipped << " rows skipped; the first mapped:\n";
             for (std::size_t i = 0; i < events.size() && i < (all.size() > 1 ? 2u : 5u); ++i)
@@ -199,6 +203,8 @@ int cmdMatches(const Globals& g, const std::string& format, std::ostream& out) {
                       m.id.c_str(), m.date.c_str(), m.venue.c_str(), m.opponent.c_str(),
                       scoreLine(m).c_str(), m.eventCount, m.squad.c_str(), m.season.c_str());
         out << line;
+        if (!m.zoneOnlyGrid.empty())
+            out << "             zone-only: positions known only to grid " << m.zoneOnlyGrid << "\n";
     }
     if (matches.empty()) out << "(no matches yet: pitchloop ingest FILE.json)\n";
     return kExitOk;
@@ -231,6 +237,12 @@ int cmdTallies(const Globals& g, const std::string& format, const std::string& m
     }
     const auto rows = repo->talliesOnGrid(*grid, match.empty() ? std::nullopt : std::optional(match),
                                           metric.empty() ? std::nullopt : std::optional(metric));
+    // Zone-only matches that this grid cannot know: said, not guessed (docs/import.md).
+    for (const auto& m : repo->matches()) {
+        if (!match.empty() && m.id != match) continue;
+        if (const std::string note = m.zoneOnlyNote(*grid); !note.empty())
+            err << "note: match " << m.id << ": " << note << " (no rows for it)\n";
+    }
     if (format == "csv") {
         out << talliesCsv(rows);
     } else {

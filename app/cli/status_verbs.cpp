@@ -247,6 +247,8 @@ int StatusVerbs::runDebrief(ClubRepository& repo, std::ostream& out, std::ostrea
     const MatchSummary& m = c->summary;
     out << m.id << "  " << m.date << "  " << repo.clubName() << " v " << m.opponent << " ("
         << m.venue << ")  " << scoreLine(m) << "\n";
+    if (const std::string note = m.zoneOnlyNote(grid); !note.empty())
+        out << "Zone-only match: " << note << "; it adds nothing to the values below.\n";
     if (targets.empty()) {
         out << "No targets set for " << c->squad << " " << c->season
             << " yet (pitchloop targets set --help); per-zone values of the match follow.\n\n";
@@ -351,6 +353,10 @@ int StatusVerbs::runDebrief(ClubRepository& repo, std::ostream& out, std::ostrea
     }
     out << "\nPer-zone tallies of this match (grid " << tableGrid.name() << ", pitch "
         << m.pitch.lengthM << " × " << m.pitch.widthM << " m, " << m.eventCount << " events)\n\n";
+    if (const std::string note = m.zoneOnlyNote(tableGrid); !note.empty()) {
+        out << "Zone-only match: " << note << ".\n";
+        return kExitOk;
+    }
     const auto loaded = repo.loadMatch(m.id);
     const MatchFacts facts(*loaded);
     for (const auto& spec : specs) printZoneTable(out, spec, tableGrid, computeTally(facts, spec, tableGrid));

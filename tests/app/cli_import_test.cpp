@@ -104,3 +104,61 @@ TEST_CASE("a saved profile reads tables in its layout without --profile", "[cli]
     CHECK(cli({"--db", w.db, "profile", "remove", "analyst sheet"}).code == 0);
     CHECK(cli({"--db", w.db, "profile", "remove", "analyst sheet"}).code == 2);
 }
+
+TEST_CASE("zone labels load with the shipped zone-tags layout; other grids say what they cannot know",
+          "[cli][import][zones]") {
+    Workspace w;
+    const std::string profile = sourcePath("sample-club/import/zone-tags.json").string();
+    // sample-club/import/zone-tags.json: labels B{band}-L{lane} on equal:6x5, acting frame.
+    const std::string header = "Half,Secs,Side,No,Event,Outcome,Zone,ToZone,Notes\n";
+    const std::string rows = "1,2.0,ours,9,pass,ok,B3-L3,B4-L2,kick_off\n"
+                             "1,5.5,ours,8,pass,lost,B4-L2,,\n"
+                             "1,6.0,theirs,4,interception,ok,B3-L4,,\n"
+                             "2,30.0,ours,10,shot,stopped,B6-L3,,\n";
+    const std::string file = w.write("tags.csv", header + rows);
+    auto ingest = [&](const std::string& table, const std::string& id) {
+        return cli({"--db", w.db, "ingest", "--profile", profile, table, "--match-id", id, "--date",
+                    "2026-08-22", "--venue", "away", "--opponent", "Duneford City",
+                    "--period-lengths", "2700,2760"});
+    };
+    const auto check = cli({"profile", "check", profile, file, "--match-id", "KB-Z-02", "--date",
+                            "2026-08-22", "--venue", "away", "--opponent", "Duneford City"});
+    CHECK(check.code == 0);
+    // B3-L3 on 105 × 68 m: band 3 35–52.5 m (centre 43.75), lane 3 27.2–40.8 m (34).
+    CHECK(contains(check.out, "frame acting, zone-only on equal:6x5 (each event at its zone's centre)"));
+    CHECK(contains(check.out, "\"x\":43.75,\"y\":34.0"));
+    const auto r = ingest(file, "KB-Z-02");
+    INFO(r.out << r.err);
+    REQUIRE(r.code == 0);
+    const auto listed = cli({"--db", w.db, "matches"});
+    CHECK(contains(listed.out, "zone-only: positions known only to grid equal:6x5"));
+    // Our pass from B3-L3 completes: pass_completion 1/1 in band 3 lane 3, and the lost one
+    // from B4-L2 is 0/1 there.
+    const auto own = cli({"--db", w.db, "tallies", "--format", "csv", "--metric", "pass_completion"});
+    CHECK(contains(own.out, "KB-Z-02,pass_completion,3,3,1,1"));
+    CHECK(contains(own.out, "KB-Z-02,pass_completion,4,2,0,1"));
+    CHECK(own.err.empty());
+    const auto finer = cli({"--db", w.db, "tallies", "--format", "csv", "--grid", "equal:12x5"});
+    CHECK(finer.code == 0);
+    CHECK_FALSE(contains(finer.out, "KB-Z-02"));
+    CHECK(contains(finer.err, "note: match KB-Z-02: positions known only to grid equal:6x5; zone "
+                              "values not computed on grid equal:12x5 (no rows for it)"));
+    const auto preview = cli({"--db", w.db, "settings", "grid", "equal:8x5", "--preview"});
+    CHECK(contains(preview.out, "Match KB-Z-02: positions known only to grid equal:6x5; zone values "
+                                "not computed on grid equal:8x5."));
+    const auto tables = cli({"--db", w.db, "debrief", "KB-Z-02", "--tables", "--grid", "equal:8x5"});
+    CHECK(contains(tables.out, "Zone-only match: positions known only to grid equal:6x5; zone values "
+                               "not computed on grid equal:8x5.\n"));
+    CHECK(cli({"--db", w.db, "settings", "grid", "equal:8x5", "--by", "R. Tamsin"}).code == 0);
+    const auto debrief = cli({"--db", w.db, "debrief", "KB-Z-02"});
+    CHECK(contains(debrief.out, "Zone-only match: positions known only to grid equal:6x5; zone "
+                                "values not computed on grid equal:8x5; it adds nothing"));
+    CHECK(cli({"--db", w.db, "settings", "grid", "equal:6x5", "--by", "R. Tamsin"}).code == 0);
+    // A label the layout does not read: the file, line and column, and nothing stored.
+    const std::string bad = w.write("bad.csv", header + rows + "2,40.0,ours,7,pass,ok,Z9,,\n");
+    const std::string before = dataSnapshot(w.db);
+    const auto refused = ingest(bad, "KB-Z-03");
+    CHECK(refused.code == 2);
+    CHECK(contains(refused.err, bad + ": line 6.Zone: 'Z9' is not mapped (1 time; lines 6)"));
+    CHECK(dataSnapshot(w.db) == before);
+}

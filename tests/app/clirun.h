@@ -3,6 +3,7 @@
 // streams out.
 
 #include "commands.h"
+#include "testutil.h" // contains
 
 #include <sstream>
 #include <string>
@@ -28,10 +29,6 @@ inline CliRun cli(std::vector<std::string> args) {
     r.out = out.str();
     r.err = err.str();
     return r;
-}
-
-inline bool contains(const std::string& text, const std::string& part) {
-    return text.find(part) != std::string::npos;
 }
 
 } // namespace pitchloop::testutil

@@ -16,15 +16,12 @@
 #include <fstream>
 
 using namespace pitchloop::model;
+using pitchloop::testutil::contains;
 using pitchloop::testutil::dataSnapshot;
 using pitchloop::testutil::freshTempDir;
 namespace fs = std::filesystem;
 
 namespace {
-
-bool contains(const std::string& text, const std::string& part) {
-    return text.find(part) != std::string::npos;
-}
 
 /// A small profile of our own: ';' with a decimal comma, clock from kick-off, 0–100 from the
 /// top-left corner. `extra` is spliced into the top-level object.

@@ -24,6 +24,11 @@ std::string dataSnapshot(const std::string& sqliteFile);
 /// A fresh empty directory under the system temp folder.
 std::filesystem::path freshTempDir(const std::string& name);
 
+/// Whether `part` occurs in `text` (for checking messages).
+inline bool contains(const std::string& text, const std::string& part) {
+    return text.find(part) != std::string::npos;
+}
+
 /// Absolute path of a file in the source tree.
 std::filesystem::path sourcePath(const std::string& relative);
 

@@ -16,6 +16,10 @@ For each of three demo matches (one in each of the match format's frames) it wri
     "pixels" from the bottom-right corner, French words for types and results.
   * season-export: one quoted CSV holding all three matches, the match details (id, date,
     opponent, venue, period lengths) in columns, metres from the bottom-left corner.
+  * zone-tags: a CSV giving each event's zone label ("B2-L5") on the default grid equal:6x5
+    instead of its position, read with sample-club/import/zone-tags.json; the labels are
+    computed here from the native positions, and the tallies must equal the native ones on
+    that same grid (zone-only data is exact at its own grid, docs/import.md).
 Python's csv and json modules write the tables (and csv reads the delimited ones back to count
 their rows against what `pitchloop profile check` reports); the command line ingests each with
 its profile into a fresh club file, and `pitchloop tallies --format csv` must equal the tallies
@@ -61,19 +65,10 @@ def acting_events(match):
     """The events with positions in the acting frame (each in its own side's direction)."""
     m = match["match"]
     length, width = m["pitch"]["length_m"], m["pitch"]["width_m"]
-    out = []
-    for e in match["events"]:
-        e = dict(e)
-        if m["frame"] == "us" and e["side"] == "opp":
+    out = our_frame(match, clamp=False)
+    for e in out:
+        if e["side"] == "opp":
             mirror(e, length, width)
-        elif m["frame"] == "ground":
-            attack = m["us_attack"][str(e["period"])]
-            # ground -> our direction, then theirs for their events
-            if attack == "-x":
-                mirror(e, length, width)
-            if e["side"] == "opp":
-                mirror(e, length, width)
-        out.append(e)
     return out
 
 
@@ -195,6 +190,75 @@ def write_season(matches, path):
                             ";".join(e.get("tags", []))])
 
 
+ZONE_BANDS, ZONE_LANES = 6, 5  # the default grid equal:6x5 (docs/import.md, "Zone-only data")
+EDGE_TOLERANCE_M = 1e-6  # a position within this of a zone line is on it (docs/storage.md)
+V2_RESULTS = {"fail": "lost", "goal": "scored", "saved": "stopped", "blocked": "charged_down",
+              "off": "wide", "post": "woodwork"}
+
+
+def our_frame(match, clamp=True):
+    """The events with positions in our frame (x from our goal line, y from our right
+    touchline), clamped onto the pitch as the match format says (at most 3 m outside)."""
+    m = match["match"]
+    length, width = m["pitch"]["length_m"], m["pitch"]["width_m"]
+    out = []
+    for e in match["events"]:
+        e = dict(e)
+        if m["frame"] == "acting" and e["side"] == "opp":
+            mirror(e, length, width)
+        elif m["frame"] == "ground" and m["us_attack"][str(e["period"])] == "-x":
+            mirror(e, length, width)
+        for k, limit in (("x", length), ("y", width), ("to_x", length), ("to_y", width)):
+            if clamp and k in e:
+                e[k] = min(max(e[k], 0.0), limit)
+        out.append(e)
+    return out
+
+
+def bin_index(v, extent, n):
+    """1-based bin of v among n equal bins of [0, extent]: the number of inner lines
+    i * (extent / n) at or below v, so a point on a line goes to the higher bin and the far
+    edge to the last."""
+    return 1 + sum(1 for i in range(1, n) if v >= i * (extent / n) - EDGE_TOLERANCE_M)
+
+
+def zone_label(e, xk, yk, length, width, acting_opp):
+    band = bin_index(e[xk], length, ZONE_BANDS)
+    lane = bin_index(e[yk], width, ZONE_LANES)
+    if acting_opp:  # the acting frame numbers their zones from their own goal line
+        band, lane = ZONE_BANDS + 1 - band, ZONE_LANES + 1 - lane
+    return "B%d-L%d" % (band, lane)
+
+
+def write_zone_tags(match, path):
+    """Zone labels instead of positions, each side's zones in its own direction (acting)."""
+    m = match["match"]
+    length, width = m["pitch"]["length_m"], m["pitch"]["width_m"]
+    with open(path, "w", newline="", encoding="utf-8") as f:
+        w = csv.writer(f)
+        w.writerow(["Half", "Secs", "Side", "No", "Event", "Outcome", "Zone", "ToZone", "Notes"])
+        for e in our_frame(match):
+            opp = e["side"] == "opp"
+            to = zone_label(e, "to_x", "to_y", length, width, opp) if "to_x" in e else ""
+            w.writerow([e["period"], e["t"], "theirs" if opp else "ours", e.get("player", ""),
+                        e["type"], V2_RESULTS.get(e.get("result"), e.get("result", "")),
+                        zone_label(e, "x", "y", length, width, opp), to,
+                        " ".join(e.get("tags", []))])
+
+
+def self_test():
+    """Hand-worked labels on a 105 x 68 m pitch: bands 17.5 m, lanes 13.6 m."""
+    checks = [(bin_index(0.0, 105, 6), 1), (bin_index(17.5, 105, 6), 2),  # a line goes up
+              (bin_index(105.0, 105, 6), 6), (bin_index(40.8, 68, 5), 4),  # 3 x 13.6
+              (bin_index(40.79, 68, 5), 3)]
+    e = {"x": 10.0, "y": 60.0}
+    checks.append((zone_label(e, "x", "y", 105, 68, False), "B1-L5"))
+    checks.append((zone_label(e, "x", "y", 105, 68, True), "B6-L1"))
+    bad = [(got, want) for got, want in checks if got != want]
+    if bad:
+        raise SystemExit("zone label self-test failed: %s" % bad)
+
+
 def main():
     ap = argparse.ArgumentParser()
     ap.add_argument("--cli", required=True)
@@ -257,6 +321,29 @@ def main():
     db = os.path.join(a.workdir, "season.sqlite")
     run(a.cli, "--db", db, "ingest", "--profile", os.path.join(profiles, "season-export.json"), path)
     failures += compare("season-export", run(a.cli, "--db", db, "tallies", "--format", "csv").stdout, native)
+    # Zone-only: labels on equal:6x5, the club file's default grid, so tallies are exact.
+    self_test()
+    db = os.path.join(a.workdir, "zone-tags.sqlite")
+    for match in matches:
+        m = match["match"]
+        path = os.path.join(a.workdir, m["id"] + "-zones.csv")
+        write_zone_tags(match, path)
+        run(a.cli, "--db", db, "ingest", "--profile", os.path.join(profiles, "zone-tags.json"), path,
+            "--match-id", m["id"], "--date", m["date"], "--venue", m["venue"],
+            "--opponent", m["opponent"],
+            "--period-lengths", ",".join(str(p["length_s"]) for p in m["periods"]))
+    listed = run(a.cli, "--db", db, "matches").stdout
+    if listed.count("zone-only: positions known only to grid equal:6x5") != len(MATCHES):
+        failures += 1
+        print("the zone-tags matches should be listed as zone-only:\n%s" % listed)
+    failures += compare("zone-tags", run(a.cli, "--db", db, "tallies", "--format", "csv").stdout, native)
+    # On a finer grid the zone-only matches give no zone rows, and say so.
+    finer = run(a.cli, "--db", db, "tallies", "--format", "csv", "--grid", "equal:12x5")
+    notes = finer.stderr.count("positions known only to grid equal:6x5; zone values not computed on grid equal:12x5")
+    if finer.stdout.strip() != "match_id,metric,band,lane,num,den" or notes != len(MATCHES):
+        failures += 1
+        print("zone-tags on equal:12x5: expected no rows and %d notes, got %d rows, %d notes"
+              % (len(MATCHES), len(finer.stdout.splitlines()) - 1, notes))
     if frames != {"acting", "us", "ground"}:
         failures += 1
         print("the matches should cover the three frames, they cover %s" % sorted(frames))
