@@ -65,11 +65,6 @@ QString signedNumber(double v, int decimals) {
     return (v < 0 ? QStringLiteral("−") : QStringLiteral("+")) + body;
 }
 
-QString pText(double p) {
-    if (std::isnan(p)) return QStringLiteral("–");
-    return p < 0.0001 ? QStringLiteral("< 0.0001") : QLocale().toString(p, 'g', 3);
-}
-
 } // namespace
 
 FocusView::FocusView(QObject* parent)

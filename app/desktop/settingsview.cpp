@@ -91,10 +91,10 @@ QString SettingsView::fdrDefault() const {
 }
 
 QString SettingsView::budgetDefault() const {
-    const FlagSettings d;
+    const FlagSettings defaults;
     return tr("Default %1 a season over %2 matches, variation allowed for")
-        .arg(num(d.falseFlagsPerSeason))
-        .arg(d.seasonMatches);
+        .arg(num(defaults.falseFlagsPerSeason))
+        .arg(defaults.seasonMatches);
 }
 
 QString SettingsView::undoText() const {
