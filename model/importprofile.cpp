@@ -596,6 +596,8 @@ MappedTable mapTable(const Table& table, const MappingProfile& p, const MatchDet
         std::size_t order;
         json event;
         std::string place;
+        bool us;
+        bool ourShotInOwnHalf;
     };
     std::vector<Pending> events;
     std::map<int, double> lastT;
@@ -745,19 +747,10 @@ MappedTable mapTable(const Table& table, const MappingProfile& p, const MatchDet
             continue;
         }
         if (at->first < -1e8) continue;
-        e["period"] = period;
-        e["t"] = std::round(*t * 1000) / 1000;
-        e["side"] = side;
-        if (auto player = cell(row, cPlayer); player && !player->empty()) e["player"] = *player;
-        e["type"] = meaning->second.type;
-        if (!result.empty()) e["result"] = result;
-        e["x"] = std::round(at->first * 100) / 100;
-        e["y"] = std::round(at->second * 100) / 100;
-        if (const auto to = byZone ? zoneCentreOf("to_zone", cToZone)
-                                   : coordinate("to_x", "to_y", cToX, cToY)) {
-            if (to->first < -1e8) continue;
-            e["to_x"] = std::round(to->first * 100) / 100;
-            e["to_y"] = std::round(to->second * 100) / 100;
+        std::optional<std::pair<double, double>> to;
+        if (const auto end = byZone ? zoneCentreOf("to_zone", cToZone) : coordinate("to_x", "to_y", cToX, cToY)) {
+            if (end->first < -1e8) continue;
+            to = end;
         }
         std::vector<std::string> tags = meaning->second.tags;
         if (auto t2 = cell(row, cTags); t2 && !t2->empty()) {
@@ -770,10 +763,27 @@ MappedTable mapTable(const Table& table, const MappingProfile& p, const MatchDet
                 s = cut + p.tagSeparator.size();
             }
         }
-        if (!tags.empty()) e["tags"] = tags;
+        // The event's fields in key order, each appended at the end of the object (no search).
+        json::object_t& fields = e.get_ref<json::object_t&>();
+        auto add = [&](const char* key, json value) { fields.emplace_hint(fields.end(), key, std::move(value)); };
+        add("period", period);
+        if (auto player = cell(row, cPlayer); player && !player->empty()) add("player", std::move(*player));
+        if (!result.empty()) add("result", result);
+        add("side", side);
+        add("t", std::round(*t * 1000) / 1000);
+        if (!tags.empty()) add("tags", std::move(tags));
+        if (to) {
+            add("to_x", std::round(to->first * 100) / 100);
+            add("to_y", std::round(to->second * 100) / 100);
+        }
+        add("type", meaning->second.type);
+        add("x", std::round(at->first * 100) / 100);
+        add("y", std::round(at->second * 100) / 100);
         if (lastT.count(period) && *t < lastT[period]) ++backwards;
         lastT[period] = std::max(lastT[period], *t);
-        events.push_back({period, *t, events.size(), std::move(e), place});
+        const bool us = side == "us";
+        events.push_back({period, *t, events.size(), std::move(e), place, us,
+                          us && meaning->second.type == "shot" && at->first < length / 2});
         ++counts[{side == "us" ? std::string_view("us") : std::string_view("opp"), &meaning->second.type}];
     }
     for (const auto& [key, n] : counts) out.countsByType[std::string(key.first) + " " + *key.second] += n;
@@ -840,21 +850,18 @@ MappedTable mapTable(const Table& table, const MappingProfile& p, const MatchDet
     if (p.zoneGrid) m["zone_only"] = {{"grid", p.zoneGrid->name()}};
     if (p.frame == "ground") m["us_attack"] = p.usAttack;
     json list = json::array();
+    list.get_ref<json::array_t&>().reserve(events.size());
+    int ours = 0, ownHalf = 0, usEvents = 0;
     for (auto& pe : events) {
+        usEvents += pe.us;
+        ours += pe.us && pe.event["type"] == "shot";
+        ownHalf += pe.ourShotInOwnHalf;
         list.push_back(std::move(pe.event));
-        out.rowPlaces.push_back(pe.place);
+        out.rowPlaces.push_back(std::move(pe.place));
     }
 
     // Sanity: our shots should mostly be in the half we attack.
     if (p.frame != "ground") {
-        int ours = 0, ownHalf = 0, usEvents = 0;
-        for (const auto& e : list) {
-            usEvents += e["side"] == "us";
-            if (e["side"] == "us" && e["type"] == "shot") {
-                ++ours;
-                ownHalf += e["x"].get<double>() < length / 2;
-            }
-        }
         if (ours >= 5 && ownHalf * 10 > ours * 6)
             out.warnings.push_back({fileName, "", columnOf("x"),
                                     std::to_string(ownHalf) + " of our " + std::to_string(ours) +
@@ -865,7 +872,8 @@ MappedTable mapTable(const Table& table, const MappingProfile& p, const MatchDet
                                     "one side has almost no events (" + std::to_string(usEvents) + " ours of " +
                                         std::to_string(total) + "): are the side values right?"});
     }
-    out.match = {{"format", "pitchloop-match"}, {"version", 1}, {"match", m}, {"events", list}};
+    out.match = {{"format", "pitchloop-match"}, {"version", 1}, {"match", std::move(m)}};
+    out.match["events"] = std::move(list);
     return out;
 }
 
