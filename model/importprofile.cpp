@@ -570,25 +570,7 @@ MappedTable mapTable(const Table& table, const MappingProfile& p, const MatchDet
     std::map<std::pair<std::string_view, const std::string*>, int> counts;
     const auto columnOf = [&](const char* field) { return p.columns.at(field); };
     const Pitch pitch{length, width};
-    // A zone label: a listed word, else the pattern's band and lane numbers.
-    auto zoneOfLabel = [&](const std::string& label) -> std::optional<Zone> {
-        if (const auto listed = p.zoneLabels.find(label); listed != p.zoneLabels.end())
-            return listed->second;
-        if (p.zonePattern.empty()) return std::nullopt;
-        const auto parts = matchPattern(p.zonePattern, label);
-        if (!parts) return std::nullopt;
-        auto whole = [&](const char* key) -> std::optional<int> {
-            const auto it = parts->find(key);
-            if (it == parts->end()) return std::nullopt;
-            int v = 0;
-            const auto [end, ec] = std::from_chars(it->second.data(), it->second.data() + it->second.size(), v);
-            if (ec != std::errc() || end != it->second.data() + it->second.size()) return std::nullopt;
-            return v;
-        };
-        const auto band = whole("band"), lane = whole("lane");
-        if (!band || !lane) return std::nullopt;
-        return Zone{*band, *lane};
-    };
+    auto zoneOfLabel = [&](const std::string& label) { return zoneOfLabelIn(p, label); };
 
     struct Pending {
         int period;
@@ -984,5 +966,24 @@ Problems inTableTerms(const Problems& problems, const MappedTable& mapped, const
 
 std::optional<double> readTableNumber(std::string_view text, char decimal) { return readNumber(text, decimal); }
 std::optional<double> readTableClock(std::string_view text, char decimal) { return readClock(text, decimal); }
+
+// A zone label: a listed word, else the pattern's band and lane numbers.
+std::optional<Zone> zoneOfLabelIn(const MappingProfile& p, const std::string& label) {
+    if (const auto listed = p.zoneLabels.find(label); listed != p.zoneLabels.end()) return listed->second;
+    if (p.zonePattern.empty()) return std::nullopt;
+    const auto parts = matchPattern(p.zonePattern, label);
+    if (!parts) return std::nullopt;
+    auto whole = [&](const char* key) -> std::optional<int> {
+        const auto it = parts->find(key);
+        if (it == parts->end()) return std::nullopt;
+        int v = 0;
+        const auto [end, ec] = std::from_chars(it->second.data(), it->second.data() + it->second.size(), v);
+        if (ec != std::errc() || end != it->second.data() + it->second.size()) return std::nullopt;
+        return v;
+    };
+    const auto band = whole("band"), lane = whole("lane");
+    if (!band || !lane) return std::nullopt;
+    return Zone{*band, *lane};
+}
 
 } // namespace pitchloop::model

@@ -128,6 +128,10 @@ std::vector<MappedTable> mapFileMatches(std::string_view bytes, const MappingPro
 Problems inTableTerms(const Problems& problems, const MappedTable& mapped,
                       const MappingProfile& profile);
 
+/// The zone a label names in a zone-only profile (a listed label, else the pattern); nullopt
+/// when it names none. The zone may lie outside the grid (mapping reports that).
+std::optional<Zone> zoneOfLabelIn(const MappingProfile& profile, const std::string& label);
+
 /// A number as a table writes it ("12,5" with a decimal comma); nullopt when it is not one.
 std::optional<double> readTableNumber(std::string_view text, char decimal);
 /// A clock ("75.4", "12:05", "1:02:05.250") in seconds; nullopt when it is not one.

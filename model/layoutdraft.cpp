@@ -5,6 +5,8 @@
 #include <algorithm>
 #include <cctype>
 #include <cmath>
+#include <cstdio>
+#include <cstdlib>
 #include <map>
 #include <set>
 #include <unordered_map>
@@ -47,6 +49,8 @@ const std::vector<std::pair<std::string, std::vector<std::string>>>& roleNames()
         {"y", {"y", "starty", "posy", "ystart", "fromy", "y1", "locy", "locationy"}},
         {"to_x", {"tox", "endx", "x2", "xend", "targetx"}},
         {"to_y", {"toy", "endy", "y2", "yend", "targety"}},
+        {"zone", {"zone", "area", "zonelabel", "cell", "box", "sector", "fromzone", "startzone"}},
+        {"to_zone", {"tozone", "endzone", "zoneto", "targetzone"}},
         {"tags", {"tags", "labels", "flags", "tag"}},
         {"match.id", {"match", "matchid", "game", "gameid", "matchno", "fixture"}},
         {"match.date", {"date", "matchdate", "gamedate", "day"}},
@@ -173,7 +177,27 @@ const std::vector<std::string>& columnRoles() {
     return roles;
 }
 
+/// "B2-L5" → "B{band}-L{lane}": the first two runs of digits become the band and the lane;
+/// empty when a label has fewer than two.
+std::string guessZonePattern(const std::string& label) {
+    std::string out;
+    int runs = 0;
+    for (std::size_t i = 0; i < label.size();) {
+        if (std::isdigit(static_cast<unsigned char>(label[i])) && runs < 2) {
+            while (i < label.size() && std::isdigit(static_cast<unsigned char>(label[i]))) ++i;
+            out += runs++ == 0 ? "{band}" : "{lane}";
+        } else {
+            out += label[i++];
+        }
+    }
+    return runs == 2 ? out : std::string();
+}
+
 void assignRole(MappingProfile& p, const std::string& column, const std::string& role) {
+    // Positions come as x and y or as zone labels, never both.
+    static const std::set<std::string> byPosition{"x", "y", "to_x", "to_y"}, byZone{"zone", "to_zone"};
+    const auto& other = byZone.count(role) ? byPosition : byPosition.count(role) ? byZone : std::set<std::string>{};
+    for (const auto& f : other) p.columns.erase(f);
     for (auto it = p.columns.begin(); it != p.columns.end();)
         it = it->second == column || it->first == role ? p.columns.erase(it) : std::next(it);
     for (auto it = p.matchColumns.begin(); it != p.matchColumns.end();)
@@ -181,6 +205,13 @@ void assignRole(MappingProfile& p, const std::string& column, const std::string&
     if (role.empty()) return;
     if (isMatchRole(role)) p.matchColumns[role.substr(6)] = column;
     else p.columns[role] = column;
+    if (!p.columns.count("zone")) {
+        p.zoneGrid.reset();
+        p.zoneLabels.clear();
+        p.zonePattern.clear();
+    } else if (!p.zoneGrid) {
+        p.zoneGrid = ZoneGrid{};
+    }
 }
 
 std::string roleOf(const MappingProfile& p, const std::string& column) {
@@ -249,6 +280,8 @@ MappingProfile draftProfile(const Table& table, const TableGuess& guess, const s
                         break;
                     }
     }
+    if (const ColumnLook* zone = lookOf("zone"); zone && !zone->samples.empty())
+        p.zonePattern = guessZonePattern(zone->samples.front());
     // The extent, from the largest coordinates: 0–1, metres, 0–100, else a picture's pixels.
     const ColumnLook* x = lookOf("x");
     const ColumnLook* y = lookOf("y");
@@ -290,7 +323,7 @@ MappingProfile draftProfile(const Table& table, const TableGuess& guess, const s
 
 std::vector<WordUse> vocabulary(const Table& table, const MappingProfile& p) {
     std::vector<WordUse> out;
-    for (const char* field : {"side", "type", "result", "period"}) {
+    for (const char* field : {"side", "type", "result", "period", "zone", "to_zone"}) {
         const auto col = p.columns.find(field);
         if (col == p.columns.end()) continue;
         const auto at = table.column(col->second);
@@ -328,6 +361,9 @@ std::vector<WordUse> vocabulary(const Table& table, const MappingProfile& p) {
             } else if (f == "result") {
                 if (const auto r = p.results.find(u.word); r != p.results.end())
                     u.ours = std::string(wordOf(*resultFromString(r->second), 2));
+            } else if (f == "zone" || f == "to_zone") {
+                if (const auto z = zoneOfLabelIn(p, u.word))
+                    u.ours = std::to_string(z->band) + "," + std::to_string(z->lane);
             } else if (const auto n = p.periodWords.find(u.word); n != p.periodWords.end()) {
                 u.ours = std::to_string(n->second);
             }
@@ -376,6 +412,15 @@ bool mapWord(MappingProfile& p, const std::string& field, const std::string& wor
         if (result) p.results[word] = std::string(wordOf(*result, 1));
         return true;
     }
+    if (field == "zone" || field == "to_zone") {
+        int band = 0, lane = 0;
+        if (!ours.empty() && (std::sscanf(ours.c_str(), "%d,%d", &band, &lane) != 2 || !p.zoneGrid ||
+                              band < 1 || band > p.zoneGrid->bands() || lane < 1 || lane > p.zoneGrid->lanes()))
+            return false;
+        p.zoneLabels.erase(word);
+        if (!ours.empty()) p.zoneLabels[word] = Zone{band, lane};
+        return true;
+    }
     if (field == "period") {
         const int n = ours.empty() ? 0 : std::atoi(ours.c_str());
         if (!ours.empty() && (n < 1 || n > 9)) return false;
@@ -411,9 +456,21 @@ DraftCheck checkDraft(std::string_view bytes, const MappingProfile& draft, const
     }
     MatchDetails preview = details;
     preview.preview = true;
-    for (const MappedTable& mapped : mapFileMatches(bytes, profile, preview, fileName)) {
+    for (MappedTable& mapped : mapFileMatches(bytes, profile, preview, fileName)) {
         if (!mapped.match.contains("events")) continue;
         ReadResult read = parseMatchDocument(mapped.match, fileName);
+        if (!read.match) {
+            // Leave out the events the reader refuses ("events[12]"), and read the rest.
+            std::set<std::size_t> refused;
+            for (const Problem& e : read.errors)
+                if (e.place.rfind("events[", 0) == 0) refused.insert(std::strtoul(e.place.c_str() + 7, nullptr, 10));
+            json& events = mapped.match["events"];
+            json kept = json::array();
+            for (std::size_t i = 0; i < events.size(); ++i)
+                if (!refused.count(i)) kept.push_back(std::move(events[i]));
+            events = std::move(kept);
+            if (!events.empty()) read = parseMatchDocument(mapped.match, fileName);
+        }
         if (read.match) out.preview = std::move(read.match);
         break;
     }
@@ -457,6 +514,16 @@ json toJson(const MappingProfile& p) {
                      {"y", p.yUp ? "up" : "down"}, {"frame", p.frame}};
     if (p.frame == "ground") coordinates["us_attack"] = p.usAttack;
     doc["coordinates"] = coordinates;
+    if (p.zoneGrid) {
+        json zones{{"grid", p.zoneGrid->name()}};
+        if (!p.zonePattern.empty()) zones["pattern"] = p.zonePattern;
+        if (!p.zoneLabels.empty()) {
+            json labels = json::object();
+            for (const auto& [label, z] : p.zoneLabels) labels[label] = {z.band, z.lane};
+            zones["labels"] = labels;
+        }
+        doc["zones"] = zones;
+    }
     json types = json::object();
     for (const auto& [word, m] : p.types) {
         const std::string type(wordOf(*eventTypeFromString(m.type), 2));

@@ -52,6 +52,10 @@ const std::vector<std::string>& columnRoles();
 /// that is one of our own words (either format version, any case, spaces for underscores).
 MappingProfile draftProfile(const Table& table, const TableGuess& guess, const std::string& ourName);
 
+/// A zone label's pattern from one label: "B2-L5" → "B{band}-L{lane}" (the first two runs of
+/// digits); empty when the label has fewer than two.
+std::string guessZonePattern(const std::string& label);
+
 /// Sets `column` to hold `role` (one of columnRoles(), or "" for none) and takes the role
 /// from any other column that held it.
 void assignRole(MappingProfile& profile, const std::string& column, const std::string& role);
@@ -60,13 +64,14 @@ std::string roleOf(const MappingProfile& profile, const std::string& column);
 
 /// One word of a column the profile reads words from.
 struct WordUse {
-    std::string field;  ///< side, type, result or period
+    std::string field;  ///< side, type, result, period, zone or to_zone
     std::string column; ///< the table's column
     std::string word;
     int count = 0;
     std::vector<std::size_t> lines; ///< the first few lines where it appears
     /// What it maps to now: for types "pass" or "shot/scored" (type/result) or "skip"; for
-    /// results ours; for sides "us" or "opp"; for periods the number; empty when unmapped.
+    /// results ours; for sides "us" or "opp"; for periods the number; for zone labels
+    /// "band,lane"; empty when unmapped.
     std::string ours;
 };
 

@@ -36,6 +36,8 @@ QString roleText(const std::string& role) {
         {"y", QT_TRANSLATE_NOOP("LayoutAssistant", "Position across the pitch")},
         {"to_x", QT_TRANSLATE_NOOP("LayoutAssistant", "End position along")},
         {"to_y", QT_TRANSLATE_NOOP("LayoutAssistant", "End position across")},
+        {"zone", QT_TRANSLATE_NOOP("LayoutAssistant", "Zone (a label, no positions)")},
+        {"to_zone", QT_TRANSLATE_NOOP("LayoutAssistant", "End zone (a label)")},
         {"tags", QT_TRANSLATE_NOOP("LayoutAssistant", "Tags")},
         {"match.id", QT_TRANSLATE_NOOP("LayoutAssistant", "Match (one table, many matches)")},
         {"match.date", QT_TRANSLATE_NOOP("LayoutAssistant", "Match date")},
@@ -50,6 +52,8 @@ QString fieldText(const std::string& field) {
     if (field == "side") return LayoutAssistant::tr("team");
     if (field == "type") return LayoutAssistant::tr("event");
     if (field == "result") return LayoutAssistant::tr("result");
+    if (field == "zone") return LayoutAssistant::tr("zone");
+    if (field == "to_zone") return LayoutAssistant::tr("end zone");
     return LayoutAssistant::tr("period");
 }
 
@@ -59,6 +63,10 @@ QString oursText(const std::string& field, const std::string& ours) {
     if (field == "side") return ours == "us" ? LayoutAssistant::tr("us") : LayoutAssistant::tr("them");
     if (ours == "skip") return LayoutAssistant::tr("leave out (not an event)");
     if (field == "period") return LayoutAssistant::tr("period %1").arg(q(ours));
+    if (field == "zone" || field == "to_zone") {
+        const auto parts = q(ours).split(QLatin1Char(','));
+        return LayoutAssistant::tr("band %1 · lane %2").arg(parts.value(0), parts.value(1));
+    }
     QString text = q(ours);
     text.replace(QLatin1Char('/'), QStringLiteral(" · "));
     text.replace(QLatin1Char('_'), QLatin1Char(' '));
@@ -216,6 +224,28 @@ void LayoutAssistant::setExtentHeight(double h) {
     m_state->profile.height = h;
     recompute();
 }
+bool LayoutAssistant::byZone() const { return m_state->profile.zoneGrid.has_value(); }
+QString LayoutAssistant::zoneGrid() const {
+    const auto& g = m_state->profile.zoneGrid;
+    return g ? q(g->name()) : QString();
+}
+void LayoutAssistant::setZoneGrid(const QString& name) {
+    MappingProfile& p = m_state->profile;
+    const auto grid = ZoneGrid::parse(s(name.trimmed()));
+    if (!p.zoneGrid || !grid || *grid == *p.zoneGrid) {
+        emit changed(); // an unreadable grid name snaps back to the one in use
+        return;
+    }
+    p.zoneGrid = *grid;
+    recompute();
+}
+QString LayoutAssistant::zonePattern() const { return q(m_state->profile.zonePattern); }
+void LayoutAssistant::setZonePattern(const QString& pattern) {
+    if (s(pattern.trimmed()) == m_state->profile.zonePattern) return;
+    m_state->profile.zonePattern = s(pattern.trimmed());
+    recompute();
+}
+
 QString LayoutAssistant::origin() const { return q(m_state->profile.origin); }
 void LayoutAssistant::setOrigin(const QString& o) {
     MappingProfile& p = m_state->profile;
@@ -329,7 +359,14 @@ void LayoutAssistant::setRole(const QString& column, const QString& role) {
 namespace {
 
 /// The meanings a word of `field` can take, in the order wordChoices lists them after "".
-std::vector<std::string> meaningsOf(const std::string& field) {
+std::vector<std::string> meaningsOf(const std::string& field, const MappingProfile& p) {
+    if (field == "zone" || field == "to_zone") {
+        std::vector<std::string> ids;
+        const ZoneGrid grid = p.zoneGrid.value_or(ZoneGrid{});
+        for (int b = 1; b <= grid.bands(); ++b)
+            for (int l = 1; l <= grid.lanes(); ++l) ids.push_back(std::to_string(b) + "," + std::to_string(l));
+        return ids;
+    }
     if (field == "side") return {"us", "opp"};
     if (field == "type") return typeChoices();
     if (field == "result") {
@@ -345,7 +382,7 @@ std::vector<std::string> meaningsOf(const std::string& field) {
 
 QVariantList LayoutAssistant::wordChoices(const QString& field) const {
     QVariantList out{choice({}, oursText(s(field), {}))};
-    for (const auto& id : meaningsOf(s(field))) out << choice(q(id), oursText(s(field), id));
+    for (const auto& id : meaningsOf(s(field), m_state->profile)) out << choice(q(id), oursText(s(field), id));
     return out;
 }
 
@@ -411,8 +448,8 @@ void LayoutAssistant::reread() {
 namespace {
 
 /// Where a word's meaning is in wordChoices (0: not mapped).
-int oursIndex(const WordUse& w) {
-    const auto ids = meaningsOf(w.field);
+int oursIndex(const WordUse& w, const MappingProfile& p) {
+    const auto ids = meaningsOf(w.field, p);
     const auto at = std::find(ids.begin(), ids.end(), w.ours);
     return at == ids.end() ? 0 : static_cast<int>(at - ids.begin()) + 1;
 }
@@ -440,7 +477,7 @@ void LayoutAssistant::recompute() {
     std::vector<WordUse> words = vocabulary(m_state->table, p);
     // By field as vocabulary lists them, the unmapped words of each first.
     const auto rank = [](const WordUse& w) {
-        static const std::vector<std::string> fields{"side", "type", "result", "period"};
+        static const std::vector<std::string> fields{"side", "type", "result", "period", "zone", "to_zone"};
         return 2 * static_cast<int>(std::find(fields.begin(), fields.end(), w.field) - fields.begin()) + !w.ours.empty();
     };
     std::stable_sort(words.begin(), words.end(), [&](const WordUse& a, const WordUse& b) { return rank(a) < rank(b); });
@@ -455,7 +492,7 @@ void LayoutAssistant::recompute() {
                                {QStringLiteral("count"), w.count},
                                {QStringLiteral("linesText"), tr("lines %1").arg(lines.join(QStringLiteral(", ")))},
                                {QStringLiteral("ours"), q(w.ours)},
-                               {QStringLiteral("oursIndex"), oursIndex(w)}};
+                               {QStringLiteral("oursIndex"), oursIndex(w, p)}};
     }
     const DraftCheck check = checkDraft(m_state->bytes, p, m_state->details, m_path.toStdString());
     m_problems = described(check.profileErrors, s(m_name.isEmpty() ? QStringLiteral("layout") : m_name));

@@ -42,6 +42,11 @@ class LayoutAssistant : public pitchloop::desktop::SessionClient {
     Q_PROPERTY(QString timeForm READ timeForm WRITE setTimeForm NOTIFY changed)
     Q_PROPERTY(double fps READ fps WRITE setFps NOTIFY changed)
     Q_PROPERTY(bool timeFromKickoff READ timeFromKickoff WRITE setTimeFromKickoff NOTIFY changed)
+    // Zone labels instead of positions (a column has the zone role): the grid the labels name
+    // ("equal:6x5", "markings:6") and how a label names its zone ("B{band}-L{lane}").
+    Q_PROPERTY(bool byZone READ byZone NOTIFY changed)
+    Q_PROPERTY(QString zoneGrid READ zoneGrid WRITE setZoneGrid NOTIFY changed)
+    Q_PROPERTY(QString zonePattern READ zonePattern WRITE setZonePattern NOTIFY changed)
     // Coordinates.
     Q_PROPERTY(double extentWidth READ extentWidth WRITE setExtentWidth NOTIFY changed)
     Q_PROPERTY(double extentHeight READ extentHeight WRITE setExtentHeight NOTIFY changed)
@@ -97,6 +102,11 @@ public:
     void setFps(double fps);
     bool timeFromKickoff() const;
     void setTimeFromKickoff(bool on);
+    bool byZone() const;
+    QString zoneGrid() const;
+    void setZoneGrid(const QString& name);
+    QString zonePattern() const;
+    void setZonePattern(const QString& pattern);
     double extentWidth() const;
     void setExtentWidth(double w);
     double extentHeight() const;

@@ -131,6 +131,7 @@ Rectangle {
                     Label { text: qsTr("Time in"); color: Theme.textMuted }
                     ComboBox {
                         Layout.fillWidth: true
+                        Layout.minimumWidth: 130
                         model: root.timeForms
                         textRole: "text"
                         valueRole: "id"
@@ -143,8 +144,30 @@ Rectangle {
                         checked: root.assistant.timeFromKickoff
                         onToggled: root.assistant.timeFromKickoff = checked
                     }
-                    Label { text: qsTr("Extent"); color: Theme.textMuted }
+                    Label { visible: root.assistant.byZone; text: qsTr("Zone grid"); color: Theme.textMuted }
+                    TextField {
+                        objectName: "zoneGrid"
+                        visible: root.assistant.byZone
+                        Layout.fillWidth: true
+                        text: root.assistant.zoneGrid
+                        onEditingFinished: root.assistant.zoneGrid = text
+                        ToolTip.visible: hovered
+                        ToolTip.text: qsTr("The grid the labels name: equal:BANDSxLANES (e.g. equal:6x5) or markings:BANDS")
+                    }
+                    Label { visible: root.assistant.byZone; text: qsTr("Labels like"); color: Theme.textMuted }
+                    TextField {
+                        objectName: "zonePattern"
+                        visible: root.assistant.byZone
+                        Layout.fillWidth: true
+                        text: root.assistant.zonePattern
+                        placeholderText: "B{band}-L{lane}"
+                        onEditingFinished: root.assistant.zonePattern = text
+                        ToolTip.visible: hovered
+                        ToolTip.text: qsTr("How a label names its zone; labels it does not read are listed under Words, to map one by one")
+                    }
+                    Label { visible: !root.assistant.byZone; text: qsTr("Extent"); color: Theme.textMuted }
                     RowLayout {
+                        visible: !root.assistant.byZone
                         Layout.columnSpan: 3
                         TextField {
                             objectName: "extentWidth"
@@ -168,9 +191,10 @@ Rectangle {
                             elide: Text.ElideRight
                         }
                     }
-                    Label { text: qsTr("0, 0 at"); color: Theme.textMuted }
+                    Label { visible: !root.assistant.byZone; text: qsTr("0, 0 at"); color: Theme.textMuted }
                     ComboBox {
                         objectName: "origin"
+                        visible: !root.assistant.byZone
                         Layout.fillWidth: true
                         model: root.origins
                         textRole: "text"
@@ -179,6 +203,7 @@ Rectangle {
                         onActivated: root.assistant.origin = currentValue
                     }
                     CheckBox {
+                        visible: !root.assistant.byZone
                         Layout.columnSpan: 2
                         enabled: root.assistant.origin === "centre"
                         text: qsTr("y runs down")

@@ -14,6 +14,7 @@
 #include "repository.h"
 #include "testmain.h"
 
+#include <QFile>
 #include <QSignalSpy>
 #include <QTemporaryDir>
 #include <QTest>
@@ -53,6 +54,7 @@ private slots:
     void cleanup();
     void guessesAndWordsLeftToMap();
     void finishedLayoutSavesAndLoadsToTheNativeTallies();
+    void zoneLabelsInsteadOfPositions();
     void unreadableFileSaysSo();
 
 private:
@@ -178,6 +180,49 @@ void LayoutAssistantTest::finishedLayoutSavesAndLoadsToTheNativeTallies() {
     QVERIFY(finished.wait(60000));
     QCOMPARE(needed.count(), 0);
     QVERIFY(loader.hasFailures());
+}
+
+void LayoutAssistantTest::zoneLabelsInsteadOfPositions() {
+    // Invented hand tagging with zone labels and one label of the staff's own ("box").
+    const QString path = m_dir->filePath(QStringLiteral("tags.csv"));
+    {
+        QFile f(path);
+        QVERIFY(f.open(QIODevice::WriteOnly));
+        f.write("Half,Secs,Side,Event,Outcome,Zone\n"
+                "1,3,Kestrel Bay,pass,ok,B3-L2\n"
+                "1,9,Saltmarsh,pass,ok,B5-L5\n"
+                "1,20,Kestrel Bay,shot,wide,box\n");
+    }
+    LayoutAssistant& a = *m_assistant;
+    QVERIFY(a.open(path));
+    QCOMPARE(column(a, QStringLiteral("Zone")).value(QStringLiteral("role")).toString(), QStringLiteral("zone"));
+    QVERIFY(a.byZone());
+    QCOMPARE(a.zoneGrid(), QStringLiteral("equal:6x5"));
+    QCOMPARE(a.zonePattern(), QStringLiteral("B{band}-L{lane}"));
+    QCOMPARE(unmapped(a), QStringList({"box"}));
+    // 6 × 5 zones to choose from, after "not mapped".
+    QCOMPARE(a.wordChoices(QStringLiteral("zone")).size(), 31);
+    a.setWord(QStringLiteral("zone"), QStringLiteral("box"), QStringLiteral("6,3"));
+    a.setZoneGrid(QStringLiteral("no grid")); // refused: the grid stays
+    QCOMPARE(a.zoneGrid(), QStringLiteral("equal:6x5"));
+    a.setMatchId(QStringLiteral("KB-Z-01"));
+    a.setMatchDate(QStringLiteral("2026-08-15"));
+    a.setOpponent(QStringLiteral("Saltmarsh"));
+    a.setVenue(QStringLiteral("away"));
+    QVERIFY2(a.ready(), qPrintable(a.problems().join(QLatin1Char('\n'))));
+    a.setLayoutName(QStringLiteral("zone tags"));
+    QSignalSpy saved(&a, &LayoutAssistant::saved);
+    QVERIFY2(a.save(), qPrintable(a.savedText()));
+    ImportView loader;
+    loader.setSession(m_session.get());
+    QSignalSpy finished(&loader, &ImportView::finished);
+    QVERIFY(loader.loadWithDetails({path}, saved.front().at(1).toMap()));
+    QVERIFY(finished.wait(60000));
+    QVERIFY2(!loader.hasFailures(), qPrintable(loader.summaryText()));
+    model::ClubRepository repo(m_file.toStdString());
+    const auto summary = repo.matchSummary("KB-Z-01");
+    QVERIFY(summary);
+    QCOMPARE(summary->zoneOnlyGrid, std::string("equal:6x5"));
 }
 
 void LayoutAssistantTest::unreadableFileSaysSo() {

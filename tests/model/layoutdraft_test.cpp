@@ -172,3 +172,50 @@ TEST_CASE("a preview maps what it can before the profile is finished", "[layoutd
     // Without the preview flag the same table gives nothing.
     CHECK_FALSE(mapTable(t, p, MatchDetails{}, "sheet.csv").match.contains("events"));
 }
+
+TEST_CASE("a zone-only table is drafted with its grid and label pattern", "[layoutdraft]") {
+    // Invented hand tagging: zone labels instead of positions, one label ("spot") of its own.
+    const char* tags = "Half,Secs,Side,Event,Outcome,Zone\n"
+                       "1,3,ours,pass,ok,B3-L2\n"
+                       "1,9,theirs,pass,ok,B5-L5\n"
+                       "1,20,ours,shot,wide,spot\n";
+    const TableGuess g = guessTableFormat(tags);
+    const Table t = tableOf(tags, g);
+    MappingProfile p = draftProfile(t, g, "");
+    CHECK(roleOf(p, "Zone") == "zone");
+    REQUIRE(p.zoneGrid);
+    CHECK(p.zoneGrid->name() == "equal:6x5");
+    CHECK(p.zonePattern == "B{band}-L{lane}");
+    CHECK(guessZonePattern("Z12/7") == "Z{band}/{lane}");
+    CHECK(guessZonePattern("left wing").empty());
+    auto words = vocabulary(t, p);
+    REQUIRE(find(words, "zone", "B3-L2"));
+    CHECK(find(words, "zone", "B3-L2")->ours == "3,2");
+    CHECK(find(words, "zone", "spot")->ours.empty());
+    CHECK(mapWord(p, "zone", "spot", "6,3"));
+    CHECK_FALSE(mapWord(p, "zone", "spot", "7,3")); // beyond the grid's 6 bands
+    CHECK(find(vocabulary(t, p), "zone", "spot")->ours == "6,3");
+    mapWord(p, "side", "ours", "us");
+    // A position role takes the zone's away, and back.
+    assignRole(p, "Zone", "x");
+    CHECK_FALSE(p.zoneGrid);
+    assignRole(p, "Zone", "zone");
+    REQUIRE(p.zoneGrid);
+    p.zonePattern = "B{band}-L{lane}";
+    mapWord(p, "zone", "spot", "6,3");
+
+    const ProfileResult back = parseProfile(toJson(p).dump(), "tags.json");
+    INFO(toJson(p).dump(2) << "\n" << describeAll(back.errors));
+    REQUIRE(back.profile);
+    MatchDetails details;
+    details.values = {{"id", "KB-Z-01"}, {"date", "2026-08-01"}, {"venue", "home"}, {"us", "Kestrel Bay"},
+                      {"opponent", "Saltmarsh"}};
+    const MappedTable m = mapTable(t, *back.profile, details, "tags.csv");
+    INFO(describeAll(m.errors));
+    REQUIRE(m.errors.empty());
+    // "spot" is band 6 lane 3 of 6 × 5 on 105 × 68: centre (96.25, 34) — bands of 17.5 m, lanes
+    // of 13.6 m, lane 3 spanning 27.2–40.8 m.
+    CHECK(m.match["events"][2]["x"].get<double>() == Approx(96.25));
+    CHECK(m.match["events"][2]["y"].get<double>() == Approx(34));
+    CHECK(m.match["match"]["zone_only"]["grid"] == "equal:6x5");
+}
