@@ -267,7 +267,16 @@ void LayoutAssistant::setFrame(const QString& f) {
     MappingProfile& p = m_state->profile;
     if (s(f) == p.frame) return;
     p.frame = s(f);
-    if (p.frame == "ground" && p.usAttack.empty()) p.usAttack = {{"1", "+x"}, {"2", "-x"}};
+    if (p.frame == "ground" && p.usAttack.empty()) setFirstHalfTowardsZero(false);
+    recompute();
+}
+bool LayoutAssistant::firstHalfTowardsZero() const {
+    const auto it = m_state->profile.usAttack.find("1");
+    return it != m_state->profile.usAttack.end() && it->second == "-x";
+}
+void LayoutAssistant::setFirstHalfTowardsZero(bool towardsZero) {
+    const std::string odd = towardsZero ? "-x" : "+x", even = towardsZero ? "+x" : "-x";
+    m_state->profile.usAttack = {{"1", odd}, {"2", even}, {"3", odd}, {"4", even}};
     recompute();
 }
 

@@ -53,6 +53,9 @@ class LayoutAssistant : public pitchloop::desktop::SessionClient {
     Q_PROPERTY(QString origin READ origin WRITE setOrigin NOTIFY changed)
     Q_PROPERTY(bool yDown READ yDown WRITE setYDown NOTIFY changed)
     Q_PROPERTY(QString frame READ frame WRITE setFrame NOTIFY changed)
+    /// Ground frame: we attack towards x = 0 in the first period (then ends change every
+    /// period: 2 the other way, 3 as 1, 4 as 2).
+    Q_PROPERTY(bool firstHalfTowardsZero READ firstHalfTowardsZero WRITE setFirstHalfTowardsZero NOTIFY changed)
     /// [{field, fieldText, column, word, count, linesText, ours}] of the side, type, result
     /// and period columns; unmapped words first.
     Q_PROPERTY(QVariantList words READ words NOTIFY changed)
@@ -117,6 +120,8 @@ public:
     void setYDown(bool down);
     QString frame() const;
     void setFrame(const QString& f);
+    bool firstHalfTowardsZero() const;
+    void setFirstHalfTowardsZero(bool towardsZero);
     QVariantList words() const { return m_words; }
     int unmappedCount() const { return m_unmapped; }
     QString matchId() const { return detail("id"); }

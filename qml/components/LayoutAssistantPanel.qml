@@ -220,6 +220,13 @@ Rectangle {
                         currentIndex: Math.max(0, indexOfValue(root.assistant.frame))
                         onActivated: root.assistant.frame = currentValue
                     }
+                    CheckBox {
+                        visible: root.assistant.frame === "ground"
+                        Layout.columnSpan: 4
+                        text: qsTr("in the first half we attack towards 0 (ends change each period)")
+                        checked: root.assistant.firstHalfTowardsZero
+                        onToggled: root.assistant.firstHalfTowardsZero = checked
+                    }
                 }
                 LayoutPreview {
                     Layout.fillWidth: true

@@ -116,6 +116,14 @@ void LayoutAssistantTest::guessesAndWordsLeftToMap() {
     QCOMPARE(column(a, QStringLiteral("Shirt")).value(QStringLiteral("roleIndex")).toInt(), 0);
     a.setRole(QStringLiteral("Shirt"), QStringLiteral("player"));
     QCOMPARE(column(a, QStringLiteral("Shirt")).value(QStringLiteral("role")).toString(), QStringLiteral("player"));
+    // The ground frame: ends change each period, our first-half direction the person's choice.
+    a.setFrame(QStringLiteral("ground"));
+    QVERIFY(!a.firstHalfTowardsZero());
+    QVERIFY(a.profileText().contains(QStringLiteral("\"2\": \"-x\"")));
+    a.setFirstHalfTowardsZero(true);
+    QVERIFY(a.firstHalfTowardsZero());
+    QVERIFY(a.profileText().contains(QStringLiteral("\"1\": \"-x\"")));
+    a.setFrame(QStringLiteral("acting"));
     // A save before the layout reads the file is refused.
     QVERIFY(!a.save());
     QVERIFY(a.savedText().contains(QStringLiteral("Not saved")));
