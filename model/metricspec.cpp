@@ -204,7 +204,7 @@ public:
             error("", "a metric is a JSON object");
             return std::nullopt;
         }
-        onlyKeys(v, "", {"id", "name", "question", "better", "items", "success", "per"});
+        onlyKeys(v, "", {"id", "name", "question", "sentence", "better", "items", "success", "per"});
         MetricSpec m;
         static const std::regex idPattern("[a-z][a-z0-9_]{0,39}");
         if (auto it = v.find("id"); it == v.end() || !it->is_string()) {
@@ -223,6 +223,20 @@ public:
         if (auto it = v.find("question"); it != v.end()) {
             if (it->is_string()) m.question = it->get<std::string>();
             else error("question", "expected text");
+        }
+        if (auto it = v.find("sentence"); it != v.end()) {
+            if (!it->is_string()) {
+                error("sentence", "expected text");
+            } else {
+                m.sentence = it->get<std::string>();
+                for (std::size_t open = m.sentence.find('{'); open != std::string::npos;
+                     open = m.sentence.find('{', open + 1)) {
+                    const std::size_t close = m.sentence.find('}', open);
+                    const std::string field = m.sentence.substr(open, close == std::string::npos ? close : close - open + 1);
+                    if (field != "{zone}" && field != "{value}" && field != "{window}")
+                        error("sentence", "'" + field + "' is not a place holder (use {zone}, {value} and {window})");
+                }
+            }
         }
         if (auto it = v.find("better"); it == v.end()) {
             error("better", "missing: higher or lower");

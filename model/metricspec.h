@@ -60,6 +60,10 @@ struct MetricSpec {
     std::string id;
     std::string name;
     std::string question;
+    /// The coach's sentence for one zone (optional): a template with {zone}, {value} and
+    /// {window}, e.g. "we lost the ball in {zone} {value} times a match {window}"
+    /// (model/wording.h). Without one the sentence is built from the name.
+    std::string sentence;
     Better better = Better::Higher;
     ItemSpec items;
     SuccessSpec success;

@@ -82,7 +82,7 @@ void ClubAgenda::refresh() {
         const MetricSpec* metric = s->metricSpec(f.metric);
         QString zones;
         for (const auto& z : f.zones)
-            zones += (zones.isEmpty() ? QString() : QStringLiteral(", ")) + zoneText(z.band, z.lane);
+            zones += (zones.isEmpty() ? QString() : QStringLiteral(", ")) + zoneText(z.band, z.lane, f.grid);
         if (!zones.isEmpty() && f.grid != s->grid())
             zones += tr(" (on %1)").arg(QString::fromStdString(f.grid.name()));
         const auto dueDate = reviewDueDate(f, fixtures.list(f.squad, f.season));

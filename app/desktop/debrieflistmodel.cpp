@@ -1,5 +1,7 @@
 #include "debrieflistmodel.h"
 
+#include "wording.h"
+
 #include "display.h"
 #include "zonestate.h"
 
@@ -13,6 +15,7 @@ using namespace pitchloop::model;
 
 std::vector<DebriefRow> debriefRows(const QString& section, const std::vector<DebriefItem>& items,
                                     const std::map<std::string, MetricSpec>& metrics,
+                                    const ZoneGrid& grid,
                                     const std::string& previousMatchId, bool markNew) {
     std::vector<DebriefRow> out;
     for (const auto& item : items) {
@@ -27,7 +30,7 @@ std::vector<DebriefRow> debriefRows(const QString& section, const std::vector<De
                            : r.metricId;
         r.band = s.band;
         r.lane = s.lane;
-        r.zoneText = zoneText(s.band, s.lane);
+        r.zoneText = zoneText(s.band, s.lane, grid);
         r.valueText = valueText(kind, s.value);
         r.intervalText = intervalText(kind, s.interval);
         r.sampleText = sampleText(kind, s.sum, s.window);
@@ -40,6 +43,14 @@ std::vector<DebriefRow> debriefRows(const QString& section, const std::vector<De
             // One match of a per-match count: not judged, but how rare such a match is.
             r.stateText = QStringLiteral("Unusual match");
             r.certaintyText = singleMatchText(s.matchTail).remove(QStringLiteral("unusual match: "));
+        }
+        if (spec != metrics.end()) r.coachText = QString::fromStdString(words::coachSentence(spec->second, s, grid));
+        r.analystText = QString::fromStdString(words::analystLine(s, kind));
+        if (s.state == FlagState::TooLittleData && !std::isnan(s.matchTail)) {
+            r.coachText = QString::fromStdString(words::coachSentence(spec->second, s, grid)) + QLatin1Char(' ') +
+                          QStringLiteral("This match alone was unusual for a team on its target: about 1 in %1.")
+                              .arg(QLocale().toString(std::round(1 / std::max(s.matchTail, 1e-12)), 'f', 0));
+            r.analystText += QStringLiteral(" · ") + singleMatchText(s.matchTail);
         }
         r.isNew = markNew && !previousMatchId.empty() && item.before != FlagState::OffTarget;
         if (r.isNew)

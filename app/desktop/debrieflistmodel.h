@@ -15,7 +15,7 @@ namespace pitchloop::desktop {
 
 /// One debrief line, ready for display.
 struct DebriefRow {
-    QString section; ///< "Slipped over the last 5 matches", ...
+    QString section; ///< "Off target over the last 5 matches", ...
     QString metricId;
     QString metricName;
     int band = 0;
@@ -30,13 +30,18 @@ struct DebriefRow {
     int state = 0; ///< ZoneState::Value
     QString stateText;
     bool isNew = false;    ///< slipped now, not after the previous match
-    QString changeText;    ///< "new since KB-2026-33", "was Watch", ...
+    QString changeText;    ///< "new since KB-2026-33", "was close to the line", ...
+    /// The coach's layer: the zone in one plain sentence (model/wording.h).
+    QString coachText;
+    /// The analyst's layer: the numbers behind the same sentence in one line.
+    QString analystText;
 };
 
 /// Rows of one debrief section from model items (already ordered by certainty).
 std::vector<DebriefRow> debriefRows(const QString& section,
                                     const std::vector<model::DebriefItem>& items,
                                     const std::map<std::string, model::MetricSpec>& metrics,
+                                    const model::ZoneGrid& grid,
                                     const std::string& previousMatchId, bool markNew);
 
 /// Debrief items in sections, each ordered by how sure the flag is (P(miss), highest first).

@@ -2,6 +2,8 @@
 
 #include "debrief.h"
 #include "focus.h"
+#include "wording.h"
+#include "zonenames.h"
 
 #include <QDate>
 #include <QLocale>
@@ -16,6 +18,7 @@ using namespace pitchloop::model;
 namespace {
 
 QString number(double v, int decimals) { return QLocale().toString(v, 'f', decimals); }
+QString qs(const std::string& s) { return QString::fromStdString(s); }
 
 /// A tidy step for an axis spanning `span`: 1, 2 or 5 times a power of ten.
 double tidyStep(double span, int steps) {
@@ -28,22 +31,10 @@ double tidyStep(double span, int steps) {
 
 } // namespace
 
-QString valueText(MetricKind kind, double value) {
-    if (std::isnan(value)) return QStringLiteral("–");
-    if (kind == MetricKind::Rate) return number(100 * value, 1) + QLatin1Char('%');
-    if (kind == MetricKind::Count) // whole numbers for whole counts, else tenths
-        return number(value, std::abs(value - std::round(value)) < 0.005 ? 0 : 1);
-    return number(value, 2);
-}
+QString valueText(MetricKind kind, double value) { return qs(words::value(kind, value)); }
 
 QString intervalText(MetricKind kind, const stats::Interval& interval) {
-    if (std::isnan(interval.low) || std::isnan(interval.high) || std::isinf(interval.high))
-        return QStringLiteral("–");
-    if (kind == MetricKind::Rate)
-        return number(100 * interval.low, 1) + QStringLiteral("–") + number(100 * interval.high, 1) +
-               QLatin1Char('%');
-    const int decimals = kind == MetricKind::Count ? 1 : 2;
-    return number(interval.low, decimals) + QStringLiteral("–") + number(interval.high, decimals);
+    return qs(words::interval(kind, interval));
 }
 
 QString levelText(double level) {
@@ -63,13 +54,11 @@ QString sampleText(MetricKind kind, const WindowSum& sum, const Window& w) {
 
 QString targetText(MetricKind kind, const std::optional<Target>& target) {
     if (!target) return {};
-    return (target->direction == Direction::AtLeast ? QStringLiteral("≥ ") : QStringLiteral("≤ ")) +
-           valueText(kind, target->value);
+    return qs(words::target(target->direction, kind, target->value));
 }
 
-QString zoneText(int band, int lane) {
-    if (band == 0 && lane == 0) return QStringLiteral("Whole pitch");
-    return QStringLiteral("Band %1 · lane %2").arg(band).arg(lane);
+QString zoneText(int band, int lane, const ZoneGrid& grid) {
+    return QString::fromStdString(words::capitalised(zoneLabel(band, lane, grid)));
 }
 
 QString verdictWord(const std::string& verdict) {
@@ -84,17 +73,7 @@ QString verdictWord(const std::string& verdict) {
     return {};
 }
 
-QString stateText(FlagState state) {
-    switch (state) {
-    case FlagState::OnTarget: return QStringLiteral("On target");
-    case FlagState::CloseToLine: return QStringLiteral("Close to the line");
-    case FlagState::LikelyOff: return QStringLiteral("Likely off");
-    case FlagState::OffTarget: return QStringLiteral("Slipped");
-    case FlagState::TooLittleData: return QStringLiteral("Too little data");
-    case FlagState::NoTarget: return QStringLiteral("No target");
-    }
-    return {};
-}
+QString stateText(FlagState state) { return qs(words::capitalised(words::stateName(state))); }
 
 QString singleMatchText(double matchTail) {
     if (std::isnan(matchTail)) return {};
@@ -107,30 +86,12 @@ QString singleMatchText(double matchTail) {
 
 QString certaintyText(double pMiss) {
     if (std::isnan(pMiss)) return {};
-    return QStringLiteral("P(miss) %1").arg(number(pMiss, pMiss >= 0.99 ? 3 : 2));
+    return QStringLiteral("P(miss) ") + qs(words::probability(pMiss));
 }
 
-QString windowText(const Window& w) {
-    switch (w.kind) {
-    case Window::Kind::Match: return QStringLiteral("This match");
-    case Window::Kind::LastN:
-        return w.n == 1 ? QStringLiteral("Last match") : QStringLiteral("Last %1 matches").arg(w.n);
-    case Window::Kind::Season: return QStringLiteral("Season so far");
-    case Window::Kind::Ewma: return QStringLiteral("EWMA, λ %1").arg(number(w.lambda, 2));
-    }
-    return {};
-}
+QString windowText(const Window& w) { return qs(words::windowTitle(w)); }
 
-QString windowPhrase(const Window& w) {
-    switch (w.kind) {
-    case Window::Kind::Match: return QStringLiteral("this match");
-    case Window::Kind::LastN:
-        return w.n == 1 ? QStringLiteral("the last match") : QStringLiteral("the last %1 matches").arg(w.n);
-    case Window::Kind::Season: return QStringLiteral("the season so far");
-    case Window::Kind::Ewma: return QStringLiteral("the EWMA (λ %1)").arg(number(w.lambda, 2));
-    }
-    return {};
-}
+QString windowPhrase(const Window& w) { return qs(words::windowName(w)); }
 
 QString dateText(const std::string& isoDate) {
     const QDate d = QDate::fromString(QString::fromStdString(isoDate), Qt::ISODate);

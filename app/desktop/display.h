@@ -4,6 +4,7 @@
 
 #include "repository.h"
 #include "status.h"
+#include "zones.h"
 
 #include <QString>
 #include <QStringList>
@@ -12,6 +13,9 @@
 #include <vector>
 
 namespace pitchloop::desktop {
+
+// Words and numbers come from model/wording.h (one vocabulary for the app, the command line and
+// the sheets); this file adds what only screens need.
 
 /// "52.3%" for rates; "3" or "6.8" for counts (whole counts without decimals); "0.15" for
 /// exposures; "–" when there is no value.
@@ -24,19 +28,21 @@ QString levelText(double level);
 QString sampleText(model::MetricKind kind, const model::WindowSum& sum, const model::Window& w);
 /// "≥ 55.0%", or an empty string without a target.
 QString targetText(model::MetricKind kind, const std::optional<model::Target>& target);
-/// "Band 5 · lane 1", or "Whole pitch" for band 0, lane 0.
-QString zoneText(int band, int lane);
+/// A zone of `grid` as every screen names it: "Our left-back area (B2·L5)", or "Whole pitch"
+/// for band 0, lane 0 (model/zonenames.h).
+QString zoneText(int band, int lane, const model::ZoneGrid& grid);
 /// A focus's verdict in words: "worked", "partly", "no change", "can't tell".
 QString verdictWord(const std::string& verdict);
-/// The state in our own words: "Slipped", "Watch", "On target", "Too little data", "No target".
+/// The state as a heading or cell: "Off target", "Likely off", "Close to the line", "On target",
+/// "Too little data", "No target".
 QString stateText(model::FlagState state);
-/// How sure a flag is: "P(miss) 0.64", empty when not judged.
+/// How sure a flag is: "P(miss) 0.64", "P(miss) > 0.999"; empty when not judged.
 QString certaintyText(double pMiss);
 /// For one match of a per-match count (not judged): how rare such a match is for a team on its
 /// target, "unusual match: 1 in 6,889 if on target" or "a usual match for a team on target";
 /// empty when `matchTail` is NaN.
 QString singleMatchText(double matchTail);
-/// "Last 5 matches", "This match", "Season so far", "EWMA, λ 0.3".
+/// "Last 5 matches", "This match", "Season so far", "Recent matches, weighted (λ 0.30)".
 QString windowText(const model::Window& w);
 /// The same inside a sentence: "the last 5 matches", "this match", "the season so far".
 QString windowPhrase(const model::Window& w);

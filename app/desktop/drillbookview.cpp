@@ -203,7 +203,7 @@ void DrillBookView::refresh() {
 void DrillBookView::refreshList() {
     ClubRepository* repo = repository();
     if (!repo) {
-        m_drills->reset({});
+        m_drills->reset({}, ZoneGrid{});
         m_tagOptions = {option(tr("Any tag"), QString())};
         m_metricOptions = {option(tr("Any metric"), QString())};
         m_zoneOptions = {option(tr("Any zone"), QVariant())};
@@ -222,10 +222,11 @@ void DrillBookView::refreshList() {
     for (const auto& m : session()->metricSpecs())
         m_metricOptions << option(QString::fromStdString(m.name.empty() ? m.id : m.name), QString::fromStdString(m.id));
     const ZoneGrid& grid = session()->grid();
+    m_form->setGrid(grid);
     m_zoneOptions = {option(tr("Any zone"), QVariant())};
     for (int i = 0; i < grid.zoneCount(); ++i) {
         const Zone z = grid.zoneAt(i);
-        m_zoneOptions << option(zoneText(z.band, z.lane), QVariantMap{{QStringLiteral("band"), z.band},
+        m_zoneOptions << option(zoneText(z.band, z.lane, grid), QVariantMap{{QStringLiteral("band"), z.band},
                                                                       {QStringLiteral("lane"), z.lane}});
     }
     m_geometry->setZoneGrid(grid);
@@ -240,7 +241,7 @@ void DrillBookView::refreshList() {
     filter.intensity = m_intensityFilter;
     std::vector<Drill> found = browseDrills(book, filter);
     const int shown = static_cast<int>(found.size());
-    m_drills->reset(std::move(found), [this](const std::string& id) { return metricName(id); });
+    m_drills->reset(std::move(found), session()->grid(), [this](const std::string& id) { return metricName(id); });
 
     if (m_total == 0)
         m_resultText = tr("The drill book is empty.");
@@ -263,7 +264,7 @@ void DrillBookView::refreshSelection() {
     if (current) {
         std::vector<Drill> history = DrillBook(*repo).history(m_selectedId);
         std::reverse(history.begin(), history.end()); // newest first
-        m_versions->resetVersions(std::move(history), [this](const std::string& id) { return metricName(id); });
+        m_versions->resetVersions(std::move(history), session()->grid(), [this](const std::string& id) { return metricName(id); });
         m_selectedDeleted = current->deleted;
         m_editorTitle = tr("Drill %1 · %2").arg(m_selectedId).arg(QString::fromStdString(current->title));
         m_editorDetail =
@@ -280,7 +281,7 @@ void DrillBookView::refreshSelection() {
                       "grid; saving stores them on it.")
                        .arg(QString::fromStdString(current->zonesGrid)));
     } else {
-        m_versions->reset({});
+        m_versions->reset({}, ZoneGrid{});
         m_selectedDeleted = false;
         m_editorTitle = tr("New drill");
         m_editorDetail = repo ? tr("Fill in the fields and save (Ctrl+S). Fields marked * are required.")

@@ -66,7 +66,13 @@ QVariantList DrillForm::zones() const {
     return out;
 }
 
-QString DrillForm::zonesText() const { return desktop::zonesText(m_zones); }
+QString DrillForm::zonesText() const { return desktop::zonesText(m_zones, m_grid); }
+
+void DrillForm::setGrid(const ZoneGrid& grid) {
+    if (grid == m_grid) return;
+    m_grid = grid;
+    emit changed();
+}
 
 void DrillForm::toggleMetric(const QString& metricId) {
     QStringList next = m_metrics;

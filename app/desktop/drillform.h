@@ -87,6 +87,8 @@ public:
     /// Empties every field but savedBy; intensity 3, and marks the form clean.
     void clear();
     void markClean();
+    /// The club's grid, which the zones are on (their names follow it).
+    void setGrid(const model::ZoneGrid& grid);
 
     /// A problem with what was typed, before the drill book sees it: the form field (property
     /// name) and a sentence naming it.
@@ -109,6 +111,7 @@ private:
     QString m_playersMin, m_playersMax, m_areaLength, m_areaWidth, m_equipment;
     QStringList m_metrics;
     std::vector<model::Zone> m_zones;
+    model::ZoneGrid m_grid;
     QString m_tags, m_author, m_savedBy;
     bool m_dirty = false;
 };

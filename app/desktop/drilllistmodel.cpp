@@ -27,20 +27,21 @@ QString areaText(double length, double width) {
                                           QLocale().toString(width, 'g', 4));
 }
 
-QString zonesText(const std::vector<Zone>& zones) {
+QString zonesText(const std::vector<Zone>& zones, const ZoneGrid& grid) {
     QStringList parts;
-    for (const Zone& z : zones) parts << zoneText(z.band, z.lane);
+    for (const Zone& z : zones) parts << zoneText(z.band, z.lane, grid);
     return parts.join(QStringLiteral(", "));
 }
 
 DrillListModel::DrillListModel(QObject* parent) : QAbstractListModel(parent) {}
 
-void DrillListModel::reset(std::vector<Drill> drills, MetricName metricName) {
+void DrillListModel::reset(std::vector<Drill> drills, const ZoneGrid& grid, MetricName metricName) {
     const int before = count();
     beginResetModel();
     m_rows = std::move(drills);
     m_changes.clear();
     m_metricName = std::move(metricName);
+    m_grid = grid;
     endResetModel();
     if (before != count()) emit countChanged();
 }
@@ -63,7 +64,8 @@ QString fieldWords(const std::string& key) {
 
 } // namespace
 
-void DrillListModel::resetVersions(std::vector<Drill> newestFirst, MetricName metricName) {
+void DrillListModel::resetVersions(std::vector<Drill> newestFirst, const ZoneGrid& grid,
+                                   MetricName metricName) {
     std::vector<QString> changes;
     for (std::size_t i = 0; i < newestFirst.size(); ++i) {
         if (i + 1 == newestFirst.size()) {
@@ -80,6 +82,7 @@ void DrillListModel::resetVersions(std::vector<Drill> newestFirst, MetricName me
     m_rows = std::move(newestFirst);
     m_changes = std::move(changes);
     m_metricName = std::move(metricName);
+    m_grid = grid;
     endResetModel();
     if (before != count()) emit countChanged();
 }
@@ -137,7 +140,7 @@ QVariant DrillListModel::data(const QModelIndex& index, int role) const {
         parts.removeAll(QString());
         return parts.join(QStringLiteral("  ·  "));
     }
-    case ZonesTextRole: return zonesText(d.zones);
+    case ZonesTextRole: return zonesText(d.zones, m_grid);
     case TagsTextRole: return tagsText(d);
     case AuthorRole: return text(d.author);
     case EditedTextRole:

@@ -50,9 +50,11 @@ public:
 
     explicit DrillListModel(QObject* parent = nullptr);
 
-    void reset(std::vector<model::Drill> drills, MetricName metricName = {});
+    /// Drills whose zones lie on `grid` (the club's).
+    void reset(std::vector<model::Drill> drills, const model::ZoneGrid& grid, MetricName metricName = {});
     /// One drill's versions, newest first; each row also says what it changed.
-    void resetVersions(std::vector<model::Drill> newestFirst, MetricName metricName = {});
+    void resetVersions(std::vector<model::Drill> newestFirst, const model::ZoneGrid& grid,
+                       MetricName metricName = {});
     int count() const { return static_cast<int>(m_rows.size()); }
     const model::Drill* at(int row) const;
     /// Row of a drill id, -1 when absent.
@@ -74,6 +76,7 @@ private:
     std::vector<model::Drill> m_rows;
     std::vector<QString> m_changes; ///< per row, for a list of versions
     MetricName m_metricName;
+    model::ZoneGrid m_grid;
 };
 
 /// "4 · high"; empty outside 1–5.
@@ -82,7 +85,7 @@ QString intensityText(int level);
 QString playersText(int min, int max);
 /// "35 × 25 m", empty without an area.
 QString areaText(double length, double width);
-/// "Band 2 · lane 5, Band 3 · lane 5".
-QString zonesText(const std::vector<model::Zone>& zones);
+/// "Our left-back area (B2·L5), In front of our box (B2·L3)".
+QString zonesText(const std::vector<model::Zone>& zones, const model::ZoneGrid& grid);
 
 } // namespace pitchloop::desktop

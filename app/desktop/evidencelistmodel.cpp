@@ -22,13 +22,13 @@ QString joinedParts(const QStringList& parts) {
 EvidenceListModel::EvidenceListModel(QObject* parent) : QAbstractListModel(parent) {}
 
 void EvidenceListModel::reset(const std::vector<EvidenceZone>& zones, MetricKind kind,
-                              const std::string& judgedWindow) {
+                              const std::string& judgedWindow, const ZoneGrid& grid) {
     const int before = count();
     beginResetModel();
     m_rows.clear();
     for (const EvidenceZone& z : zones) {
         Row r;
-        r.zoneText = zoneText(z.band, z.lane);
+        r.zoneText = zoneText(z.band, z.lane, grid);
         const auto window = Window::parse(z.window);
         r.windowText = window ? desktop::windowText(*window) : QString::fromStdString(z.window);
         r.judged = z.window == judgedWindow;

@@ -37,9 +37,10 @@ public:
 
     explicit EvidenceListModel(QObject* parent = nullptr);
 
-    /// `judgedWindow` is the club's judged window name (FlagSettings::window.name()).
+    /// `judgedWindow` is the club's judged window name (FlagSettings::window.name()); `grid`
+    /// the one the zones are on (a focus's own).
     void reset(const std::vector<model::EvidenceZone>& zones, model::MetricKind kind,
-               const std::string& judgedWindow);
+               const std::string& judgedWindow, const model::ZoneGrid& grid);
     int count() const { return static_cast<int>(m_rows.size()); }
 
     int rowCount(const QModelIndex& parent = {}) const override;

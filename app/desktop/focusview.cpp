@@ -56,7 +56,7 @@ QString phaseWords(FocusState s, const std::string& verdict) {
 QString focusZonesText(const std::vector<Zone>& zones, const ZoneGrid& grid) {
     if (static_cast<int>(zones.size()) == grid.zoneCount() && grid.zoneCount() > 1)
         return FocusView::tr("Whole pitch");
-    return zonesText(zones);
+    return zonesText(zones, grid);
 }
 
 QString signedNumber(double v, int decimals) {
@@ -220,8 +220,8 @@ void FocusView::clearDetail() {
     m_verdictText.clear();
     m_closed = false;
     m_evidenceTitle.clear();
-    m_evidence->reset({}, MetricKind::Rate, {});
-    m_linked->reset({});
+    m_evidence->reset({}, MetricKind::Rate, {}, ZoneGrid{});
+    m_linked->reset({}, ZoneGrid{});
     m_linkedIds.clear();
     m_focusMetric.clear();
     m_hasReview = false;
@@ -295,7 +295,7 @@ void FocusView::refreshDetail() {
                                  f.verdictNote.empty() ? QStringLiteral(".") : tr(": %1").arg(qs(f.verdictNote)));
 
     const FocusEvidence evidence = readEvidence(f.evidence, settings.window.name());
-    m_evidence->reset(evidence.zones, kind, settings.window.name());
+    m_evidence->reset(evidence.zones, kind, settings.window.name(), f.grid);
     m_evidenceTitle = tr("Frozen %1 from %2 (%3); judged over %4")
                           .arg(compactDateText(evidence.frozenAt.substr(0, 10)), qs(evidence.matchId),
                                compactDateText(evidence.date), windowPhrase(settings.window));
@@ -305,7 +305,7 @@ void FocusView::refreshDetail() {
     for (auto id : f.drills)
         if (auto drill = book.get(id)) linked.push_back(std::move(*drill));
     m_linkedIds = f.drills;
-    m_linked->reset(std::move(linked), [this](const std::string& id) { return metricName(id); });
+    m_linked->reset(std::move(linked), session()->grid(), [this](const std::string& id) { return metricName(id); });
 
     // The review: the numbers stored with the verdict once closed, else computed now.
     if (m_closed) {
@@ -459,7 +459,7 @@ void FocusView::setDrillQuery(const QString& v) {
 void FocusView::refreshDrillSearch() {
     ClubRepository* repo = repository();
     if (!repo) {
-        m_drillResults->reset({});
+        m_drillResults->reset({}, ZoneGrid{});
         m_drillSearchText.clear();
         emit drillSearchChanged();
         return;
@@ -488,7 +488,7 @@ void FocusView::refreshDrillSearch() {
         m_drillSearchText = tr("Drills that work on %1").arg(metricName(metric));
     else
         m_drillSearchText = found.empty() ? tr("No other drills in the book.") : tr("Every drill in the book");
-    m_drillResults->reset(std::move(found), [this](const std::string& id) { return metricName(id); });
+    m_drillResults->reset(std::move(found), session()->grid(), [this](const std::string& id) { return metricName(id); });
     emit drillSearchChanged();
 }
 
@@ -764,7 +764,7 @@ void FocusView::cancelDraft() {
 }
 
 void FocusView::refreshDraft() {
-    m_draftEvidence->reset({}, MetricKind::Rate, {});
+    m_draftEvidence->reset({}, MetricKind::Rate, {}, ZoneGrid{});
     m_draftMap->clear();
     m_draftStartText.clear();
     m_draftSlipText.clear();
@@ -773,19 +773,19 @@ void FocusView::refreshDraft() {
     m_draftZonesText.clear();
     ClubRepository* repo = repository();
     if (!m_drafting || !repo) {
-        m_draftDrillModel->reset({});
+        m_draftDrillModel->reset({}, ZoneGrid{});
         emit draftChanged();
         return;
     }
     ClubSession* s = session();
     const ZoneGrid& grid = s->grid();
     m_geometry->setZoneGrid(grid);
-    m_draftZonesText = m_draftWhole ? tr("Whole pitch") : desktop::zonesText(m_draftZones);
+    m_draftZonesText = m_draftWhole ? tr("Whole pitch") : desktop::zonesText(m_draftZones, grid);
     DrillBook book(*repo);
     std::vector<Drill> picked;
     for (auto id : m_draftDrills)
         if (auto drill = book.get(id)) picked.push_back(std::move(*drill));
-    m_draftDrillModel->reset(std::move(picked), [this](const std::string& id) { return metricName(id); });
+    m_draftDrillModel->reset(std::move(picked), grid, [this](const std::string& id) { return metricName(id); });
 
     const MatchSummary* match = s->summary(m_draftMatchId.toStdString());
     const MetricSpec* metric = s->metricSpec(m_draftMetricId.toStdString());
@@ -819,7 +819,7 @@ void FocusView::refreshDraft() {
         header.wholePitchText = wholePitchLine(*whole, kind);
         header.wholePitchState = ZoneState::from(whole->state);
     }
-    m_draftMap->reset(std::move(header), zoneCells(zones, kind, domain));
+    m_draftMap->reset(std::move(header), zoneCells(zones, kind, domain, grid));
 
     const std::string start = dayAfter(match->date);
     m_draftStartText = tr("Training on it starts %1, the day after the match. The review compares "
@@ -833,12 +833,12 @@ void FocusView::refreshDraft() {
     }
     const FocusEvidence e = focusEvidence(season->tallies(), *focal, *metric, season->targets(), grid,
                                           s->flagSettings(), m_draftZones, m_draftWhole, {});
-    m_draftEvidence->reset(e.zones, kind, s->flagSettings().window.name());
+    m_draftEvidence->reset(e.zones, kind, s->flagSettings().window.name(), grid);
     m_draftSlipped = e.slipped;
     m_draftSlipText = e.slipped
-                          ? tr("Slipped or watched over %1 at %2: these numbers are frozen with the focus.")
+                          ? tr("Off target or watched over %1 at %2: these numbers are frozen with the focus.")
                                 .arg(windowPhrase(w.judged), qs(match->id))
-                          : tr("Neither slipped nor watched over %1 at %2. The focus can still be opened; "
+                          : tr("Neither off target nor watched over %1 at %2. The focus can still be opened; "
                                "these numbers are frozen with it.")
                                 .arg(windowPhrase(w.judged), qs(match->id));
     emit draftChanged();

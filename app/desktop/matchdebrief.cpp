@@ -172,26 +172,26 @@ void MatchDebrief::refresh() {
     m_matchMap->reset(header(tr("This match"),
                              QStringLiteral("%1 v %2").arg(m_matchId, QString::fromStdString(match->opponent)),
                              windows.match),
-                      zoneCells(inMatch, kind, domain));
+                      zoneCells(inMatch, kind, domain, grid));
     m_windowMap->reset(header(tr("%1 — judged").arg(m_windowText),
                               QStringLiteral("%1 … %2").arg(QString::fromStdString(season->tallies().matchIds[first]),
                                                             m_matchId),
                               windows.judged),
-                       zoneCells(inWindow, kind, domain));
+                       zoneCells(inWindow, kind, domain, grid));
 
     if (m_hasTargets) {
         const QString phrase = windowPhrase(windows.judged);
         if (season != m_itemsSeason || *focal != m_itemsFocal) {
             m_itemsSeason = season;
             m_itemsFocal = *focal;
-            auto rows = debriefRows(tr("Slipped over %1").arg(phrase), debriefed.slippedInWindow,
-                                    s->metricsById(), debriefed.previousMatchId, true);
-            auto inMatchOnly = debriefRows(tr("Slipped in this match alone"), debriefed.slippedInMatch,
-                                           s->metricsById(), debriefed.previousMatchId, false);
+            auto rows = debriefRows(tr("Off target over %1").arg(phrase), debriefed.slippedInWindow,
+                                    s->metricsById(), grid, debriefed.previousMatchId, true);
+            auto inMatchOnly = debriefRows(tr("Off target in this match alone"), debriefed.slippedInMatch,
+                                           s->metricsById(), grid, debriefed.previousMatchId, false);
             auto watch = debriefRows(tr("Likely off or close to the line over %1").arg(phrase), debriefed.watched, s->metricsById(),
-                                     debriefed.previousMatchId, false);
+                                     grid, debriefed.previousMatchId, false);
             auto unusual = debriefRows(tr("Unusual in this match alone"),
-                                       debriefed.unusualInMatch, s->metricsById(),
+                                       debriefed.unusualInMatch, s->metricsById(), grid,
                                        debriefed.previousMatchId, false);
             rows.insert(rows.end(), inMatchOnly.begin(), inMatchOnly.end());
             rows.insert(rows.end(), unusual.begin(), unusual.end());

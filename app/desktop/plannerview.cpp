@@ -511,7 +511,7 @@ void PlannerView::showPlan() {
             row.pinned = b.pinned;
             if (b.focus && *b.focus < m_request.focuses.size()) {
                 const PlanFocus& f = m_request.focuses[*b.focus];
-                row.focusText = focusTitle(f) + QStringLiteral(" · ") + zoneText(f.band, f.lane);
+                row.focusText = focusTitle(f) + QStringLiteral(" · ") + zoneText(f.band, f.lane, session()->grid());
             }
             row.why = qs(b.why);
             blocks.push_back(std::move(row));
@@ -525,7 +525,7 @@ void PlannerView::showPlan() {
             PlanFocusRow row;
             row.focusId = fm.focusId;
             row.title = focusTitle(f);
-            row.zoneText = zoneText(f.band, f.lane);
+            row.zoneText = zoneText(f.band, f.lane, session()->grid());
             row.severityText = tr("severity %1").arg(QLocale().toString(f.severity, 'f', 2));
             row.minutes = fm.minutes;
             row.minutesText = tr("%1 min").arg(fm.minutes);

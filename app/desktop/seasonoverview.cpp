@@ -78,12 +78,12 @@ void SeasonOverview::refresh() {
                            .arg(QLocale().toString(debriefed.seasonChanceFlags, 'f', 1))
                            .arg(debriefed.judged);
         const QString window = windowPhrase(debriefed.window);
-        auto rows = debriefRows(tr("Slipped over %1").arg(window), debriefed.slippedInWindow,
-                                s->metricsById(), debriefed.previousMatchId, true);
+        auto rows = debriefRows(tr("Off target over %1").arg(window), debriefed.slippedInWindow,
+                                s->metricsById(), s->grid(), debriefed.previousMatchId, true);
         auto watch = debriefRows(tr("Likely off or close to the line over %1").arg(window), debriefed.watched,
-                                 s->metricsById(), debriefed.previousMatchId, false);
+                                 s->metricsById(), s->grid(), debriefed.previousMatchId, false);
         auto back = debriefRows(tr("Back on target since %1").arg(QString::fromStdString(debriefed.previousMatchId)),
-                                debriefed.recovered, s->metricsById(), debriefed.previousMatchId, false);
+                                debriefed.recovered, s->metricsById(), s->grid(), debriefed.previousMatchId, false);
         rows.insert(rows.end(), watch.begin(), watch.end());
         rows.insert(rows.end(), back.begin(), back.end());
         m_items->reset(std::move(rows));

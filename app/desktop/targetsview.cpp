@@ -125,12 +125,13 @@ bool TargetsView::wholePitchSelected() const { return isSelected(0, 0); }
 
 QString TargetsView::selectionText() const {
     if (m_selected.empty()) return tr("no zone selected");
-    if (m_selected.size() == 1) return zoneText(m_selected.front().band, m_selected.front().lane);
+    if (m_selected.size() == 1)
+        return zoneText(m_selected.front().band, m_selected.front().lane, session() ? session()->grid() : ZoneGrid{});
     return tr("%1 zones selected").arg(m_selected.size());
 }
 
 QString TargetsView::focusText() const {
-    return m_hasFocus ? zoneText(m_focus.band, m_focus.lane) : QString();
+    return m_hasFocus ? zoneText(m_focus.band, m_focus.lane, session() ? session()->grid() : ZoneGrid{}) : QString();
 }
 
 QString TargetsView::focusTargetText() const {
@@ -349,6 +350,7 @@ void TargetsView::refresh() {
         TargetZone t;
         t.band = z.band;
         t.lane = z.lane;
+        t.zoneName = zoneText(z.band, z.lane, grid);
         const auto current = inForce(versionsOf(z.band, z.lane), on);
         t.hasTarget = current.has_value();
         t.targetText = current ? targetText(kind, current) : tr("no target");
@@ -372,7 +374,7 @@ void TargetsView::refresh() {
                                ZoneState::NoTarget, scaleLabels(kind, domain),
                                levelText(s->flagSettings().level)};
         if (wholeAchieved) h.wholePitchText = wholePitchLine(*wholeAchieved, kind);
-        m_lastSeasonMap->reset(std::move(h), zoneCells(cells, kind, domain));
+        m_lastSeasonMap->reset(std::move(h), zoneCells(cells, kind, domain, grid));
     } else {
         m_lastSeasonMap->clear();
     }

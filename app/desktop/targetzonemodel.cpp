@@ -26,7 +26,7 @@ QVariant TargetZoneModel::data(const QModelIndex& index, int role) const {
     case BandRole: return z.band;
     case LaneRole: return z.lane;
     case Qt::DisplayRole:
-    case ZoneNameRole: return zoneText(z.band, z.lane);
+    case ZoneNameRole: return z.zoneName;
     case HasTargetRole: return z.hasTarget;
     case TargetTextRole: return z.targetText;
     case HasLastSeasonRole: return z.hasLastSeason;

@@ -14,6 +14,7 @@ namespace pitchloop::desktop {
 struct TargetZone {
     int band = 0;
     int lane = 0;
+    QString zoneName;       ///< "Our left-back area (B2·L5)"
     bool hasTarget = false;
     QString targetText;     ///< "≥ 45.0%", "no target"
     bool hasLastSeason = false;

@@ -10,7 +10,7 @@ namespace pitchloop::desktop {
 using namespace pitchloop::model;
 
 std::vector<ZoneCell> zoneCells(const std::vector<const ZoneStatus*>& statuses, MetricKind kind,
-                                const ScaleDomain& domain) {
+                                const ScaleDomain& domain, const ZoneGrid& grid) {
     std::vector<ZoneCell> out;
     out.reserve(statuses.size());
     const long minSample = defaultMinSample(kind);
@@ -18,6 +18,7 @@ std::vector<ZoneCell> zoneCells(const std::vector<const ZoneStatus*>& statuses, 
         ZoneCell c;
         c.band = s->band;
         c.lane = s->lane;
+        c.zoneName = zoneText(s->band, s->lane, grid);
         c.hasValue = !std::isnan(s->value);
         c.value = c.hasValue ? s->value : 0;
         c.scaled = c.hasValue ? domain.position(s->value) : 0;
@@ -91,7 +92,7 @@ QVariant ZoneMapModel::data(const QModelIndex& index, int role) const {
     const ZoneCell& c = m_cells[static_cast<std::size_t>(index.row())];
     switch (role) {
     case Qt::DisplayRole:
-    case ZoneNameRole: return zoneText(c.band, c.lane);
+    case ZoneNameRole: return c.zoneName;
     case BandRole: return c.band;
     case LaneRole: return c.lane;
     case HasValueRole: return c.hasValue;

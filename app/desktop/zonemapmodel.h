@@ -18,6 +18,7 @@ namespace pitchloop::desktop {
 struct ZoneCell {
     int band = 0;
     int lane = 0;
+    QString zoneName; ///< "Our left-back area (B2·L5)"
     bool hasValue = false;
     double value = 0;
     double scaled = 0; ///< position on the colour scale, 0..1
@@ -34,7 +35,8 @@ struct ZoneCell {
 /// Builds the cells of one metric in one window from statuses; `domain` places values on the
 /// colour scale. Zones come in grid order (band-major).
 std::vector<ZoneCell> zoneCells(const std::vector<const model::ZoneStatus*>& statuses,
-                                model::MetricKind kind, const ScaleDomain& domain);
+                                model::MetricKind kind, const ScaleDomain& domain,
+                                const model::ZoneGrid& grid);
 
 /// The zones of one metric in one window (the whole pitch is a property, not a row).
 class ZoneMapModel : public QAbstractListModel {

@@ -134,7 +134,7 @@ void ZoneSeries::refresh() {
     const MetricKind kind = metric->kind();
     const AppWindows& w = season->windows();
     m_metricRow = s->metrics()->indexOf(m_metricId);
-    m_zoneText = desktop::zoneText(m_band, m_lane);
+    m_zoneText = desktop::zoneText(m_band, m_lane, grid);
     m_metricName = QString::fromStdString(metric->name.empty() ? metric->id : metric->name);
     m_metricQuestion = QString::fromStdString(metric->question);
     m_betterText = desktop::betterText(metric->better);
@@ -143,7 +143,7 @@ void ZoneSeries::refresh() {
     m_windowText = desktop::windowText(w.judged);
     m_ewmaText = desktop::windowText(w.ewma);
     m_levelText = desktop::levelText(s->flagSettings().level);
-    m_ruleText = tr("Slipped when the chance that the true value misses its target is at least "
+    m_ruleText = tr("Off target when the chance that the true value misses its target is at least "
                     "%1 over %2; Watch when the chance it misses the target's watch line is at "
                     "least %3.")
                      .arg(QLocale().toString(s->flagSettings().offThreshold, 'g', 4),
@@ -233,7 +233,7 @@ void ZoneSeries::refresh() {
         header.wholePitchText = wholePitchLine(*whole, kind);
         header.wholePitchState = ZoneState::from(whole->state);
     }
-    m_map->reset(std::move(header), zoneCells(zones, kind, domain));
+    m_map->reset(std::move(header), zoneCells(zones, kind, domain, grid));
     emit changed();
 }
 

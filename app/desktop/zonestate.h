@@ -1,5 +1,5 @@
 #pragma once
-// How a zone stands against its target, as QML sees it (ZoneState.Slipped, ...).
+// How a zone stands against its target, as QML sees it (ZoneState.OffTarget, ...).
 
 #include "status.h"
 
@@ -14,7 +14,7 @@ class ZoneState : public QObject {
     QML_ELEMENT
     QML_UNCREATABLE("ZoneState only names the states of a zone")
 public:
-    enum Value { NoTarget, OnTarget, CloseToLine, Slipped, TooLittleData, LikelyOff };
+    enum Value { NoTarget, OnTarget, CloseToLine, OffTarget, TooLittleData, LikelyOff };
     Q_ENUM(Value)
 
     static constexpr Value from(model::FlagState s) {
@@ -22,7 +22,7 @@ public:
         case model::FlagState::OnTarget: return OnTarget;
         case model::FlagState::CloseToLine: return CloseToLine;
         case model::FlagState::LikelyOff: return LikelyOff;
-        case model::FlagState::OffTarget: return Slipped;
+        case model::FlagState::OffTarget: return OffTarget;
         case model::FlagState::TooLittleData: return TooLittleData;
         case model::FlagState::NoTarget: return NoTarget;
         }

@@ -138,7 +138,7 @@ Item {
                 visible: tick.side !== 0 && !isNaN(tick.value)
                 x: (tick.width - width) / 2
                 y: root.yOf(tick.value) - height / 2
-                zoneState: tick.side > 0 ? ZoneState.OnTarget : ZoneState.Slipped
+                zoneState: tick.side > 0 ? ZoneState.OnTarget : ZoneState.OffTarget
                 size: 14
             }
             Label {

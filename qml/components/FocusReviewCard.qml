@@ -121,7 +121,7 @@ Card {
         }
         KeyEntry {
             text: qsTr("worse side")
-            StateMarker { zoneState: ZoneState.Slipped; size: 13; anchors.centerIn: parent }
+            StateMarker { zoneState: ZoneState.OffTarget; size: 13; anchors.centerIn: parent }
         }
     }
     Line { visible: root.view.hasReview; text: root.view.chartReadingText }

@@ -76,7 +76,7 @@ Rectangle {
                 text: root.label.length > 0 ? root.label : "–"
                 font.pixelSize: root.label.length > 8 ? Theme.fontBody : Theme.fontTitle
                 font.bold: true
-                color: root.matchDay ? Theme.slipped : Theme.text
+                color: root.matchDay ? Theme.offTarget : Theme.text
                 elide: Text.ElideRight
             }
             PlanCapPips {

@@ -85,11 +85,11 @@ Column {
         }
         Repeater {
             model: [
-                { state: ZoneState.Slipped, name: qsTr("Slipped") },
-                { state: ZoneState.LikelyOff, name: qsTr("Likely off") },
-                { state: ZoneState.CloseToLine, name: qsTr("Close to the line") },
-                { state: ZoneState.OnTarget, name: qsTr("On target") },
-                { state: ZoneState.TooLittleData, name: qsTr("Too little data") }
+                { state: ZoneState.OffTarget, name: Words.stateName(ZoneState.OffTarget) },
+                { state: ZoneState.LikelyOff, name: Words.stateName(ZoneState.LikelyOff) },
+                { state: ZoneState.CloseToLine, name: Words.stateName(ZoneState.CloseToLine) },
+                { state: ZoneState.OnTarget, name: Words.stateName(ZoneState.OnTarget) },
+                { state: ZoneState.TooLittleData, name: Words.stateName(ZoneState.TooLittleData) }
             ]
             delegate: Entry {
                 id: stateEntry

@@ -70,7 +70,7 @@ QtObject {
     }
 
     // Zone states (Okabe–Ito colours); shapes are drawn by StateMarker.
-    readonly property color slipped: "#d55e00"
+    readonly property color offTarget: "#d55e00"
     readonly property color watch: "#e69f00"
     readonly property color likelyOff: "#cc79a7"
     readonly property color onTarget: "#009e73"
@@ -78,7 +78,7 @@ QtObject {
 
     function stateColour(state: int): color {
         switch (state) {
-        case ZoneState.Slipped: return slipped
+        case ZoneState.OffTarget: return offTarget
         case ZoneState.CloseToLine: return watch
         case ZoneState.LikelyOff: return likelyOff
         case ZoneState.OnTarget: return onTarget

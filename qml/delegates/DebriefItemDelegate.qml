@@ -69,7 +69,7 @@ ItemDelegate {
             Layout.preferredWidth: 92
             text: root.stateText
             color: Theme.text
-            font.bold: root.zoneState === ZoneState.Slipped
+            font.bold: root.zoneState === ZoneState.OffTarget
         }
         ColumnLayout {
             Layout.fillWidth: true

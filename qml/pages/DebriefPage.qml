@@ -154,14 +154,14 @@ Page {
         }
 
         DebriefListCard {
-            title: debrief.hasTargets ? qsTr("Targets that slipped, are likely off or close to the line, most certain first")
+            title: debrief.hasTargets ? qsTr("Zones off target, likely off or close to the line, most certain first")
                                       : qsTr("Targets")
             Layout.fillWidth: true
             Layout.fillHeight: true
             lines: debrief.items
             note: debrief.judgedText
             emptyText: debrief.hasTargets
-                       ? qsTr("Nothing slipped, likely off or close to the line after this match.")
+                       ? qsTr("Nothing off target, likely off or close to the line after this match.")
                        : qsTr("No targets set for this season yet, so nothing is judged; the maps show the values alone.")
             selectedMetric: debrief.metricId
             selectedBand: debrief.selectedBand > 0 ? debrief.selectedBand : -1

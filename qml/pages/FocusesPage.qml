@@ -97,7 +97,7 @@ Page {
                     wrapMode: Text.WordWrap
                     color: Theme.text
                     text: board.hasMatches
-                          ? qsTr("No focuses yet. Open one on a slipped zone with “Open a focus…” (Ctrl+N), or from a match's debrief.")
+                          ? qsTr("No focuses yet. Open one on a zone off target with “Open a focus…” (Ctrl+N), or from a match's debrief.")
                           : qsTr("No matches in this club file yet. A focus opens from a match's flag: load match files first on the “Load matches” page.")
                 }
             }
@@ -276,7 +276,7 @@ Page {
                 horizontalAlignment: Text.AlignHCenter
                 wrapMode: Text.WordWrap
                 color: Theme.text
-                text: qsTr("A focus turns a slipped target into training work: the metric and zones, drills for it, and a review point. After the review point the page compares the matches before and after it and asks for the staff's verdict.")
+                text: qsTr("A focus turns a target that is off into training work: the metric and zones, drills for it, and a review point. After the review point the page compares the matches before and after it and asks for the staff's verdict.")
             }
         }
     }

@@ -196,7 +196,7 @@ Page {
                 RowLayout {
                     visible: overview.hasTargets
                     spacing: Theme.margin
-                    FigureTile { value: overview.slippedCount; caption: qsTr("slipped"); zoneState: ZoneState.Slipped }
+                    FigureTile { value: overview.slippedCount; caption: qsTr("off target"); zoneState: ZoneState.OffTarget }
                     FigureTile { value: overview.watchCount; caption: qsTr("likely off or close"); zoneState: ZoneState.CloseToLine }
                     FigureTile { value: overview.recoveredCount; caption: qsTr("back on target"); zoneState: ZoneState.OnTarget }
                 }
@@ -236,7 +236,7 @@ Page {
                           : qsTr("%n open", "", agenda.openFocusCount)
                             + (agenda.dueCount > 0 ? qsTr(" · %n due for review", "", agenda.dueCount) : "")
                 detail: agenda.focusLines.length > 0 ? agenda.focusLines[0]
-                        : qsTr("Open one from a slipped zone in the match debrief")
+                        : qsTr("Open one from a zone off target in the match debrief")
                 action: qsTr("Focuses and reviews →")
                 page: "focuses"
             }
@@ -249,7 +249,7 @@ Page {
             Layout.fillHeight: true
             lines: overview.items
             emptyText: overview.hasTargets
-                       ? qsTr("Nothing slipped, on watch or back on target over %1.").arg(overview.windowText.toLowerCase())
+                       ? qsTr("Nothing off target, on watch or back on target over %1.").arg(overview.windowText.toLowerCase())
                        : qsTr("No targets are set for this season, so the debrief has nothing to judge. "
                               + "Set them on the Season targets page (Ctrl+3).")
             onLineClicked: (metricId, band, lane) => root.openZone(metricId, band, lane, overview.lastMatchId)

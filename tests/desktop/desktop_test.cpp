@@ -186,7 +186,7 @@ void DesktopTest::debriefMaps() {
         }
         QCOMPARE(inWindow.value(QStringLiteral("value")).toDouble(), std::isnan(b.value) ? 0 : b.value);
         QCOMPARE(inWindow.value(QStringLiteral("zoneState")).toInt(), static_cast<int>(ZoneState::from(b.state)));
-        QCOMPARE(inWindow.value(QStringLiteral("zoneName")).toString(), zoneText(band, lane));
+        QCOMPARE(inWindow.value(QStringLiteral("zoneName")).toString(), zoneText(band, lane, model::ZoneGrid{}));
         const double scaled = inWindow.value(QStringLiteral("scaled")).toDouble();
         QVERIFY(scaled >= 0 && scaled <= 1);
     }
@@ -252,8 +252,8 @@ void DesktopTest::debriefList() {
         section = s;
     }
     if (!reference.slippedInWindow.empty()) {
-        QCOMPARE(role(*items, 0, "zoneState").toInt(), static_cast<int>(ZoneState::Slipped));
-        QCOMPARE(role(*items, 0, "stateText").toString(), QStringLiteral("Slipped"));
+        QCOMPARE(role(*items, 0, "zoneState").toInt(), static_cast<int>(ZoneState::OffTarget));
+        QCOMPARE(role(*items, 0, "stateText").toString(), QStringLiteral("Off target"));
         QCOMPARE(role(*items, 0, "metricId").toString(),
                  QString::fromStdString(reference.slippedInWindow.front().now.metric));
     }
@@ -323,7 +323,7 @@ void DesktopTest::zoneSeries() {
     QCOMPARE(series->values().size(), kMatches);
     // Rates are drawn on an axis inside 0–100 %.
     QVERIFY(series->axisLow() >= 0 && series->axisHigh() <= 1 && series->axisLow() < series->axisHigh());
-    QCOMPARE(trend.zoneText(), QStringLiteral("Band 5 · lane 1"));
+    QCOMPARE(trend.zoneText(), QStringLiteral("Right wing in their third (B5·L1)"));
     QCOMPARE(series->point(0).value(QStringLiteral("matchId")).toString(), QStringLiteral("KB-2026-01"));
     QVERIFY(series->point(kMatches).isEmpty());
 
@@ -401,10 +401,11 @@ void DesktopTest::valueTexts() {
     QCOMPARE(valueText(MetricKind::Count, NAN), QStringLiteral("–"));
     QCOMPARE(intervalText(MetricKind::Rate, {0.401, 0.642}), QStringLiteral("40.1–64.2%"));
     QCOMPARE(intervalText(MetricKind::Count, {5.0, 9.05}), QStringLiteral("5.0–9.1"));
-    QCOMPARE(zoneText(0, 0), QStringLiteral("Whole pitch"));
-    QCOMPARE(zoneText(2, 5), QStringLiteral("Band 2 · lane 5"));
+    QCOMPARE(zoneText(0, 0, model::ZoneGrid{}), QStringLiteral("Whole pitch"));
+    QCOMPARE(zoneText(2, 5, model::ZoneGrid{}), QStringLiteral("Our left-back area (B2·L5)"));
+    QCOMPARE(zoneText(2, 4, model::ZoneGrid{}), QStringLiteral("Left half-space in our third (B2·L4)"));
     QCOMPARE(levelText(0.9), QStringLiteral("90% interval"));
-    QCOMPARE(certaintyText(0.9996), QStringLiteral("P(miss) 1.000"));
+    QCOMPARE(certaintyText(0.9996), QStringLiteral("P(miss) > 0.999"));
     QCOMPARE(certaintyText(0.64), QStringLiteral("P(miss) 0.64"));
     QVERIFY(certaintyText(NAN).isEmpty());
 }
@@ -554,7 +555,7 @@ void DesktopTest::pitchHoverShowsNumbers() {
                    static_cast<int>(top + (2.5 + 68 - 6.8) * scale));
     QTest::mouseMove(&view, p);
     const QVariantMap zone = debrief.windowMap()->zone(5, 1);
-    QTRY_VERIFY(map->property("captionText").toString().startsWith(QStringLiteral("Band 5 · lane 1")));
+    QTRY_VERIFY(map->property("captionText").toString().startsWith(QStringLiteral("Right wing in their third (B5·L1)")));
     const QString caption = map->property("captionText").toString();
     QVERIFY2(caption.contains(zone.value(QStringLiteral("valueText")).toString()), qPrintable(caption));
     QVERIFY2(caption.contains(zone.value(QStringLiteral("sampleText")).toString()), qPrintable(caption));
@@ -567,7 +568,7 @@ void DesktopTest::pitchHoverShowsNumbers() {
     QTest::mouseMove(&view, QPoint(static_cast<int>(left + 1.0 * scale), p.y()));
     map->setProperty("selectedBand", 2);
     map->setProperty("selectedLane", 3);
-    QTRY_VERIFY(map->property("captionText").toString().startsWith(QStringLiteral("Band 2 · lane 3")));
+    QTRY_VERIFY(map->property("captionText").toString().startsWith(QStringLiteral("In front of our box (B2·L3)")));
 }
 
 int main(int argc, char* argv[]) {

@@ -135,7 +135,7 @@ void DrillBookViewTest::listAndFilters() {
     const model::ZoneGrid grid = m_reference->tallyGrid();
     const int zoneRow = grid.indexOf({2, 5}) + 1; // option 0 is "any zone"
     QCOMPARE(view.zoneOptions().at(zoneRow).toMap().value(QStringLiteral("text")).toString(),
-             QStringLiteral("Band 2 · lane 5"));
+             QStringLiteral("Our left-back area (B2·L5)"));
     view.setZoneFilter(zoneRow);
     byMetric.zone = model::Zone{2, 5};
     QCOMPARE(shownIds(*view.drills()), idsOf(reference().search(byMetric)));

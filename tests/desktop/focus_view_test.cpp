@@ -177,7 +177,7 @@ void FocusViewTest::openFromZone() {
     view.openFromZone(QString::fromStdString(kMetric), 2, 5, QStringLiteral("KB-2026-08"));
     QVERIFY(view.drafting());
     QCOMPARE(view.draftMatchId(), QStringLiteral("KB-2026-08"));
-    QCOMPARE(view.draftZonesText(), QStringLiteral("Band 2 · lane 5"));
+    QCOMPARE(view.draftZonesText(), QStringLiteral("Our left-back area (B2·L5)"));
     QCOMPARE(view.draftMap()->rowCount(), m_reference->tallyGrid().zoneCount());
     QCOMPARE(view.draftEvidence()->rowCount(), 3); // the match, the judged window, the season
     // The demo story: the left-back zone slipped at match 8.
@@ -238,7 +238,7 @@ void FocusViewTest::openFromZone() {
     QCOMPARE(view.focuses()->rowCount(), 1);
     QCOMPARE(view.evidence()->rowCount(), 3);
     QCOMPARE(view.linked()->rowCount(), 2);
-    QCOMPARE(role(*view.evidence(), 1, "zoneText").toString(), QStringLiteral("Band 2 · lane 5"));
+    QCOMPARE(role(*view.evidence(), 1, "zoneText").toString(), QStringLiteral("Our left-back area (B2·L5)"));
 }
 
 void FocusViewTest::listAndTrainingMinutes() {

@@ -231,7 +231,7 @@ TEST_CASE("an unknown key is named with its path") {
             "per": "match", "colour": "red"})");
         expectProblem(p, "colour", "unknown key");
         // The message lists what is allowed.
-        expectProblem(p, "colour", "better, id, items, name, per, question, success");
+        expectProblem(p, "colour", "better, id, items, name, per, question, sentence, success");
     }
     SECTION("in items") {
         const auto p = errorsOf(R"({"id": "x", "better": "higher",

@@ -72,21 +72,21 @@ TestCase {
     }
 
     function test_statesAndSwatchesOnRequest() {
-        for (const name of ["Slipped", "Likely off", "Close to the line", "On target", "Too little data", "no items"])
+        for (const name of ["Off target", "Likely off", "Close to the line", "On target", "Too little data", "no items"])
             verify(shown(name), name + " shown")
         legend.showStates = false
         legend.showSwatches = false
-        for (const name of ["Slipped", "Likely off", "Close to the line", "On target", "Too little data", "no items"])
+        for (const name of ["Off target", "Likely off", "Close to the line", "On target", "Too little data", "no items"])
             verify(!shown(name), name + " hidden")
         verify(shown(legend.title))
     }
 
     function test_compactPutsTheKeyBelow() {
         const scale = shown("20%")
-        const state = shown("Slipped")
+        const state = shown("Off target")
         verify(state.mapToItem(legend, 0, 0).x > scale.mapToItem(legend, 0, 0).x + 200, "wide: key beside")
         legend.compact = true
         waitForRendering(legend)
-        verify(shown("Slipped").mapToItem(legend, 0, 0).y > shown("20%").mapToItem(legend, 0, 0).y, "compact: key below")
+        verify(shown("Off target").mapToItem(legend, 0, 0).y > shown("20%").mapToItem(legend, 0, 0).y, "compact: key below")
     }
 }
