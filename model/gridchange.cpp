@@ -3,6 +3,7 @@
 #include "drills.h"
 #include "focus.h"
 #include "repository.h"
+#include "zonenames.h"
 
 #include <map>
 #include <set>
@@ -14,9 +15,7 @@ namespace {
 
 using SeasonMetric = std::tuple<std::string, std::string, std::string>;
 
-std::string zoneWords(Zone z) {
-    return "band " + std::to_string(z.band) + " lane " + std::to_string(z.lane);
-}
+std::string zoneWords(Zone z, const ZoneGrid& grid) { return zoneLabel(z.band, z.lane, grid); }
 
 } // namespace
 
@@ -67,7 +66,7 @@ TargetCarry carryTargets(const std::vector<Target>& onFrom, const std::vector<Ta
                 c.key.lane = z.lane;
                 c.version = 0;
                 c.rationale += (c.rationale.empty() ? "" : " ") + std::string("[carried from ") +
-                               zoneWords(src) + " of " + from.name() + " when the grid became " +
+                               zoneWords(src, from) + " of " + from.name() + " when the grid became " +
                                to.name() + "]";
                 out.versions.push_back(std::move(c));
             }

@@ -3,6 +3,8 @@
 #include "focus.h"
 #include "repository.h"
 #include "status.h"
+#include "wording.h"
+#include "zonenames.h"
 
 #include <algorithm>
 #include <array>
@@ -58,6 +60,8 @@ std::optional<PlanFocus> planFocus(const Focus& focus, const MetricSpec& metric,
         PlanFocus p;
         p.id = focus.id;
         p.metric = focus.metric;
+        p.metricName = metric.name.empty() ? metric.id : metric.name;
+        p.zoneName = zoneLabel(s.band, s.lane, grid);
         p.zones = focus.zones;
         p.linkedDrills = focus.drills;
         p.kind = metric.kind();
@@ -123,19 +127,7 @@ std::string quoted(const Drill& d) {
 }
 
 std::string valueText(MetricKind kind, double v) {
-    char buf[48];
-    if (kind == MetricKind::Rate)
-        std::snprintf(buf, sizeof buf, "%.1f %%", 100 * v);
-    else if (kind == MetricKind::Count)
-        std::snprintf(buf, sizeof buf, "%.1f a match", v);
-    else
-        std::snprintf(buf, sizeof buf, "%.2f per exposure", v);
-    return buf;
-}
-
-std::string zoneText(int band, int lane) {
-    if (band == 0 && lane == 0) return "whole pitch";
-    return "band " + std::to_string(band) + " lane " + std::to_string(lane);
+    return words::value(kind, v) + (kind == MetricKind::Count ? " a match" : kind == MetricKind::Exposure ? " per exposure" : "");
 }
 
 /// Credited minutes of `minutes` on one focus, in half-minute points: 2 a minute for the
@@ -387,18 +379,18 @@ std::string whyLine(const PlanBlock& b, const Candidate& c, const PlanRequest& r
     if (b.role == BlockRole::CoolDown) s += "cool-down; ";
     if (b.focus) {
         const PlanFocus& f = req.focuses[*b.focus];
-        char nums[200];
-        std::snprintf(nums, sizeof nums, " (P(miss) %.2f)", f.pMiss);
-        s += "focus " + (f.id ? std::to_string(f.id) + " " : std::string()) + f.metric + " " +
-             zoneText(f.band, f.lane) + ": " + valueText(f.kind, f.value) + " against " +
+        s += "focus " + (f.id ? std::to_string(f.id) + ", " : std::string()) +
+             (f.metricName.empty() ? f.metric : f.metricName) + " in " +
+             (f.zoneName.empty() ? zoneCode(f.band, f.lane) : f.zoneName) + ": " +
+             valueText(f.kind, f.value) + " against " +
              (f.direction == Direction::AtLeast ? "at least " : "at most ") +
-             valueText(f.kind, f.target) + nums + " — this drill ";
+             valueText(f.kind, f.target) + " (P(miss) " + words::probability(f.pMiss) + ") — this drill ";
         if (contains(f.linkedDrills, c.drill->id))
             s += "is linked to the focus";
         else if (c.drill->zones.empty())
-            s += "works on " + f.metric + " over the whole pitch";
+            s += "works on " + (f.metricName.empty() ? f.metric : f.metricName) + " over the whole pitch";
         else
-            s += "works on " + f.metric + " in the focus's zones";
+            s += "works on " + (f.metricName.empty() ? f.metric : f.metricName) + " in the focus's zones";
         if (!b.alsoFocuses.empty())
             s += "; also covers " + std::to_string(b.alsoFocuses.size()) +
                  (b.alsoFocuses.size() == 1 ? " more focus" : " more focuses");

@@ -50,6 +50,8 @@ double severity(Direction direction, MetricKind kind, double value, double targe
 struct PlanFocus {
     std::int64_t id = 0; ///< the stored focus (0: not stored)
     std::string metric;
+    std::string metricName; ///< as people read it ("Their passes before their shots")
+    std::string zoneName;   ///< the zone below as people read it ("our left-back area (B2·L5)")
     std::vector<Zone> zones;                ///< zones a drill may work on to count for this focus
     std::vector<std::int64_t> linkedDrills; ///< drills the coach linked to the focus
     MetricKind kind = MetricKind::Rate;

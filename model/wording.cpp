@@ -77,6 +77,13 @@ std::string count(double v) {
     return fixed(v, std::abs(v - std::round(v)) < 0.005 ? 0 : 1);
 }
 
+std::string grouped(double v) {
+    if (std::isnan(v)) return "–";
+    std::string digits = fixed(std::abs(std::round(v)), 0);
+    for (int at = static_cast<int>(digits.size()) - 3; at > 0; at -= 3) digits.insert(static_cast<std::size_t>(at), ",");
+    return (v <= -0.5 ? "-" : "") + digits;
+}
+
 std::string value(MetricKind kind, double v) {
     switch (kind) {
     case MetricKind::Rate: return rate(v);
@@ -134,7 +141,7 @@ std::string howSure(FlagState state) {
 std::string coachSentence(const MetricSpec& metric, const ZoneStatus& status, const ZoneGrid& grid) {
     const MetricKind kind = metric.kind();
     const std::string zone =
-        status.band == 0 && status.lane == 0 ? "the whole pitch" : zoneFootballName(status.band, status.lane, grid);
+        zonePhrase(status.band, status.lane, grid);
     std::string text;
     if (!metric.sentence.empty()) {
         text = metric.sentence;

@@ -37,6 +37,8 @@ std::string capitalised(std::string text);
 std::string rate(double share);
 /// A count a match: whole numbers without decimals ("3"), else one decimal ("6.8"); "–" for NaN.
 std::string count(double value);
+/// A whole number with thousands grouped: "6,889".
+std::string grouped(double v);
 /// A value of a metric of `kind`: rate(), count(), or two decimals for per-exposure values.
 std::string value(MetricKind kind, double v);
 /// A value's interval: "40.1–64.2%", "4.8–9.4"; "–" when open or undefined.

@@ -20,6 +20,10 @@ std::string zoneCode(int band, int lane);
 /// our third, midfield, their third and their box. "whole pitch" for band 0, lane 0.
 std::string zoneFootballName(int band, int lane, const ZoneGrid& grid);
 
+/// The same name inside a sentence, with its article: "the right half-space in their third",
+/// "the space in front of our box", "our left-back area", "the whole pitch".
+std::string zonePhrase(int band, int lane, const ZoneGrid& grid);
+
 /// The name used on every screen and sheet: "our left-back area (B2·L5)"; "whole pitch".
 std::string zoneLabel(int band, int lane, const ZoneGrid& grid);
 

@@ -1,5 +1,8 @@
 #include "common.h"
 
+#include "wording.h"
+#include "zonenames.h"
+
 #include "clock.h"
 
 #include <nlohmann/json.hpp>
@@ -70,17 +73,8 @@ std::optional<Zone> parseZone(const std::string& text) {
     }
 }
 
-std::string zoneName(int band, int lane) {
-    if (band == 0 && lane == 0) return "whole pitch";
-    return "band " + std::to_string(band) + " lane " + std::to_string(lane);
-}
+std::string zoneName(int band, int lane, const ZoneGrid& grid) { return zoneLabel(band, lane, grid); }
 
-std::string formatValue(MetricKind kind, double value) {
-    if (std::isnan(value)) return "-";
-    char buf[32];
-    if (kind == MetricKind::Rate) std::snprintf(buf, sizeof buf, "%.1f%%", 100 * value);
-    else std::snprintf(buf, sizeof buf, "%.2f", value);
-    return buf;
-}
+std::string formatValue(MetricKind kind, double value) { return words::value(kind, value); }
 
 } // namespace pitchloop::cli

@@ -34,10 +34,12 @@ std::optional<double> parseNumber(const std::string& text);
 /// Reads "B,L" into a zone; nullopt when malformed.
 std::optional<model::Zone> parseZone(const std::string& text);
 
-/// "band 2 lane 5" or "whole pitch".
-std::string zoneName(int band, int lane);
+/// A zone of `grid` as the app and the sheets name it: "our left-back area (B2·L5)", "whole
+/// pitch" (model/zonenames.h).
+std::string zoneName(int band, int lane, const model::ZoneGrid& grid);
 
-/// A value in its metric's unit for people: "45.2%" for rates, "2.40" otherwise.
+/// A value in its metric's unit for people, as everywhere (model/wording.h): "45.2%", "6.8",
+/// "0.15"; "–" without one.
 std::string formatValue(model::MetricKind kind, double value);
 
 } // namespace pitchloop::cli

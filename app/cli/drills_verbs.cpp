@@ -131,11 +131,12 @@ std::string metresText(double v) {
     return buf;
 }
 
-std::vector<std::string> zoneTexts(const Drill& d, const std::string& form) {
+/// "2,5" for machine formats; with a grid, the zone's name on it.
+std::vector<std::string> zoneTexts(const Drill& d, const ZoneGrid* grid = nullptr) {
     std::vector<std::string> out;
     for (const Zone& z : d.zones)
-        out.push_back(form == "name" ? zoneName(z.band, z.lane)
-                                     : std::to_string(z.band) + "," + std::to_string(z.lane));
+        out.push_back(grid ? zoneName(z.band, z.lane, *grid)
+                           : std::to_string(z.band) + "," + std::to_string(z.lane));
     return out;
 }
 
@@ -481,7 +482,7 @@ int DrillVerbs::runList(DrillBook& book, bool search, std::ostream& out, std::os
                 << ',' << d.playersMin << ',' << d.playersMax << ','
                 << (d.hasArea() ? metresText(d.areaLengthM) : "") << ','
                 << (d.hasArea() ? metresText(d.areaWidthM) : "") << ','
-                << csvField(join(d.metrics, ";")) << ',' << csvField(join(zoneTexts(d, ""), ";"))
+                << csvField(join(d.metrics, ";")) << ',' << csvField(join(zoneTexts(d), ";"))
                 << ',' << csvField(join(d.tags, ";")) << ',' << csvField(d.author) << ','
                 << d.editedAt << ',' << d.versionCount << ',' << (d.deleted ? 1 : 0) << "\n";
         return kExitOk;
@@ -545,7 +546,8 @@ int DrillVerbs::runShow(DrillBook& book, std::ostream& out, std::ostream& err) {
          d.hasArea() ? metresText(d.areaLengthM) + " × " + metresText(d.areaWidthM) + " m" : "-");
     line("equipment", d.equipment.empty() ? "-" : join(d.equipment, ", "));
     line("metrics", d.metrics.empty() ? "-" : join(d.metrics, ", "));
-    line("zones", d.zones.empty() ? "-" : join(zoneTexts(d, "name"), ", "));
+    const ZoneGrid grid = book.grid();
+    line("zones", d.zones.empty() ? "-" : join(zoneTexts(d, &grid), ", "));
     line("tags", d.tags.empty() ? "-" : join(d.tags, ", "));
     line("author", d.author);
     line("created", d.createdAt);

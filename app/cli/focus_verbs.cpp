@@ -4,6 +4,7 @@
 #include "focus.h"
 #include "format.h"
 #include "sessions.h"
+#include "wording.h"
 
 #include <SQLiteCpp/Column.h>
 #include <SQLiteCpp/Statement.h>
@@ -18,9 +19,9 @@ using namespace pitchloop::model;
 
 namespace {
 
-std::string zonesText(const std::vector<Zone>& zones) {
+std::string zonesText(const std::vector<Zone>& zones, const ZoneGrid& grid) {
     std::string s;
-    for (const auto& z : zones) s += (s.empty() ? "" : ", ") + zoneName(z.band, z.lane);
+    for (const auto& z : zones) s += (s.empty() ? "" : ", ") + zoneName(z.band, z.lane, grid);
     return s;
 }
 
@@ -165,12 +166,12 @@ int FocusVerbs::runOpen(ClubRepository& repo, std::ostream& out, std::ostream& e
         err << "note: focus " << other << " on " << metric->id
             << " and the same zone is still open; their reviews will count the same matches\n";
     if (!slipped)
-        err << "note: " << zonesText(whole ? std::vector<Zone>{{0, 0}} : zones) << " of "
+        err << "note: " << zonesText(whole ? std::vector<Zone>{{0, 0}} : zones, grid) << " of "
             << metric->id << " is neither off target, likely off nor close to the line over " << settings.window.name()
             << " at " << m_match << "; the focus is opened anyway\n";
     out << id << "\n";
     err << "opened focus " << id << " on " << metric->id << " ("
-        << (whole ? "whole pitch" : zonesText(zones)) << ") from " << start << ", review after "
+        << (whole ? "whole pitch" : zonesText(zones, grid)) << ") from " << start << ", review after "
         << m_reviewAfter << " matches" << (m_reviewOn.empty() ? "" : " or on " + m_reviewOn)
         << ", " << m_drills.size() << " drills linked\n";
     return kExitOk;
@@ -217,7 +218,7 @@ int FocusVerbs::runList(ClubRepository& repo, std::ostream& out) {
         std::snprintf(line, sizeof line, "%3lld  %-15s %-24s %-28s from %s  %d/%d matches  %zu drills%s\n",
                       static_cast<long long>(f.id), std::string(toString(state)).c_str(),
                       f.metric.c_str(),
-                      (f.zones.size() > 3 ? std::to_string(f.zones.size()) + " zones" : zonesText(f.zones)).c_str(),
+                      (f.zones.size() > 3 ? std::to_string(f.zones.size()) + " zones" : zonesText(f.zones, f.grid)).c_str(),
                       f.startDate.c_str(), since, f.reviewAfterMatches, f.drills.size(),
                       f.verdict.empty() ? "" : ("  verdict: " + f.verdict).c_str());
         out << line;
@@ -234,7 +235,7 @@ int FocusVerbs::runShow(ClubRepository& repo, std::ostream& out, std::ostream& e
         return kExitBadInput;
     }
     const auto season = repo.seasonTallies(f->squad, f->season);
-    out << "Focus " << f->id << ": " << f->metric << " in " << zonesText(f->zones)
+    out << "Focus " << f->id << ": " << f->metric << " in " << zonesText(f->zones, f->grid)
         << (f->grid == repo.tallyGrid() ? "" : " of " + f->grid.name() + " (the grid it was opened on)")
         << "\n"
         << "  " << f->squad << " " << f->season << ", opened by " << f->openedBy << " after "
@@ -260,11 +261,17 @@ int FocusVerbs::runShow(ClubRepository& repo, std::ostream& out, std::ostream& e
     };
     for (const auto& z : evidence["zones"]) {
         char line[300];
-        std::snprintf(line, sizeof line, "    %-16s %-8s %9s [%s–%s]  %-16s P(miss) %s\n",
-                      zoneName(z["band"], z["lane"]).c_str(), z["window"].get<std::string>().c_str(),
-                      value(z["value"]).c_str(), value(z["low"]).c_str(), value(z["high"]).c_str(),
-                      z["state"].get<std::string>().c_str(),
-                      z["p_miss"].is_null() ? "-" : std::to_string(z["p_miss"].get<double>()).substr(0, 5).c_str());
+        const auto state = flagStateFromString(z["state"].get<std::string>());
+        const auto window = Window::parse(z["window"].get<std::string>());
+        std::snprintf(line, sizeof line, "    %-44s %-18s %9s [%s]  %-18s P(miss) %s\n",
+                      zoneName(z["band"], z["lane"], f->grid).c_str(),
+                      window ? words::windowName(*window).c_str() : z["window"].get<std::string>().c_str(),
+                      value(z["value"]).c_str(),
+                      z["low"].is_null() || z["high"].is_null()
+                          ? "–"
+                          : words::interval(kind, {z["low"].get<double>(), z["high"].get<double>()}).c_str(),
+                      state ? words::stateName(*state).c_str() : z["state"].get<std::string>().c_str(),
+                      z["p_miss"].is_null() ? "–" : words::probability(z["p_miss"].get<double>()).c_str());
         out << line;
     }
     if (!f->verdict.empty())
@@ -350,7 +357,7 @@ int FocusVerbs::runReview(ClubRepository& repo, std::ostream& out, std::ostream&
                       formatValue(kind, w.interval.high).c_str());
         out << line;
     };
-    out << "Focus " << f->id << ": " << r.metric << " in " << zonesText(r.zones) << " ("
+    out << "Focus " << f->id << ": " << r.metric << " in " << zonesText(r.zones, f->grid) << " ("
         << toString(kind) << ", " << toString(r.better) << " is better), training from "
         << f->startDate << "\n";
     if (r.before.matchIds.empty()) out << "before  none: " << r.baselineNote << "\n";

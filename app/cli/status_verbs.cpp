@@ -3,6 +3,8 @@
 #include "gridchange.h"
 #include "format.h"
 #include "verbs.h"
+#include "wording.h"
+#include "zonenames.h"
 
 #include <nlohmann/json.hpp>
 
@@ -53,8 +55,8 @@ std::string num(double v) {
 }
 
 std::string targetText(MetricKind kind, const std::optional<Target>& t) {
-    if (!t) return "-";
-    return std::string(t->direction == Direction::AtLeast ? "≥ " : "≤ ") + formatValue(kind, t->value);
+    if (!t) return "–";
+    return words::target(t->direction, kind, t->value);
 }
 
 std::string pad(const std::string& s, std::size_t width) {
@@ -210,9 +212,9 @@ int StatusVerbs::runStatus(ClubRepository& repo, std::ostream& out, std::ostream
     out << m_match << "  " << run->summary.date << "  v " << run->summary.opponent << "  — "
         << run->squad << " " << run->season << ", match " << run->focal + 1 << " of "
         << run->seasonMatches << " stored; intervals at " << num(100 * settings.level)
-        << " %\n\n";
-    out << pad("metric", 25) << pad("zone", 18) << pad("window", 8) << pad("num/den", 13)
-        << pad("value", 8) << pad("interval", 16) << pad("target", 10) << pad("state", 16)
+        << "%\n\n";
+    out << pad("metric", 25) << pad("zone", 44) << pad("window", 8) << pad("num/den", 13)
+        << pad("value", 8) << pad("interval", 16) << pad("target", 10) << pad("state", 18)
         << "P(miss)\n";
     std::set<std::pair<std::string, std::pair<int, int>>> withTarget;
     for (const auto& s : statuses)
@@ -225,11 +227,12 @@ int StatusVerbs::runStatus(ClubRepository& repo, std::ostream& out, std::ostream
         char nd[32];
         std::snprintf(nd, sizeof nd, s.window.kind == Window::Kind::Ewma ? "%.1f/%.1f" : "%.0f/%.0f",
                       s.sum.num, s.sum.den);
-        out << pad(s.metric, 25) << pad(zoneName(s.band, s.lane), 18) << pad(s.window.name(), 8)
-            << pad(nd, 13) << pad(formatValue(kind, s.value), 8)
-            << pad(formatValue(kind, s.interval.low) + "–" + formatValue(kind, s.interval.high), 16)
-            << pad(targetText(kind, s.target), 10) << pad(std::string(toString(s.state)), 16)
-            << (std::isnan(s.pMiss) ? "" : num(std::round(s.pMiss * 1000) / 1000)) << "\n";
+        out << pad(s.metric, 25) << pad(zoneName(s.band, s.lane, grid), 44) << pad(s.window.name(), 8)
+            << pad(nd, 13) << pad(words::value(kind, s.value), 8)
+            << pad(words::interval(kind, s.interval), 16) << pad(targetText(kind, s.target), 10)
+            << pad(words::stateName(s.state), 18)
+            << (s.target && s.state != FlagState::TooLittleData ? words::probability(s.pMiss) : "")
+            << "\n";
     }
     return kExitOk;
 }
@@ -258,46 +261,39 @@ int StatusVerbs::runDebrief(ClubRepository& repo, std::ostream& out, std::ostrea
             settings.window.kind == Window::Kind::LastN && c->focal + 1 > static_cast<std::size_t>(settings.window.n)
                 ? c->focal + 1 - static_cast<std::size_t>(settings.window.n)
                 : 0;
-        out << "Judged over " << settings.window.name() << " (" << c->tallies.matchIds[first]
-            << " … " << m.id << "), off target when P(miss) ≥ " << num(d.offThreshold)
+        out << "Judged over " << words::windowName(settings.window) << " (" << c->tallies.matchIds[first]
+            << " … " << m.id << "): off target when P(miss) ≥ " << num(d.offThreshold)
             << (settings.falseFlagsPerSeason > 0
                     ? " (about " + num(settings.falseFlagsPerSeason) + " false flag" +
                           (settings.falseFlagsPerSeason == 1 ? "" : "s") + " a season across " +
                           std::to_string(d.seriesWithTargets) + " targets)"
                     : std::string())
             << (settings.fdr ? ", with Benjamini–Hochberg at q = " + num(settings.fdrQ) : "")
-            << "; intervals at " << num(100 * settings.level) << " %.\n\n";
-        auto line = [&](const DebriefItem& item, bool markNew, bool showState) {
+            << "; intervals at " << num(100 * settings.level) << "%.\n\n";
+        // Each zone as the app's debrief list shows it: metric and zone, the coach's sentence,
+        // the analyst's line (model/wording.h).
+        auto line = [&](const DebriefItem& item, bool markNew) {
             const ZoneStatus& s = item.now;
-            const MetricKind kind = byId[s.metric].kind();
-            std::string unit = kind == MetricKind::Count ? " a match" : "";
-            char buf[400];
-            std::snprintf(buf, sizeof buf,
-                          "  %-24s %-18s %8s%s [%s–%s] n=%s  target %s  P(miss) %.3f%s%s\n",
-                          s.metric.c_str(), zoneName(s.band, s.lane).c_str(),
-                          formatValue(kind, s.value).c_str(), unit.c_str(),
-                          formatValue(kind, s.interval.low).c_str(),
-                          formatValue(kind, s.interval.high).c_str(),
-                          kind == MetricKind::Count ? (std::to_string(s.sum.matches) + " matches").c_str()
-                                                    : num(s.sum.den).c_str(),
-                          targetText(kind, s.target).c_str(), s.pMiss,
-                          markNew && item.before != FlagState::OffTarget && !d.previousMatchId.empty()
-                              ? "  NEW"
-                              : "",
-                          item.before ? ("  (was " + std::string(toString(*item.before)) + ")").c_str()
-                                      : "");
-            std::string text = buf;
-            if (showState) text.insert(2, pad(std::string(toString(s.state)), 14));
-            out << text;
+            const MetricSpec& spec = byId[s.metric];
+            const MetricKind kind = spec.kind();
+            std::string head = "  " + (spec.name.empty() ? s.metric : spec.name) + " · " +
+                               zoneName(s.band, s.lane, grid);
+            if (markNew && item.before != FlagState::OffTarget && !d.previousMatchId.empty())
+                head += "  (new since " + d.previousMatchId + ")";
+            else if (item.before && *item.before != s.state)
+                head += "  (was " + words::stateName(*item.before) + ")";
+            out << head << "\n    " << words::coachSentence(spec, s, grid) << "\n    "
+                << words::analystLine(s, kind) << "\n";
         };
         auto section = [&](const std::string& title, const std::vector<DebriefItem>& items,
-                           bool markNew, bool showState = false) {
+                           bool markNew) {
             out << title << " (" << items.size() << ")\n";
             if (items.empty()) out << "  none\n";
-            for (const auto& item : items) line(item, markNew, showState);
+            for (const auto& item : items) line(item, markNew);
             out << "\n";
         };
-        section("Off target over " + settings.window.name(), d.slippedInWindow, true);
+        const std::string window = words::windowName(settings.window);
+        section("Off target over " + window, d.slippedInWindow, true);
         section("Off target in this match alone", d.slippedInMatch, false);
         if (!d.unusualInMatch.empty()) {
             out << "Unusual in this match alone (" << d.unusualInMatch.size()
@@ -305,25 +301,26 @@ int StatusVerbs::runDebrief(ClubRepository& repo, std::ostream& out, std::ostrea
                    "target has a match like this at most once in a hundred\n";
             for (const auto& item : d.unusualInMatch) {
                 const ZoneStatus& s = item.now;
-                char buf[300];
-                std::snprintf(buf, sizeof buf, "  %-24s %-18s %6.0f  target %s  chance if on target %.2g\n",
-                              s.metric.c_str(), zoneName(s.band, s.lane).c_str(), s.sum.num,
-                              targetText(byId[s.metric].kind(), s.target).c_str(), s.matchTail);
-                out << buf;
+                const MetricSpec& spec = byId[s.metric];
+                out << "  " << (spec.name.empty() ? s.metric : spec.name) << " · "
+                    << zoneName(s.band, s.lane, grid) << "\n    " << words::value(spec.kind(), s.sum.num)
+                    << " in this match; we aim for "
+                    << words::targetInWords(s.target->direction, spec.kind(), s.target->value)
+                    << ". A team on its target has a match like this about 1 in "
+                    << words::grouped(1 / std::max(s.matchTail, 1e-12)) << ".\n";
             }
             out << "\n";
         }
         if (!d.previousMatchId.empty())
-            section("Recovered since " + d.previousMatchId, d.recovered, false);
-        section("Likely off or close to the line", d.watched, false, true);
+            section(words::capitalised(words::backOnTarget()) + " since " + d.previousMatchId, d.recovered, false);
+        section("Likely off or close to the line over " + window, d.watched, false);
         char chance[400];
         std::snprintf(chance, sizeof chance,
                       "%d zones with targets judged over %s (%d more have too little data). If "
                       "every true value sat exactly on its target, chance alone would flag at most "
                       "about %.1f of them off target at some point this season (%.2f at this one "
                       "look).\n",
-                      d.judged, settings.window.name().c_str(), d.tooLittleData,
-                      d.seasonChanceFlags, d.chanceFlags);
+                      d.judged, window.c_str(), d.tooLittleData, d.seasonChanceFlags, d.chanceFlags);
         out << chance;
         out << "Slips are evidence for the staff to weigh, not verdicts; see docs/statistics.md.\n";
     }

@@ -213,8 +213,8 @@ int TargetVerbs::runList(ClubRepository& repo, bool history, std::ostream& out,
     for (const auto& t : shown) {
         const MetricKind kind = kinds.count(t.key.metric) ? kinds[t.key.metric] : MetricKind::Rate;
         char line[320];
-        std::snprintf(line, sizeof line, "%-24s %-18s %-8s %8s  margin %-7s min %-4ld %s%s  %s\n",
-                      t.key.metric.c_str(), zoneName(t.key.band, t.key.lane).c_str(),
+        std::snprintf(line, sizeof line, "%-24s %-44s %-8s %8s  margin %-7s min %-4ld %s%s  %s\n",
+                      t.key.metric.c_str(), zoneName(t.key.band, t.key.lane, repo.tallyGrid()).c_str(),
                       std::string(toString(t.direction)).c_str(),
                       formatValue(kind, t.value).c_str(), formatValue(kind, t.watchMargin).c_str(),
                       t.minSample, t.retired ? "RETIRED " : "", ("from " + t.effectiveFrom).c_str(),
@@ -271,8 +271,8 @@ int TargetVerbs::runCopy(ClubRepository& repo, std::ostream& out, std::ostream& 
             }
         const MetricKind kind = kinds.count(t->key.metric) ? kinds[t->key.metric] : MetricKind::Rate;
         char line[256];
-        std::snprintf(line, sizeof line, "%-24s %-18s %-8s %8s   last season %s\n",
-                      t->key.metric.c_str(), zoneName(t->key.band, t->key.lane).c_str(),
+        std::snprintf(line, sizeof line, "%-24s %-44s %-8s %8s   last season %s\n",
+                      t->key.metric.c_str(), zoneName(t->key.band, t->key.lane, repo.tallyGrid()).c_str(),
                       std::string(toString(t->direction)).c_str(),
                       formatValue(kind, t->value).c_str(), was.c_str());
         out << line;

@@ -49,7 +49,7 @@ std::vector<DebriefRow> debriefRows(const QString& section, const std::vector<De
         if (s.state == FlagState::TooLittleData && !std::isnan(s.matchTail)) {
             r.coachText = QString::fromStdString(words::coachSentence(spec->second, s, grid)) + QLatin1Char(' ') +
                           QStringLiteral("This match alone was unusual for a team on its target: about 1 in %1.")
-                              .arg(QLocale().toString(std::round(1 / std::max(s.matchTail, 1e-12)), 'f', 0));
+                              .arg(QString::fromStdString(words::grouped(1 / std::max(s.matchTail, 1e-12))));
             r.analystText += QStringLiteral(" · ") + singleMatchText(s.matchTail);
         }
         r.isNew = markNew && !previousMatchId.empty() && item.before != FlagState::OffTarget;

@@ -157,7 +157,7 @@ double DebriefLayout::header(QPainter* p, bool first) const {
     QString judged;
     if (m_d.hasTargets) {
         judged =
-            QStringLiteral("Judged over %1 (%2 … %3): a target counts as slipped (off target) "
+            QStringLiteral("Judged over %1 (%2 … %3): a zone is off target "
                            "when P(miss) ≥ %4%5. P(miss) is the probability, given the "
                            "data, that the true value lies on the wrong side of the target. "
                            "Intervals at %6 %.")
@@ -199,11 +199,11 @@ double DebriefLayout::legend(QPainter* p, double top) const {
             QString text;
         };
         const std::vector<Entry> entries{
-            {MarkKind::Window, QStringLiteral("▲ hatched: the zone that slipped over %1")
+            {MarkKind::Window, QStringLiteral("▲ hatched: the zone off target over %1")
                                    .arg(q(windowText(m_d.window)))},
             {MarkKind::Match,
-             QStringLiteral("● cross-hatched: the zone that slipped in this match alone")},
-            {MarkKind::Also, QStringLiteral("■ dashed: the same metric slipped in this zone too")},
+             QStringLiteral("● cross-hatched: the zone off target in this match alone")},
+            {MarkKind::Also, QStringLiteral("■ dashed: the same metric off target in this zone too")},
         };
         const double entryW = (kContentW - 4) / 3.0;
         for (std::size_t i = 0; i < entries.size(); ++i) {
@@ -335,7 +335,7 @@ void DebriefLayout::drawCard(QPainter& p, const DebriefMark& m, std::size_t inde
     p.drawText(
         QPointF(mapRect.left(), mapRect.bottom() + mm(1) + QFontMetricsF(m_small, m_dev).ascent()),
         QStringLiteral("%1 · %2 × %3 m")
-            .arg(q(zoneText(m.band, m.lane)))
+            .arg(q(zoneText(m.band, m.lane, m_d.grid)))
             .arg(m_d.pitch.lengthM)
             .arg(m_d.pitch.widthM));
 
@@ -359,7 +359,7 @@ void DebriefLayout::drawCard(QPainter& p, const DebriefMark& m, std::size_t inde
     p.setPen(colours::kMuted);
     y +=
         drawParagraph(
-            p, wrapText(q(m.metric + "  ·  " + zoneText(m.band, m.lane)), m_small, m_dev, textW, 1),
+            p, wrapText(q(zoneText(m.band, m.lane, m_d.grid)), m_small, m_dev, textW, 1),
             QPointF(x, y)) +
         mm(1.2);
     const QFontMetricsF fm(m_body, m_dev);
@@ -419,7 +419,7 @@ FlowItem DebriefLayout::tableRow(const DebriefMark* m) const {
     } else {
         const QString matches =
             QStringLiteral("%1 match%2").arg(m->matches).arg(m->matches == 1 ? "" : "es");
-        cells << q(m->metricName) << q(zoneText(m->band, m->lane))
+        cells << q(m->metricName) << q(zoneText(m->band, m->lane, m_d.grid))
               << q(valueText(m->kind, m->value) + unitText(m->kind))
               << q(targetText(m->direction, m->kind, m->target))
               << q(valueText(m->kind, m->low) + " – " + valueText(m->kind, m->high))
@@ -470,16 +470,15 @@ DrawReport DebriefLayout::draw(QPainter& p, QPdfWriter& writer) {
     std::vector<FlowItem> flow;
     const QString window = q(windowText(m_d.window));
     if (!m_d.hasTargets) {
-        flow.push_back(paragraph(QStringLiteral("No targets are set for %1 %2 yet, so nothing can "
-                                                "slip: set them first (pitchloop targets set "
-                                                "--help).")
+        flow.push_back(paragraph(QStringLiteral("No targets are set for %1 %2 yet, so no zone can "
+                                                "be off target: set them first on the Season "
+                                                "targets page.")
                                      .arg(q(m_d.squad), q(m_d.season)),
                                  sheetFont(10.5, true), colours::kInk));
     } else {
         const bool nothing = m_d.slippedInWindow.empty() && m_d.slippedInMatch.empty();
         if (nothing)
-            flow.push_back(paragraph(QStringLiteral("Nothing slipped: no target is off target over "
-                                                    "%1, nor in this match alone.")
+            flow.push_back(paragraph(QStringLiteral("Nothing off target over %1, nor in this match alone.")
                                          .arg(window),
                                      sheetFont(11, true), colours::kInk));
         const auto order = [](std::size_t n) {
@@ -489,7 +488,7 @@ DrawReport DebriefLayout::draw(QPainter& p, QPdfWriter& writer) {
             const auto section = [&](const QString& title, const std::vector<DebriefMark>& list,
                                      MarkKind kind) {
                 if (list.empty()) {
-                    flow.push_back(heading(title + QStringLiteral(": nothing slipped")));
+                    flow.push_back(heading(title + QStringLiteral(": none")));
                     flow.back().keepWithNext = false;
                     return;
                 }
@@ -500,9 +499,9 @@ DrawReport DebriefLayout::draw(QPainter& p, QPdfWriter& writer) {
                 for (std::size_t i = 0; i < list.size(); i += 2)
                     flow.push_back(cardRow(list, i, kind));
             };
-            section(QStringLiteral("Slipped over %1").arg(window), m_d.slippedInWindow,
+            section(QStringLiteral("Off target over %1").arg(window), m_d.slippedInWindow,
                     MarkKind::Window);
-            section(QStringLiteral("Slipped in this match alone"), m_d.slippedInMatch,
+            section(QStringLiteral("Off target in this match alone"), m_d.slippedInMatch,
                     MarkKind::Match);
         }
         QString summary =
@@ -522,7 +521,7 @@ DrawReport DebriefLayout::draw(QPainter& p, QPdfWriter& writer) {
         table(flow, QStringLiteral("Likely off or close to the line over %1").arg(window),
               QStringLiteral("not yet certain enough to flag"), m_d.watched);
         if (!m_d.previousMatchId.empty())
-            table(flow, QStringLiteral("Recovered since %1").arg(q(m_d.previousMatchId)),
+            table(flow, QStringLiteral("Back on target since %1").arg(q(m_d.previousMatchId)),
                   QStringLiteral("off, likely off or close to the line then, on target now"), m_d.recovered);
     }
 

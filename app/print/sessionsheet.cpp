@@ -287,7 +287,7 @@ double drawFocuses(QPainter* painter, const SessionSheetData& d, const Mm& mm, Q
     for (const auto& f : d.focuses) {
         QStringList zones;
         for (const Zone& z : f.zones)
-            zones << q(zoneText(z.band, z.lane));
+            zones << q(zoneText(z.band, z.lane, d.grid));
         Row r;
         r.top = ly;
         r.name = wrapText(q(f.metricName), name, dev, mm(textW), 2);

@@ -1,6 +1,8 @@
 #include "sheetformat.h"
 
 #include "drills.h"
+#include "wording.h"
+#include "zonenames.h"
 
 #include <array>
 #include <cmath>
@@ -36,70 +38,23 @@ std::string roleText(BlockRole role) {
     return "";
 }
 
-std::string valueText(MetricKind kind, double value) {
-    if (std::isnan(value)) return "–";
-    char buf[32];
-    if (kind == MetricKind::Rate)
-        std::snprintf(buf, sizeof buf, "%.1f %%", 100 * value);
-    else
-        std::snprintf(buf, sizeof buf, "%.2f", value);
-    return buf;
-}
+std::string valueText(MetricKind kind, double value) { return words::value(kind, value); }
 
 std::string unitText(MetricKind kind) {
     return kind == MetricKind::Count ? " a match" : "";
 }
 
 std::string targetText(Direction direction, MetricKind kind, double value) {
-    return std::string(direction == Direction::AtLeast ? "≥ " : "≤ ") + valueText(kind, value);
+    return words::target(direction, kind, value);
 }
 
-std::string probabilityText(double p) {
-    if (std::isnan(p)) return "–";
-    if (p >= 0.9995) return "> 0.999";
-    if (p < 0.0005) return "< 0.001";
-    char buf[16];
-    std::snprintf(buf, sizeof buf, "%.3f", p);
-    return buf;
-}
+std::string probabilityText(double p) { return words::probability(p); }
 
-std::string zoneText(int band, int lane) {
-    if (band == 0 && lane == 0) return "whole pitch";
-    return "band " + std::to_string(band) + ", lane " + std::to_string(lane);
-}
+std::string zoneText(int band, int lane, const ZoneGrid& grid) { return zoneLabel(band, lane, grid); }
 
-std::string windowText(const Window& window) {
-    switch (window.kind) {
-    case Window::Kind::Match:
-        return "this match alone";
-    case Window::Kind::LastN:
-        return window.n == 1 ? "the last match"
-                             : "the last " + std::to_string(window.n) + " matches";
-    case Window::Kind::Season:
-        return "the season so far";
-    case Window::Kind::Ewma:
-        return "the EWMA (λ " + shortNumber(window.lambda, 2) + ")";
-    }
-    return window.name();
-}
+std::string windowText(const Window& window) { return words::windowName(window); }
 
-std::string stateText(FlagState state) {
-    switch (state) {
-    case FlagState::OnTarget:
-        return "on target";
-    case FlagState::CloseToLine:
-        return "close to the line";
-    case FlagState::LikelyOff:
-        return "likely off, not yet certain";
-    case FlagState::OffTarget:
-        return "off target";
-    case FlagState::TooLittleData:
-        return "too little data";
-    case FlagState::NoTarget:
-        return "no target";
-    }
-    return "";
-}
+std::string stateText(FlagState state) { return words::stateName(state); }
 
 std::string scoreText(const std::optional<int>& us, const std::optional<int>& them) {
     if (!us || !them) return "";

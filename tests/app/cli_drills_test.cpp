@@ -158,7 +158,7 @@ TEST_CASE("drills add by flags, then show and list it", "[cli]") {
               "duration:        18 min", "intensity:       4 (high)", "players:         8–14",
               "area:            40 × 30 m", "equipment:       cones, full-size goal",
               "metrics:         pre_shot_passes_against, press_rate",
-              "zones:           band 2 lane 5, band 1 lane 5",
+              "zones:           our left-back area (B2·L5), left wing by our goal line (B1·L5)",
               "tags:            defending, full_back", "author:          D. Arkwright",
               "created:         2026-07-20T12:00:00Z",
               "last edited:     2026-07-20T12:00:00Z by D. Arkwright", "versions:        1"});

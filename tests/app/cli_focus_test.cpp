@@ -61,7 +61,7 @@ TEST_CASE("a focus opened from the planted slip and reviewed after five matches"
 
     const auto show = cli({"--db", club.db, "focus", "show", "1"});
     REQUIRE(show.code == 0);
-    CHECK(contains(show.out, "off_target"));       // the frozen evidence
+    CHECK(contains(show.out, "off target"));       // the frozen evidence
     CHECK(contains(show.out, "rechts überladen — ⚽")); // the note, byte for byte
 
     const auto list = cli({"--db", club.db, "focus", "list", "--format", "json"});

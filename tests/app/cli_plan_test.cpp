@@ -210,10 +210,10 @@ TEST_CASE("plan a session for the open focus, save it, and plan the next day", "
     INFO(r.err);
     REQUIRE(r.code == 0);
     CHECK(has(r.out, "Session 2026-09-30 for First team: MD-3, cap 4 (high), 60 of 60 minutes"));
-    // The focus's zone was far over its target of at most 2.0 a match at KB-2026-08.
-    CHECK(has(r.out, "focus 1 pre_shot_passes_against band 2 lane 5: "));
-    CHECK(has(r.out, "against at most 2.0 a match"));
-    CHECK(has(r.out, "— this drill works on pre_shot_passes_against in the focus's zones"));
+    // The focus's zone was far over its target of at most 2 a match at KB-2026-08.
+    CHECK(has(r.out, "focus 1, Their passes before their shots in our left-back area (B2·L5): "));
+    CHECK(has(r.out, "against at most 2 a match"));
+    CHECK(has(r.out, "— this drill works on Their passes before their shots in the focus's zones"));
     CHECK(has(r.out, "This plan is advice. Load, injury and return-to-play decisions belong to "
                      "the club's qualified staff and follow local rules."));
     CHECK(has(r.err, "saved the session of 2026-09-30"));

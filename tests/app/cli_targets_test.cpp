@@ -86,6 +86,8 @@ struct Workspace {
 };
 
 /// The lines of a debrief section, from its title to the blank line after it.
+/// The items of one debrief section, each item's lines joined: an item starts at a line
+/// indented by two spaces, its sentence and numbers follow indented by four.
 std::vector<std::string> section(const std::string& debrief, const std::string& title) {
     std::vector<std::string> out;
     bool in = false;
@@ -95,7 +97,9 @@ std::vector<std::string> section(const std::string& debrief, const std::string& 
             continue;
         }
         if (in && line.empty()) break;
-        if (in) out.push_back(line);
+        if (!in) continue;
+        if (line.rfind("    ", 0) == 0 && !out.empty()) out.back() += "\n" + line;
+        else out.push_back(line);
     }
     return out;
 }
@@ -240,7 +244,7 @@ TEST_CASE("targets list, history and retire follow the versions", "[cli]") {
     const auto table = w.run({"targets", "list", "--on", "2026-08-31"});
     CHECK(table.code == 0);
     CHECK(contains(table.out, "Targets in force on 2026-08-31 — First team 2026-27"));
-    CHECK(anyLineHas(lines(table.out), {"regain_5s", "band 5 lane 1", "at_least", "45.0%",
+    CHECK(anyLineHas(lines(table.out), {"regain_5s", "(B5·L1)", "at_least", "45.0%",
                                          "from 2026-07-01", "R. Tamsin"}));
 
     // Retire from October: gone from the list then, still in the history.
@@ -377,7 +381,7 @@ TEST_CASE("copy-season carries targets over with last season's achieved values",
     const auto out = lines(copy.out);
     CHECK(anyLineHas(out, {"regain_5s", "whole pitch", "at_least", "40.0%",
                            "last season 50.0% (12.1%–87.9%)"}));
-    CHECK(anyLineHas(out, {"pass_completion", "band 3 lane 3", "85.0%",
+    CHECK(anyLineHas(out, {"pass_completion", "(B3·L3)", "85.0%",
                            "last season 100.0% (27.0%–100.0%)"}));
     CHECK(contains(copy.err, "copied 2 targets"));
 
@@ -506,16 +510,15 @@ TEST_CASE("settings set changes what status and debrief flag; bad settings exit 
     INFO(debrief.out);
     CHECK(debrief.code == 0);
     CHECK(contains(debrief.out, "off target when P(miss) ≥ 0.9;"));
-    const auto off = section(debrief.out, "Off target over last5");
+    const auto off = section(debrief.out, "Off target over the last 5 matches");
     REQUIRE(off.size() == 1);
-    CHECK(contains(off[0], "pass_completion"));
-    CHECK(contains(off[0], "whole pitch"));
+    CHECK(contains(off[0], "Pass completion · whole pitch"));
     CHECK(contains(off[0], "71.4%"));
-    CHECK(contains(off[0], "P(miss) 0.979"));
+    CHECK(contains(off[0], "P(miss) 0.98"));
     // Not new: at KB-TEST-01 (5/7 over last5) P(miss) = st.beta.cdf(0.9, 5.5, 2.5) = 0.934,
     // already ≥ 0.9 under the same settings.
-    CHECK_FALSE(contains(off[0], "NEW"));
-    CHECK(contains(off[0], "(was off_target)"));
+    CHECK_FALSE(contains(off[0], "new since"));
+    CHECK_FALSE(contains(off[0], "(was"));
 
     for (const std::vector<std::string>& more :
          {std::vector<std::string>{"window", "last3"}, {"fdr", "on"}, {"fdr_q", "0.2"},
@@ -564,19 +567,19 @@ TEST_CASE("debrief with targets names the slipped zone", "[cli]") {
     const auto d = w.run({"debrief", "KB-2026-05"});
     INFO(d.out);
     REQUIRE(d.code == 0);
-    CHECK(contains(d.out, "Judged over last5 (KB-2026-01 … KB-2026-05)"));
-    const auto off = section(d.out, "Off target over last5");
+    CHECK(contains(d.out, "Judged over the last 5 matches (KB-2026-01 … KB-2026-05)"));
+    const auto off = section(d.out, "Off target over the last 5 matches");
     REQUIRE(off.size() == 1);
-    CHECK(contains(off[0], "pre_shot_passes_against"));
-    CHECK(contains(off[0], "band 2 lane 5"));
-    CHECK(contains(off[0], "n=5 matches"));
-    CHECK(contains(off[0], "target ≤ 2.00"));
-    CHECK(contains(d.out, "1 zones with targets judged over last5 (0 more have too little data)"));
+    CHECK(contains(off[0], "Their passes before their shots · our left-back area (B2·L5)"));
+    CHECK(contains(off[0], "· 5 matches ·"));
+    CHECK(contains(off[0], "target ≤ 2 ·"));
+    CHECK(contains(off[0], "we aim for at most 2."));
+    CHECK(contains(d.out, "1 zones with targets judged over the last 5 matches (0 more have too little data)"));
 
     // At the second match the window holds 2 matches, fewer than the 3 a count needs.
     const auto early = w.run({"debrief", "KB-2026-02"});
-    CHECK(section(early.out, "Off target over last5").at(0) == "  none");
-    CHECK(contains(early.out, "0 zones with targets judged over last5 (1 more have too little data)"));
+    CHECK(section(early.out, "Off target over the last 5 matches").at(0) == "  none");
+    CHECK(contains(early.out, "0 zones with targets judged over the last 5 matches (1 more have too little data)"));
 
     // Without targets the debrief says so.
     Workspace bare;
@@ -601,8 +604,8 @@ TEST_CASE("the demo season: the left-side leak is off target early and eases lat
     const auto d8 = w.run({"debrief", "KB-2026-08"});
     INFO(d8.out);
     REQUIRE(d8.code == 0);
-    const auto off8 = section(d8.out, "Off target over last5");
-    CHECK(anyLineHas(off8, {"pre_shot_passes_against", "band 2 lane 5", "n=5 matches"}));
+    const auto off8 = section(d8.out, "Off target over the last 5 matches");
+    CHECK(anyLineHas(off8, {"Their passes before their shots", "(B2·L5)", "· 5 matches ·"}));
 
     auto zoneState = [&](const std::string& match) {
         const auto r = w.run({"status", match, "--format", "json", "--window", "last5", "--metric",
@@ -622,8 +625,8 @@ TEST_CASE("the demo season: the left-side leak is off target early and eases lat
     const auto d20 = w.run({"debrief", "KB-2026-20"});
     INFO(d20.out);
     REQUIRE(d20.code == 0);
-    CHECK_FALSE(anyLineHas(section(d20.out, "Off target over last5"),
-                           {"pre_shot_passes_against", "band 2 lane 5"}));
+    CHECK_FALSE(anyLineHas(section(d20.out, "Off target over the last 5 matches"),
+                           {"Their passes before their shots", "(B2·L5)"}));
     const json at20 = zoneState("KB-2026-20");
     CHECK(at20["state"] != "off_target");
     CHECK(at20["p_miss"].get<double>() < 0.5);
@@ -665,7 +668,7 @@ TEST_CASE("settings grid previews, changes and logs a grid change; bad grids exi
     CHECK(contains(changed.out, "Moved from equal:6x5 to equal:3x5:"));
     CHECK(contains(w.run({"settings", "show"}).out, "grid             equal:3x5   "));
     const auto list = w.run({"targets", "list", "--season", "2026-27"});
-    CHECK(contains(list.out, "band 1 lane 5"));
+    CHECK(contains(list.out, "(B1·L5)"));
     const auto log = w.run({"settings", "grid"});
     CHECK(contains(log.out, "equal:6x5 -> equal:3x5 by A. Coach: 2 matches counted again"));
 }

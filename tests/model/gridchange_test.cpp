@@ -168,7 +168,7 @@ TEST_CASE("carrying targets: every version of the largest old zone, noted", "[gr
         CHECK(t.key.band == 2);
         CHECK(t.key.lane == 2);
         CHECK(t.version == 0);
-        CHECK_THAT(t.rationale, Contains("[carried from band 3 lane 2 of equal:6x5 when the grid "
+        CHECK_THAT(t.rationale, Contains("[carried from right half-space in our half (B3·L2) of equal:6x5 when the grid "
                                          "became equal:3x5]"));
     }
     CHECK(c.versions[0].value == 0.4);

@@ -205,10 +205,10 @@ TEST_CASE("a hand-worked plan: coverage, order and one line of why per pick", "[
     CHECK_THAT(p.caution, Contains("qualified staff") && Contains("advice"));
     CHECK(
         p.blocks[1].why ==
-        "focus 11 pre_shot_passes_against band 2 lane 5: 6.8 a match against at most 2.0 a "
-        "match (P(miss) 1.00) — this drill works on pre_shot_passes_against in the focus's zones");
+        "focus 11, pre_shot_passes_against in B2·L5: 6.8 a match against at most 2 a "
+        "match (P(miss) > 0.999) — this drill works on pre_shot_passes_against in the focus's zones");
     CHECK(p.blocks[2].why ==
-          "focus 12 shot_after_loss band 5 lane 3: 5.0 % against at least 12.0 % (P(miss) 0.97) "
+          "focus 12, shot_after_loss in B5·L3: 5.0% against at least 12.0% (P(miss) 0.97) "
           "— this drill works on shot_after_loss in the focus's zones");
     CHECK(p.blocks[0].why == "warm-up; tagged warm_up, intensity 2 within the cap of 4 for MD-3");
     CHECK(p.blocks[3].why ==
@@ -306,7 +306,7 @@ TEST_CASE("a drill linked to a focus counts for it, and the why says so", "[plan
     const auto res = planSession(r);
     REQUIRE(res.plan);
     CHECK(res.plan->blocks.at(1).why ==
-          "focus 3 losses band 4 lane 4: 9.2 a match against at most 7.0 a match (P(miss) 0.93) "
+          "focus 3, losses in B4·L4: 9.2 a match against at most 7 a match (P(miss) 0.93) "
           "— this drill is linked to the focus");
     CHECK(res.plan->focusMinutes.at(0).minutes == 20);
 }

@@ -69,6 +69,9 @@ TEST_CASE("one number format for values, probabilities and p-values", "[wording]
     CHECK(words::count(6.8) == "6.8");
     CHECK(words::count(2.996) == "3");
     CHECK(words::value(MetricKind::Exposure, 0.1534) == "0.15");
+    CHECK(words::grouped(6889.4) == "6,889");
+    CHECK(words::grouped(1234567) == "1,234,567");
+    CHECK(words::grouped(12) == "12");
     CHECK(words::interval(MetricKind::Rate, {0.401, 0.642}) == "40.1–64.2%");
     CHECK(words::interval(MetricKind::Count, {4.8, 9.4}) == "4.8–9.4");
     CHECK(words::interval(MetricKind::Count, {0, INFINITY}) == "–");

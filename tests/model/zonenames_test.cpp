@@ -37,6 +37,13 @@ TEST_CASE("the default grid's zones have football names", "[zonenames]") {
     CHECK(zoneLabel(2, 5, g) == "our left-back area (B2·L5)");
     CHECK(zoneLabel(0, 0, g) == "whole pitch");
     CHECK(zoneCode(2, 5) == "B2·L5");
+    // In a sentence, with the article the name needs.
+    CHECK(zonePhrase(2, 3, g) == "the space in front of our box");
+    CHECK(zonePhrase(5, 1, g) == "the right wing in their third");
+    CHECK(zonePhrase(2, 5, g) == "our left-back area");
+    CHECK(zonePhrase(1, 3, g) == "our box");
+    CHECK(zonePhrase(6, 4, g) == "the left side of their box");
+    CHECK(zonePhrase(0, 0, g) == "the whole pitch");
 }
 
 TEST_CASE("the markings grid's lanes are the wings, half-spaces and centre themselves", "[zonenames]") {
@@ -50,4 +57,5 @@ TEST_CASE("the markings grid's lanes are the wings, half-spaces and centre thems
                                          "left wing around halfway"});
     // Out of the grid: the code, not a guess.
     CHECK(zoneFootballName(4, 1, g) == "B4·L1");
+    CHECK(zoneLabel(4, 1, g) == "B4·L1");
 }

@@ -147,6 +147,9 @@ def main():
         env=dict(os.environ, XDG_RUNTIME_DIR=runtime))
     pages, text = render(debrief, a.workdir, "debrief", portrait=False)
     said = run([a.cli, "--db", club, "debrief", MATCH]).stdout
+    # Each zone the command line lists as off target ("  <metric name> · <zone name>", then its
+    # sentence and numbers indented by four) must appear on the sheet with the same words and
+    # the same P(miss): one vocabulary (model/wording.h) for both.
     slipped = []
     section = None
     for line in said.splitlines():
@@ -156,13 +159,20 @@ def main():
         if not line.strip() or not line.startswith("  "):
             section = None
             continue
-        if section and line.strip() != "none":
-            m = re.match(r"\s+(\S+)\s+(band (\d+) lane (\d+)|whole pitch)", line)
-            slipped.append((m.group(1), f"band {m.group(3)}, lane {m.group(4)}" if m.group(3)
-                            else "whole pitch"))
+        if not section or line.strip() == "none":
+            continue
+        if not line.startswith("    "):
+            name, zone = line.strip().split(" · ", 1)
+            slipped.append({"name": name, "zone": zone.split("  (")[0]})
+        elif "P(miss)" in line:
+            slipped[-1]["p_miss"] = re.search(r"P\(miss\) ([<>] )?[0-9.]+", line).group(0)
     check(len(slipped) >= 1, f"the command line's debrief of {MATCH} lists slipped targets: {slipped}")
-    for metric, zone in slipped:
-        check(f"{metric} · {zone}" in text, f"debrief shows {metric} in {zone}")
+    joined = " ".join(text.split())
+    for z in slipped:
+        check(z["name"] in joined and z["zone"] in joined,
+              f"debrief shows {z['name']} in {z['zone']} as the command line names them")
+        check(z.get("p_miss", "?").replace("P(miss) ", "") in joined,
+              f"debrief gives the same {z.get('p_miss')} as the command line")
     check(MATCH in text and "P(miss)" in text, "debrief names the match and gives P(miss)")
 
     # Bad input: no session that day gives exit code 2 and no file.

@@ -505,13 +505,14 @@ TEST_CASE("bad input writes nothing and says what was wrong", "[print][badinput]
 TEST_CASE("sheet wording: dates, values, P(miss)", "[print][format]") {
     CHECK(longDate("2026-09-26", *dayNumber("2026-09-26")) == "Saturday 26 September 2026");
     CHECK(longDate("2027-01-01", *dayNumber("2027-01-01")) == "Friday 1 January 2027");
-    CHECK(valueText(MetricKind::Rate, 0.4567) == "45.7 %");
-    CHECK(valueText(MetricKind::Count, 2.4) == "2.40");
-    CHECK(targetText(Direction::AtMost, MetricKind::Count, 2) == "≤ 2.00");
+    // The vocabulary and number format of model/wording.h, as on the screens.
+    CHECK(valueText(MetricKind::Rate, 0.4567) == "45.7%");
+    CHECK(valueText(MetricKind::Count, 2.4) == "2.4");
+    CHECK(targetText(Direction::AtMost, MetricKind::Count, 2) == "≤ 2");
     CHECK(probabilityText(0.99996) == "> 0.999");
     CHECK(probabilityText(0.9984) == "0.998");
-    CHECK(zoneText(0, 0) == "whole pitch");
-    CHECK(zoneText(2, 5) == "band 2, lane 5");
+    CHECK(zoneText(0, 0, ZoneGrid{}) == "whole pitch");
+    CHECK(zoneText(2, 5, ZoneGrid{}) == "our left-back area (B2·L5)");
     CHECK(windowText(Window{Window::Kind::LastN, 5, 0.3}) == "the last 5 matches");
     CHECK(shortNumber(0.999) == "0.999");
     CHECK(shortNumber(90.0, 1) == "90");
