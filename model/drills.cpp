@@ -498,7 +498,7 @@ DrillObjectResult parseDrillObject(std::string_view jsonText, const std::string&
             r.errors.push_back({source, "", "drills",
                                 "expected one drill here, found " +
                                     std::to_string((*root)["drills"].size()) +
-                                    " (use: pitchloop drills import)"});
+                                    " (a file of several drills is imported into the drill book as a whole)"});
             return r;
         }
         r.drill = readDrill((*root)["drills"][0], base, complete, source, "drills[0]", metrics,

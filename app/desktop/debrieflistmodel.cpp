@@ -82,6 +82,8 @@ QVariant DebriefListModel::data(const QModelIndex& index, int role) const {
     const DebriefRow& r = m_rows[static_cast<std::size_t>(index.row())];
     switch (role) {
     case Qt::DisplayRole: return r.metricName + QStringLiteral(" · ") + r.zoneText;
+    case CoachTextRole: return r.coachText;
+    case AnalystTextRole: return r.analystText;
     case SectionRole: return r.section;
     case MetricIdRole: return r.metricId;
     case MetricNameRole: return r.metricName;
@@ -120,6 +122,8 @@ QHash<int, QByteArray> DebriefListModel::roleNames() const {
             {StateRole, "zoneState"},
             {StateTextRole, "stateText"},
             {IsNewRole, "isNew"},
+            {CoachTextRole, "coachText"},
+            {AnalystTextRole, "analystText"},
             {ChangeTextRole, "changeText"},
             {FirstInSectionRole, "firstInSection"}};
 }

@@ -69,6 +69,8 @@ public:
         IsNewRole,
         ChangeTextRole,
         FirstInSectionRole, ///< the first row of its section (the view shows the section title)
+        CoachTextRole,      ///< the zone in a plain sentence
+        AnalystTextRole,    ///< the numbers behind it in one line
     };
     Q_ENUM(Role)
 

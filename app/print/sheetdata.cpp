@@ -32,7 +32,7 @@ SheetResult<SessionSheetData> sessionSheetData(ClubRepository& repo, const std::
     const auto saved = SessionStore(repo).get(squad, date);
     if (!saved) {
         result.problem = "no saved session of " + squad + " on " + date +
-                         " (plan one with: pitchloop plan " + date + " ... --save)";
+                         ": plan and save that day's session first";
         return result;
     }
 
@@ -133,7 +133,7 @@ SheetResult<DebriefSheetData> debriefSheetData(ClubRepository& repo, const std::
     const auto summary = repo.matchSummary(matchId);
     const auto where = repo.seasonOfMatch(matchId);
     if (!summary || !where) {
-        result.problem = "no match '" + matchId + "' in the club file (see: pitchloop matches)";
+        result.problem = "no match '" + matchId + "' in the club file";
         return result;
     }
     DebriefSheetData d;

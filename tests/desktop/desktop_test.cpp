@@ -7,6 +7,7 @@
 
 #include "modelcheck.h"
 #include "clubsession.h"
+#include "commands.h"
 #include "debrieflistmodel.h"
 #include "display.h"
 #include "ingest.h"
@@ -31,6 +32,7 @@
 #include <QQuickItem>
 #include <QQuickStyle>
 #include <QQuickView>
+#include <QRegularExpression>
 #include <QSignalSpy>
 #include <QTemporaryDir>
 #include <QTest>
@@ -38,6 +40,7 @@
 
 #include <cmath>
 #include <memory>
+#include <sstream>
 
 Q_IMPORT_QML_PLUGIN(PitchloopPlugin)
 
@@ -76,6 +79,7 @@ private slots:
     void metricList();
     void debriefMaps();
     void debriefList();
+    void appAndCommandLineSayTheSame();
     void seasonOverview();
     void zoneSeries();
     void emptyClub();
@@ -257,6 +261,46 @@ void DesktopTest::debriefList() {
         QCOMPARE(role(*items, 0, "metricId").toString(),
                  QString::fromStdString(reference.slippedInWindow.front().now.metric));
     }
+}
+
+void DesktopTest::appAndCommandLineSayTheSame() {
+    // One vocabulary (model/wording.h): every zone the app's debrief lists is listed by the
+    // command line's debrief of the same match under the same section, with the same metric
+    // name, zone name, sentence and numbers.
+    MatchDebrief debrief;
+    debrief.setSession(&m_session);
+    const auto* items = debrief.items();
+    QVERIFY(items->rowCount() > 0);
+    std::vector<std::string> args{"pitchloop", "--db", m_file.toStdString(), "debrief",
+                                  debrief.matchId().toStdString()};
+    std::vector<char*> argv;
+    for (auto& a : args) argv.push_back(a.data());
+    std::ostringstream out, err;
+    QCOMPARE(cli::run(static_cast<int>(argv.size()), argv.data(), out, err), 0);
+    const QString said = QString::fromStdString(out.str());
+    const auto lowerFirst = [](QString s) {
+        if (!s.isEmpty()) s[0] = s[0].toLower();
+        return s;
+    };
+    int compared = 0;
+    for (int row = 0; row < items->rowCount(); ++row) {
+        const QString section = role(*items, row, "section").toString();
+        if (section.startsWith(QStringLiteral("Unusual"))) continue; // said differently: one match
+        const QString head = QStringLiteral("  %1 · %2")
+                                 .arg(role(*items, row, "metricName").toString(),
+                                      lowerFirst(role(*items, row, "zoneText").toString()));
+        const qsizetype sectionAt = said.indexOf(QLatin1Char('\n') + section + QStringLiteral(" ("));
+        QVERIFY2(sectionAt >= 0, qPrintable(section));
+        const qsizetype at = said.indexOf(head, sectionAt);
+        QVERIFY2(at >= 0, qPrintable(head + QStringLiteral("\n") + said));
+        // The item runs to the next line that is not indented by four (its sentence and numbers are).
+        const qsizetype end = said.indexOf(QRegularExpression(QStringLiteral("\n(?!    )")), at + head.size());
+        const QString item = said.mid(at, end - at);
+        QVERIFY2(item.contains(role(*items, row, "coachText").toString()), qPrintable(item));
+        QVERIFY2(item.contains(role(*items, row, "analystText").toString()), qPrintable(item));
+        ++compared;
+    }
+    QVERIFY(compared > 0);
 }
 
 void DesktopTest::seasonOverview() {

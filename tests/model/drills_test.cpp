@@ -622,7 +622,7 @@ TEST_CASE("one drill object reads over a base, changing only its keys", "[drills
                          builtinMetrics(), ZoneGrid());
     CHECK(described(r.errors) ==
           std::vector<std::string>{
-              "f.json: drills: expected one drill here, found 2 (use: pitchloop drills import)"});
+              "f.json: drills: expected one drill here, found 2 (a file of several drills is imported into the drill book as a whole)"});
 }
 
 TEST_CASE("importing the same drills twice adds nothing", "[drills]") {
