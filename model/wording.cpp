@@ -79,9 +79,13 @@ std::string count(double v) {
 
 std::string grouped(double v) {
     if (std::isnan(v)) return "–";
-    std::string digits = fixed(std::abs(std::round(v)), 0);
-    for (int at = static_cast<int>(digits.size()) - 3; at > 0; at -= 3) digits.insert(static_cast<std::size_t>(at), ",");
-    return (v <= -0.5 ? "-" : "") + digits;
+    const std::string digits = fixed(std::abs(std::round(v)), 0);
+    std::string out = v <= -0.5 ? "-" : "";
+    for (std::size_t i = 0; i < digits.size(); ++i) {
+        if (i > 0 && (digits.size() - i) % 3 == 0) out += ',';
+        out += digits[i];
+    }
+    return out;
 }
 
 std::string value(MetricKind kind, double v) {
@@ -148,6 +152,7 @@ std::string coachSentence(const MetricSpec& metric, const ZoneStatus& status, co
         replaceAll(text, "{zone}", zone);
         replaceAll(text, "{value}", value(kind, status.value));
         replaceAll(text, "{window}", sentenceWindow(status.window));
+        if (status.window.kind == Window::Kind::Match) replaceAll(text, " a match in this match", " in this match");
     } else {
         text = metric.name + " in " + zone + ": " + value(kind, status.value) +
                (kind == MetricKind::Count ? " a match " : " ") + sentenceWindow(status.window);
@@ -159,6 +164,15 @@ std::string coachSentence(const MetricSpec& metric, const ZoneStatus& status, co
         text += ".";
     if (const std::string sure = howSure(status.state); !sure.empty()) text += " " + sure;
     return text;
+}
+
+std::string unusualMatchSentence(const MetricSpec& metric, const ZoneStatus& status, const ZoneGrid& grid) {
+    ZoneStatus said = status;
+    said.state = FlagState::NoTarget; // no claim about luck from one match
+    std::string text = coachSentence(metric, said, grid);
+    if (std::isnan(status.matchTail)) return text;
+    return text + " One match cannot judge that target, but a team on its target has a match like this only about 1 in " +
+           grouped(1 / std::max(status.matchTail, 1e-12)) + ".";
 }
 
 std::string analystLine(const ZoneStatus& status, MetricKind kind) {

@@ -66,6 +66,12 @@ std::string howSure(FlagState state);
 /// last 5 matches; we aim for at most 2. This is very unlikely to be bad luck."
 std::string coachSentence(const MetricSpec& metric, const ZoneStatus& status, const ZoneGrid& grid);
 
+/// A per-match count judged on one match (too little data to judge the target, but unusual):
+/// the sentence without a claim about luck, then how rare such a match is for a team on its
+/// target: "... 11 times in this match; we aim for at most 2. One match cannot judge that
+/// target, but a team on its target has a match like this only about 1 in 6,889."
+std::string unusualMatchSentence(const MetricSpec& metric, const ZoneStatus& status, const ZoneGrid& grid);
+
 // --- The analyst's layer --------------------------------------------------------------------
 
 /// The numbers behind the same zone in one line: "6.8 (90% interval 4.8–9.4) · 5 matches ·

@@ -12,6 +12,9 @@ ApplicationWindow {
 
     required property ClubSession session
     property int currentPage: 0
+    /// Which layer of words the screens speak: plain sentences for the coach (true) or the
+    /// analyst's numbers. Remembered, so the layer last chosen is the one the app opens in.
+    property bool plainWords: true
     readonly property var pages: [
         { name: "season", title: qsTr("Season"), shortcut: "Ctrl+1" },
         { name: "import", title: qsTr("Load matches"), shortcut: "Ctrl+2" },
@@ -70,6 +73,10 @@ ApplicationWindow {
         property alias width: root.width
         property alias height: root.height
         property alias currentPage: root.currentPage
+    }
+    Settings {
+        category: "words"
+        property alias plainWords: root.plainWords
     }
 
     Repeater {
@@ -134,6 +141,38 @@ ApplicationWindow {
 
                 Item { Layout.fillHeight: true }
 
+                // The layer of words, for every screen at once (also in Settings).
+                Label {
+                    Layout.leftMargin: Theme.gapLarge
+                    text: qsTr("Words")
+                    color: Theme.sidebarMuted
+                    font.pixelSize: Theme.fontSmall
+                }
+                RowLayout {
+                    Layout.leftMargin: Theme.gap
+                    Layout.rightMargin: Theme.gap
+                    Layout.bottomMargin: Theme.gap
+                    spacing: 4
+                    Repeater {
+                        model: [{ plain: true, text: qsTr("Plain words") }, { plain: false, text: qsTr("Numbers") }]
+                        delegate: Button {
+                            required property var modelData
+                            objectName: modelData.plain ? "plainWordsButton" : "numbersButton"
+                            Layout.fillWidth: true
+                            text: modelData.text
+                            checkable: true
+                            checked: root.plainWords === modelData.plain
+                            font.bold: checked
+                            onClicked: root.plainWords = modelData.plain
+                            ToolTip.visible: hovered
+                            ToolTip.delay: 500
+                            ToolTip.text: modelData.plain
+                                          ? qsTr("Each zone in a sentence; the numbers when you hover it")
+                                          : qsTr("Values, intervals and P(miss) in columns; the sentence when you hover it")
+                        }
+                    }
+                }
+
                 Label {
                     visible: root.session.demo
                     Layout.leftMargin: Theme.gapLarge
@@ -173,6 +212,7 @@ ApplicationWindow {
             currentIndex: root.currentPage
 
             HomePage {
+                plainWords: root.plainWords
                 session: root.session
                 onOpenDebrief: matchId => root.openDebrief(matchId)
                 onOpenZone: (metricId, band, lane, matchId) => root.openZone(metricId, band, lane, matchId)
@@ -188,12 +228,14 @@ ApplicationWindow {
                 session: root.session
             }
             DebriefPage {
+                plainWords: root.plainWords
                 id: debriefPage
                 session: root.session
                 onOpenZone: (metricId, band, lane, matchId) => root.openZone(metricId, band, lane, matchId)
                 onOpenFocus: (metricId, band, lane, matchId) => root.openFocus(metricId, band, lane, matchId)
             }
             ZonePage {
+                plainWords: root.plainWords
                 id: zonePage
                 session: root.session
             }
@@ -201,13 +243,17 @@ ApplicationWindow {
                 session: root.session
             }
             FocusesPage {
+                plainWords: root.plainWords
                 id: focusesPage
                 session: root.session
             }
             PlannerPage {
+                plainWords: root.plainWords
                 session: root.session
             }
             SettingsPage {
+                plainWords: root.plainWords
+                onPlainWordsChosen: plain => root.plainWords = plain
                 session: root.session
             }
         }

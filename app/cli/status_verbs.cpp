@@ -303,11 +303,10 @@ int StatusVerbs::runDebrief(ClubRepository& repo, std::ostream& out, std::ostrea
                 const ZoneStatus& s = item.now;
                 const MetricSpec& spec = byId[s.metric];
                 out << "  " << (spec.name.empty() ? s.metric : spec.name) << " · "
-                    << zoneName(s.band, s.lane, grid) << "\n    " << words::value(spec.kind(), s.sum.num)
-                    << " in this match; we aim for "
-                    << words::targetInWords(s.target->direction, spec.kind(), s.target->value)
-                    << ". A team on its target has a match like this about 1 in "
-                    << words::grouped(1 / std::max(s.matchTail, 1e-12)) << ".\n";
+                    << zoneName(s.band, s.lane, grid) << "\n    " << words::unusualMatchSentence(spec, s, grid)
+                    << "\n    " << words::analystLine(s, spec.kind()) << " · " << words::value(spec.kind(), s.sum.num)
+                    << " in this match, 1 in " << words::grouped(1 / std::max(s.matchTail, 1e-12))
+                    << " if on target\n";
             }
             out << "\n";
         }

@@ -47,9 +47,8 @@ std::vector<DebriefRow> debriefRows(const QString& section, const std::vector<De
         if (spec != metrics.end()) r.coachText = QString::fromStdString(words::coachSentence(spec->second, s, grid));
         r.analystText = QString::fromStdString(words::analystLine(s, kind));
         if (s.state == FlagState::TooLittleData && !std::isnan(s.matchTail)) {
-            r.coachText = QString::fromStdString(words::coachSentence(spec->second, s, grid)) + QLatin1Char(' ') +
-                          QStringLiteral("This match alone was unusual for a team on its target: about 1 in %1.")
-                              .arg(QString::fromStdString(words::grouped(1 / std::max(s.matchTail, 1e-12))));
+            if (spec != metrics.end())
+                r.coachText = QString::fromStdString(words::unusualMatchSentence(spec->second, s, grid));
             r.analystText += QStringLiteral(" · ") + singleMatchText(s.matchTail);
         }
         r.isNew = markNew && !previousMatchId.empty() && item.before != FlagState::OffTarget;

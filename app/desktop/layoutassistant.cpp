@@ -65,7 +65,7 @@ QString oursText(const std::string& field, const std::string& ours) {
     if (field == "period") return LayoutAssistant::tr("period %1").arg(q(ours));
     if (field == "zone" || field == "to_zone") {
         const auto parts = q(ours).split(QLatin1Char(','));
-        return LayoutAssistant::tr("band %1 · lane %2").arg(parts.value(0), parts.value(1));
+        return LayoutAssistant::tr("B%1·L%2").arg(parts.value(0), parts.value(1));
     }
     QString text = q(ours);
     text.replace(QLatin1Char('/'), QStringLiteral(" · "));

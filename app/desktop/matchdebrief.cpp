@@ -66,6 +66,7 @@ void MatchDebrief::clear() {
     m_betterText.clear();
     m_windowText.clear();
     m_judgedText.clear();
+    m_plainJudgedText.clear();
 }
 
 void MatchDebrief::clearModels() {
@@ -199,7 +200,7 @@ void MatchDebrief::refresh() {
             m_items->reset(std::move(rows));
         }
         m_judgedText = tr("%1 zones with targets judged over %2, %3 with too little data. A zone is "
-                          "called slipped only when it is almost certainly past its target (chance "
+                          "called off target only when it is almost certainly past its target (chance "
                           "%4 or more), so that about %5 false flag a season is expected across "
                           "the board; the ranges shown are %6 ranges. If every true value sat "
                           "exactly on its target, chance alone would flag at most about %7 of "
@@ -212,6 +213,23 @@ void MatchDebrief::refresh() {
                            .arg(QLocale().toString(s->flagSettings().falseFlagsPerSeason, 'g', 3))
                            .arg(QLocale().toString(100 * s->flagSettings().level, 'f', 0) + QStringLiteral(" %"))
                            .arg(QLocale().toString(debriefed.seasonChanceFlags, 'f', 1));
+        const double falseFlags = s->flagSettings().falseFlagsPerSeason;
+        m_plainJudgedText =
+            tr("%1 zones with targets were judged over %2; %3 have too few moments yet to judge.")
+                .arg(debriefed.judged)
+                .arg(phrase)
+                .arg(debriefed.tooLittleData) +
+            QLatin1Char(' ') +
+            (falseFlags > 0
+                 ? tr("A zone is called off target only when bad luck is very unlikely to explain it, "
+                      "so that across all the targets about %1 false alarm a season is expected.")
+                       .arg(QLocale().toString(falseFlags, 'g', 3))
+                 : tr("A zone is called off target only when bad luck is very unlikely to explain it.")) +
+            QLatin1Char(' ') + tr("These are evidence for the staff to weigh, not verdicts. Hover a line for its numbers.");
+        if (!debriefed.unusualInMatch.empty())
+            m_plainJudgedText += QLatin1Char(' ') +
+                                 tr("A single match cannot judge a target a match; an “unusual match” is one a team on "
+                                    "its target has at most once in a hundred.");
         if (!debriefed.unusualInMatch.empty())
             m_judgedText += QLatin1Char(' ') +
                             tr("One match cannot judge a per-match count target; “unusual match” "

@@ -41,6 +41,8 @@ class MatchDebrief : public pitchloop::desktop::SessionClient {
     Q_PROPERTY(QString betterText READ betterText NOTIFY changed)
     Q_PROPERTY(QString windowText READ windowText NOTIFY changed)
     Q_PROPERTY(QString judgedText READ judgedText NOTIFY changed)
+    /// The same note in the coach's words, without the statistics.
+    Q_PROPERTY(QString plainJudgedText READ plainJudgedText NOTIFY changed)
     Q_PROPERTY(pitchloop::desktop::ZoneMapModel* matchMap READ matchMap CONSTANT)
     Q_PROPERTY(pitchloop::desktop::ZoneMapModel* windowMap READ windowMap CONSTANT)
     Q_PROPERTY(pitchloop::desktop::DebriefListModel* items READ items CONSTANT)
@@ -65,6 +67,7 @@ public:
     QString betterText() const { return m_betterText; }
     QString windowText() const { return m_windowText; }
     QString judgedText() const { return m_judgedText; }
+    QString plainJudgedText() const { return m_plainJudgedText; }
     ZoneMapModel* matchMap() const { return m_matchMap; }
     ZoneMapModel* windowMap() const { return m_windowMap; }
     DebriefListModel* items() const { return m_items; }
@@ -100,7 +103,7 @@ private:
     QString m_metricQuestion;
     QString m_betterText;
     QString m_windowText;
-    QString m_judgedText;
+    QString m_judgedText, m_plainJudgedText;
     ZoneMapModel* m_matchMap;
     ZoneMapModel* m_windowMap;
     DebriefListModel* m_items;

@@ -15,6 +15,8 @@ Card {
     property string selectedMetric
     property int selectedBand: -1
     property int selectedLane: -1
+    /// Plain sentences (the coach's layer) or the numbers (the analyst's).
+    property bool plainWords: true
 
     signal lineClicked(string metricId, int band, int lane)
     signal lineDoubleClicked(string metricId, int band, int lane)
@@ -45,6 +47,7 @@ Card {
         ScrollBar.vertical: ScrollBar {}
         delegate: DebriefItemDelegate {
             width: ListView.view.width
+            plainWords: root.plainWords
             selected: metricId === root.selectedMetric && band === root.selectedBand
                       && lane === root.selectedLane
             onClicked: root.lineClicked(metricId, band, lane)

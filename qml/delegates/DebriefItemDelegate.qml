@@ -3,8 +3,11 @@ import QtQuick.Controls
 import QtQuick.Layouts
 import Pitchloop
 
-// One debrief line: state marker, metric and zone, value with its interval and sample, the
-// target, how sure the flag is, and what changed since the previous match.
+// One debrief line in either layer of words. Plain words: the state, metric and zone, and the
+// zone in one sentence ("…6.8 times a match over the last 5 matches; we aim for at most 2. This
+// is very unlikely to be bad luck."), the numbers one hover away. Numbers: value with its
+// interval and sample, the target, how sure the flag is; the sentence one hover away. Both say
+// what changed since the previous match.
 ItemDelegate {
     id: root
 
@@ -24,9 +27,18 @@ ItemDelegate {
     required property string changeText
     required property string section
     required property bool firstInSection
+    required property string coachText
+    required property string analystText
     property bool selected: false
+    /// The coach's layer (a sentence) rather than the analyst's (the numbers in columns).
+    property bool plainWords: true
 
-    height: firstInSection ? 76 : 46
+    readonly property int lineHeight: plainWords ? 62 : 46
+    height: (firstInSection ? 30 : 0) + lineHeight
+
+    ToolTip.visible: hovered && ToolTip.text.length > 0
+    ToolTip.delay: 400
+    ToolTip.text: plainWords ? analystText : coachText
     padding: 0
     topPadding: firstInSection ? 30 : 0
     topInset: topPadding
@@ -72,6 +84,29 @@ ItemDelegate {
             font.bold: root.zoneState === ZoneState.OffTarget
         }
         ColumnLayout {
+            visible: root.plainWords
+            Layout.fillWidth: true
+            Layout.minimumWidth: 180
+            spacing: 1
+            Label {
+                Layout.fillWidth: true
+                text: root.metricName + "  ·  " + root.zoneText
+                color: Theme.textMuted
+                font.pixelSize: Theme.fontSmall
+                elide: Text.ElideRight
+            }
+            Label {
+                objectName: "coachSentence"
+                Layout.fillWidth: true
+                text: root.coachText
+                color: Theme.text
+                wrapMode: Text.WordWrap
+                maximumLineCount: 2
+                elide: Text.ElideRight
+            }
+        }
+        ColumnLayout {
+            visible: !root.plainWords
             Layout.fillWidth: true
             Layout.minimumWidth: 180
             spacing: 0
@@ -89,17 +124,20 @@ ItemDelegate {
             }
         }
         Label {
+            visible: !root.plainWords
             Layout.preferredWidth: 230
             text: root.valueText + "  (" + root.intervalText + ")  " + root.sampleText
             color: Theme.text
             elide: Text.ElideRight
         }
         Label {
+            visible: !root.plainWords
             Layout.preferredWidth: 96
             text: root.targetText.length > 0 ? qsTr("target %1").arg(root.targetText) : ""
             color: Theme.textMuted
         }
         Label {
+            visible: !root.plainWords
             Layout.preferredWidth: 100
             text: root.certaintyText
             color: Theme.textMuted

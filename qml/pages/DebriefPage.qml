@@ -11,6 +11,8 @@ Page {
     id: root
 
     required property ClubSession session
+    /// Plain sentences for the coach, or the analyst's numbers (Main.qml, remembered).
+    property bool plainWords: true
 
     signal openZone(string metricId, int band, int lane, string matchId)
     signal openFocus(string metricId, int band, int lane, string matchId)
@@ -141,7 +143,7 @@ Page {
             }
             Button {
                 text: debrief.selectedBand > 0
-                      ? qsTr("Trend of band %1 · lane %2").arg(debrief.selectedBand).arg(debrief.selectedLane)
+                      ? qsTr("Trend of B%1·L%2").arg(debrief.selectedBand).arg(debrief.selectedLane)
                       : qsTr("Pick a zone for its trend")
                 enabled: debrief.selectedBand > 0
                 onClicked: root.openZone(debrief.metricId, debrief.selectedBand, debrief.selectedLane, debrief.matchId)
@@ -159,7 +161,8 @@ Page {
             Layout.fillWidth: true
             Layout.fillHeight: true
             lines: debrief.items
-            note: debrief.judgedText
+            plainWords: root.plainWords
+            note: root.plainWords ? debrief.plainJudgedText : debrief.judgedText
             emptyText: debrief.hasTargets
                        ? qsTr("Nothing off target, likely off or close to the line after this match.")
                        : qsTr("No targets set for this season yet, so nothing is judged; the maps show the values alone.")

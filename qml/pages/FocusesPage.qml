@@ -12,6 +12,8 @@ Page {
     id: root
 
     required property ClubSession session
+    /// Plain sentences for the coach, or the analyst's numbers (Main.qml, remembered).
+    property bool plainWords: true
 
     /// Starts opening a focus on a zone (band 0, lane 0: the whole pitch) flagged after a match.
     function openFromZone(metricId: string, band: int, lane: int, matchId: string) {

@@ -10,6 +10,8 @@ Page {
     id: root
 
     required property ClubSession session
+    /// Plain sentences for the coach, or the analyst's numbers (Main.qml, remembered).
+    property bool plainWords: true
 
     signal openDebrief(string matchId)
     signal openZone(string metricId, int band, int lane, string matchId)
@@ -248,6 +250,7 @@ Page {
             Layout.fillWidth: true
             Layout.fillHeight: true
             lines: overview.items
+            plainWords: root.plainWords
             emptyText: overview.hasTargets
                        ? qsTr("Nothing off target, on watch or back on target over %1.").arg(overview.windowText.toLowerCase())
                        : qsTr("No targets are set for this season, so the debrief has nothing to judge. "

@@ -14,6 +14,8 @@ Page {
     id: root
 
     required property ClubSession session
+    /// Plain sentences for the coach, or the analyst's numbers (Main.qml, remembered).
+    property bool plainWords: true
     /// The day the form's minutes and players were filled for.
     property string formDate
 

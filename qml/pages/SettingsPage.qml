@@ -12,6 +12,10 @@ Page {
     id: root
 
     required property ClubSession session
+    /// Plain sentences for the coach, or the analyst's numbers (Main.qml, remembered).
+    property bool plainWords: true
+    /// The staff member picked the layer of words the screens open in.
+    signal plainWordsChosen(bool plain)
 
     background: Rectangle { color: Theme.window }
 
@@ -142,6 +146,24 @@ Page {
                         text: qsTr("Zone grid: %1").arg(settings.gridText)
                         color: Theme.text
                         elide: Text.ElideRight
+                    }
+                }
+
+                Card {
+                    title: qsTr("Words on the screens")
+                    Layout.fillWidth: true
+                    SettingsRow {
+                        Layout.fillWidth: true
+                        label: qsTr("Screens open in")
+                        explanation: qsTr("Plain words: each zone in a sentence, its numbers when you hover it. Numbers: values, intervals and P(miss) in columns, the sentence when you hover it. Kept on this computer; the switch at the bottom of the side bar changes it too.")
+                        defaultText: qsTr("Default: plain words")
+                        ComboBox {
+                            objectName: "wordLayer"
+                            Layout.preferredWidth: 190
+                            model: [qsTr("Plain words"), qsTr("Numbers")]
+                            currentIndex: root.plainWords ? 0 : 1
+                            onActivated: index => root.plainWordsChosen(index === 0)
+                        }
                     }
                 }
 

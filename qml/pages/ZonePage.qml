@@ -11,6 +11,8 @@ Page {
     id: root
 
     required property ClubSession session
+    /// Plain sentences for the coach, or the analyst's numbers (Main.qml, remembered).
+    property bool plainWords: true
 
     function show(metricId: string, band: int, lane: int, matchId: string) {
         trend.select(metricId, band, lane, matchId)

@@ -164,3 +164,16 @@ TEST_CASE("a metric's sentence accepts only its three place holders", "[wording]
         CHECK(m.sentence.find("{window}") != std::string::npos);
     }
 }
+
+TEST_CASE("one match of a count target: how rare, and no claim about luck", "[wording]") {
+    ZoneStatus s = offTargetCount();
+    s.window = Window{Window::Kind::Match, 5, 0.3};
+    s.value = 11;
+    s.sum = {11, 1, 1, 11, 1};
+    s.state = FlagState::TooLittleData;
+    s.matchTail = 1.0 / 6889;
+    CHECK(words::unusualMatchSentence(builtin("pre_shot_passes_against"), s, ZoneGrid{}) ==
+          "Their build-up before shots ran through our left-back area 11 times in this match; we aim "
+          "for at most 2. One match cannot judge that target, but a team on its target has a match "
+          "like this only about 1 in 6,889.");
+}
