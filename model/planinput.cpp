@@ -6,6 +6,7 @@
 #include "sessions.h"
 #include "status.h"
 
+#include <algorithm>
 #include <optional>
 
 namespace pitchloop::model {
@@ -59,6 +60,51 @@ std::vector<PlanFocus> openPlanFocuses(ClubRepository& repo, const std::string& 
     return out;
 }
 
+std::vector<PlanFocus> watchedPlanFocuses(ClubRepository& repo, const std::string& squad,
+                                          const std::string& season, const std::string& date,
+                                          const std::vector<PlanFocus>& open, std::size_t most) {
+    std::vector<PlanFocus> out;
+    const SeasonTallies tallies = repo.seasonTallies(squad, season);
+    std::optional<std::size_t> focal;
+    for (std::size_t i = 0; i < tallies.dates.size(); ++i)
+        if (tallies.dates[i] < date) focal = i;
+    const auto targets = repo.targets(squad, season);
+    if (!focal || targets.empty()) return out;
+    const FlagSettings settings = repo.flagSettings();
+    const ZoneGrid grid = repo.tallyGrid();
+    const auto metrics = repo.metrics();
+    const auto statuses = computeStatus(tallies, *focal, metrics, targets, grid, {settings.window}, settings);
+    const auto covered = [&](const ZoneStatus& s) {
+        return std::any_of(open.begin(), open.end(), [&](const PlanFocus& f) {
+            if (f.metric != s.metric) return false;
+            if (s.band == 0 && s.lane == 0) return static_cast<int>(f.zones.size()) == grid.zoneCount();
+            return std::any_of(f.zones.begin(), f.zones.end(),
+                               [&](Zone z) { return z.band == s.band && z.lane == s.lane; });
+        });
+    };
+    for (const ZoneStatus& s : statuses) {
+        if (!s.target || (s.state != FlagState::OffTarget && s.state != FlagState::LikelyOff) || covered(s))
+            continue;
+        const auto metric = std::find_if(metrics.begin(), metrics.end(), [&](const MetricSpec& m) { return m.id == s.metric; });
+        if (metric == metrics.end()) continue;
+        Focus pseudo;
+        pseudo.metric = s.metric;
+        pseudo.grid = grid;
+        if (s.band == 0 && s.lane == 0)
+            for (int i = 0; i < grid.zoneCount(); ++i) pseudo.zones.push_back(grid.zoneAt(i));
+        else
+            pseudo.zones = {Zone{s.band, s.lane}};
+        auto p = planFocus(pseudo, *metric, {s}, settings.window, grid);
+        if (!p || p->severity <= 0) continue;
+        p->watched = true;
+        p->severity /= 2;
+        out.push_back(std::move(*p));
+    }
+    std::stable_sort(out.begin(), out.end(), [](const PlanFocus& a, const PlanFocus& b) { return a.severity > b.severity; });
+    if (out.size() > most) out.resize(most);
+    return out;
+}
+
 PlanRequest planRequestFor(ClubRepository& repo, const std::string& squad,
                            const std::string& date, int minutes, int players,
                            std::vector<std::string>& notes) {
@@ -73,6 +119,8 @@ PlanRequest planRequestFor(ClubRepository& repo, const std::string& squad,
         req.fixtures = fixtures.list(squad, req.season);
         req.yesterday = SessionStore(repo).drillsOn(squad, addDays(date, -1));
         req.focuses = openPlanFocuses(repo, squad, req.season, date, notes);
+        for (auto& w : watchedPlanFocuses(repo, squad, req.season, date, req.focuses))
+            req.focuses.push_back(std::move(w));
     }
     req.caps = fixtures.caps();
     req.drills = DrillBook(repo).list();

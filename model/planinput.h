@@ -20,6 +20,12 @@ std::vector<PlanFocus> openPlanFocuses(ClubRepository& repo, const std::string& 
                                        const std::string& season, const std::string& date,
                                        std::vector<std::string>& notes);
 
+/// Zones that are off target or likely off at that match and that no open focus covers, as
+/// planner focuses (watched, id 0) at half their severity, the most severe `most` of them.
+std::vector<PlanFocus> watchedPlanFocuses(ClubRepository& repo, const std::string& squad,
+                                          const std::string& season, const std::string& date,
+                                          const std::vector<PlanFocus>& open, std::size_t most = 3);
+
 /// A request for the squad's session on `date` (fixtures, focuses, drills, yesterday's
 /// drills, caps); `minutes` and `players` as given. A date that is not a calendar date leaves
 /// the dated parts empty, and planSession reports it.

@@ -71,6 +71,7 @@ std::optional<PlanFocus> planFocus(const Focus& focus, const MetricSpec& metric,
         p.direction = s.target->direction;
         p.target = s.target->value;
         p.pMiss = std::isnan(s.pMiss) ? 0 : s.pMiss;
+        p.state = s.state;
         p.severity = severity(p.direction, p.kind, p.value, p.target, p.pMiss);
         if (!best || p.severity > best->severity) best = p;
     }
@@ -113,9 +114,19 @@ std::string_view toString(BlockRole r) {
 
 namespace {
 
+/// Tags compare as people write them: "Warm-up", "warm up", "warmup" and "warm_up" are one
+/// tag (case, spaces, hyphens and underscores do not count).
+std::string tagKey(std::string_view tag) {
+    std::string key;
+    for (char c : asciiLower(std::string(tag)))
+        if (c != ' ' && c != '-' && c != '_') key += c;
+    return key;
+}
+
 bool hasTag(const Drill& d, std::string_view tag) {
+    const std::string wanted = tagKey(tag);
     return std::any_of(d.tags.begin(), d.tags.end(),
-                       [&](const std::string& t) { return asciiLower(t) == tag; });
+                       [&](const std::string& t) { return tagKey(t) == wanted; });
 }
 
 bool contains(const std::vector<std::int64_t>& ids, std::int64_t id) {
@@ -379,12 +390,16 @@ std::string whyLine(const PlanBlock& b, const Candidate& c, const PlanRequest& r
     if (b.role == BlockRole::CoolDown) s += "cool-down; ";
     if (b.focus) {
         const PlanFocus& f = req.focuses[*b.focus];
-        s += "focus " + (f.id ? std::to_string(f.id) + ", " : std::string()) +
-             (f.metricName.empty() ? f.metric : f.metricName) + " in " +
+        s += (f.watched ? std::string("watched zone, no focus open: ")
+                        : "focus " + (f.id ? std::to_string(f.id) + ", " : std::string())) +
+             (f.metricName.empty() ? f.metric : f.metricName) + " · " +
              (f.zoneName.empty() ? zoneCode(f.band, f.lane) : f.zoneName) + ": " +
              valueText(f.kind, f.value) + " against " +
              (f.direction == Direction::AtLeast ? "at least " : "at most ") +
-             valueText(f.kind, f.target) + " (P(miss) " + words::probability(f.pMiss) + ") — this drill ";
+             valueText(f.kind, f.target) + " (" +
+             (f.state == FlagState::NoTarget ? std::string() : words::stateName(f.state) + ", ") +
+             "P(miss) " + words::probability(f.pMiss) + ")" +
+             (f.severity > 0 ? "" : ", so it has no priority today") + " — this drill ";
         if (contains(f.linkedDrills, c.drill->id))
             s += "is linked to the focus";
         else if (c.drill->zones.empty())
@@ -480,7 +495,9 @@ PlanResult planSession(const PlanRequest& req) {
         else if (d.playersMin > req.playersAvailable)
             c.outBecause = "needs at least " + std::to_string(d.playersMin) + " players; " +
                            std::to_string(req.playersAvailable) + " are available";
-        else if (!c.pinned && contains(req.yesterday, d.id))
+        // A warm-up or cool-down routine may repeat from day to day; a main drill may not
+        // (common practice, no published source).
+        else if (!c.pinned && !c.warmUp && !c.coolDown && contains(req.yesterday, d.id))
             c.outBecause = "was done yesterday (pin it to repeat it)";
         for (std::size_t f = 0; f < req.focuses.size(); ++f)
             if (worksOn(d, req.focuses[f])) c.focuses.push_back(f);
@@ -625,6 +642,37 @@ PlanResult planSession(const PlanRequest& req) {
                                  cands[i].focuses.end())
                 fm.minutes += cands[i].drill->durationMin;
         plan.focusMinutes.push_back(fm);
+    }
+    // A session left short by five minutes or more: say what the drill book lacks today.
+    if (plan.sessionMinutes - plan.minutesUsed >= 5) {
+        int mains = 0, aboveCap = 0, tooFewPlayers = 0, yesterdayOut = 0, removedOut = 0, tooLong = 0;
+        const int room = plan.sessionMinutes - plan.minutesUsed;
+        for (std::size_t i = 0; i < cands.size(); ++i) {
+            const Candidate& c = cands[i];
+            if (c.warmUp || c.coolDown || choice[i]) continue;
+            ++mains;
+            if (contains(req.removed, c.drill->id)) ++removedOut;
+            else if (c.drill->intensity > cap) ++aboveCap;
+            else if (c.drill->playersMin > req.playersAvailable) ++tooFewPlayers;
+            else if (contains(req.yesterday, c.drill->id) && !c.pinned) ++yesterdayOut;
+            else if (c.drill->durationMin > room) ++tooLong;
+        }
+        std::string why;
+        const auto add = [&](int n, const std::string& what) {
+            if (n > 0) why += (why.empty() ? "" : ", ") + std::to_string(n) + " " + what;
+        };
+        add(aboveCap, "above " + capText(cap, day));
+        add(tooFewPlayers, "need more than the " + std::to_string(req.playersAvailable) + " players available");
+        add(yesterdayOut, "done yesterday");
+        add(removedOut, "removed");
+        add(tooLong, "longer than the " + std::to_string(room) + " minutes left");
+        plan.notes.push_back(
+            std::to_string(plan.minutesUsed) + " of " + std::to_string(plan.sessionMinutes) +
+            " minutes planned: the drill book has no other main drill that fits today" +
+            (mains > 0 ? " (of its " + std::to_string(mains) + " other main drills: " + why + ")" : "") +
+            ". A main drill of intensity " + std::to_string(cap) + " or less for " +
+            std::to_string(req.playersAvailable) + " players, up to " + std::to_string(room) +
+            " minutes long, would fill it.");
     }
     result.plan = std::move(plan);
     return result;

@@ -62,6 +62,10 @@ struct PlanFocus {
     double target = 0;
     double pMiss = 0;
     double severity = 0; ///< 0–1; see severity()
+    FlagState state = FlagState::NoTarget; ///< the zone's state over the window
+    /// A zone off target or likely off that no open focus covers (id 0): it can earn time at
+    /// half a focus's weight (docs/planner.md).
+    bool watched = false;
 };
 
 /// The planner's view of a stored focus, from the statuses of the latest match: among the
@@ -127,6 +131,10 @@ struct Plan {
     /// The integer program's value (docs/planner.md): Σ focus weight × credited minutes, plus
     /// one point a minute used.
     long objective = 0;
+    /// What the coach should know about the plan: when the session is not filled, what the
+    /// drill book lacks ("no main drill of intensity 3 or less for 16 players that was not done
+    /// yesterday"). Empty when the session is full.
+    std::vector<std::string> notes;
     std::string caution{kPlanCaution};
 };
 

@@ -9,6 +9,7 @@
 #include "planner.h"
 #include "sessions.h"
 #include "status.h"
+#include "wording.h"
 
 #include <algorithm>
 #include <cstdio>
@@ -314,7 +315,11 @@ int PlanVerbs::runPlan(ClubRepository& repo, std::ostream& out, std::ostream& er
         for (const auto& fm : p.focusMinutes) {
             const PlanFocus& f = req.focuses[fm.focus];
             focusMinutes.push_back({{"focus_id", fm.focusId},
+                                    {"watched", f.watched},
                                     {"metric", f.metric},
+                                    {"band", f.band},
+                                    {"lane", f.lane},
+                                    {"state", toString(f.state)},
                                     {"severity", f.severity},
                                     {"minutes", fm.minutes}});
         }
@@ -328,6 +333,7 @@ int PlanVerbs::runPlan(ClubRepository& repo, std::ostream& out, std::ostream& er
                               {"blocks", blocks},
                               {"focus_minutes", focusMinutes},
                               {"objective", p.objective},
+                              {"notes", p.notes},
                               {"caution", p.caution}}
                    .dump(2)
             << "\n";
@@ -346,20 +352,24 @@ int PlanVerbs::runPlan(ClubRepository& repo, std::ostream& out, std::ostream& er
             out << line << "         " << b.why << "\n";
         }
         if (!p.focusMinutes.empty()) {
-            out << "\nMinutes per open focus (most severe first):\n";
+            out << "\nMinutes per open focus and watched zone (most severe first):\n";
             std::vector<FocusMinutes> ranked = p.focusMinutes;
             std::stable_sort(ranked.begin(), ranked.end(), [&](const auto& a, const auto& b) {
                 return req.focuses[a.focus].severity > req.focuses[b.focus].severity;
             });
             for (const auto& fm : ranked) {
                 const PlanFocus& f = req.focuses[fm.focus];
-                char line[200];
-                std::snprintf(line, sizeof line, "  focus %-4lld %-26s severity %.2f  %3d min\n",
-                              static_cast<long long>(fm.focusId), f.metric.c_str(), f.severity,
-                              fm.minutes);
+                const std::string who = f.watched ? std::string("watched") : "focus " + std::to_string(fm.focusId);
+                const std::string what = (f.metricName.empty() ? f.metric : f.metricName) + " · " + f.zoneName;
+                const std::string state =
+                    words::stateName(f.state) + (f.severity > 0 ? "" : ": no priority today");
+                char line[400];
+                std::snprintf(line, sizeof line, "  %-10s %-70s %-32s %3d min\n", who.c_str(), what.c_str(),
+                              state.c_str(), fm.minutes);
                 out << line;
             }
         }
+        for (const auto& n : p.notes) out << "\nNote: " << n << "\n";
         out << "\n" << p.caution << "\n";
     }
     if (m_save) {

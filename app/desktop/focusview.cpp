@@ -237,6 +237,7 @@ void FocusView::clearDetail() {
     m_caveatText.clear();
     m_trainingText.clear();
     m_chartTitle.clear();
+    m_chartBaselineMatches = 0;
     m_chartReadingText.clear();
     m_reviewJson.clear();
     m_chart->clear();
@@ -427,6 +428,7 @@ void FocusView::showReview(const Review& r, bool stored) {
                          : tr("Training: %1.").arg(qs(r.trainingNote));
     m_chart->reset(r);
     const ChartReading c = readChart(r);
+    m_chartBaselineMatches = c.beforeMatches;
     m_chartTitle = tr("%1 · centre line and limits from the %2 baseline matches, allowing for "
                       "the usual swing from match to match (NIST/SEMATECH e-Handbook §6.3.3.2)")
                        .arg(m_chart->kindText())

@@ -77,6 +77,8 @@ class FocusView : public pitchloop::desktop::SessionClient {
     Q_PROPERTY(QString caveatText READ caveatText NOTIFY detailChanged)
     Q_PROPERTY(QString trainingText READ trainingText NOTIFY detailChanged)
     Q_PROPERTY(QString chartTitle READ chartTitle NOTIFY detailChanged)
+    /// How many matches before the start the chart's centre line and limits come from.
+    Q_PROPERTY(int chartBaselineMatches READ chartBaselineMatches NOTIFY detailChanged)
     Q_PROPERTY(QString chartReadingText READ chartReadingText NOTIFY detailChanged)
     Q_PROPERTY(pitchloop::desktop::ControlChartModel* chart READ chart CONSTANT)
     Q_PROPERTY(QVariantList verdictOptions READ verdictOptions CONSTANT)
@@ -157,6 +159,7 @@ public:
     QString caveatText() const { return m_caveatText; }
     QString trainingText() const { return m_trainingText; }
     QString chartTitle() const { return m_chartTitle; }
+    int chartBaselineMatches() const { return m_chartBaselineMatches; }
     QString chartReadingText() const { return m_chartReadingText; }
     ControlChartModel* chart() const { return m_chart; }
     QVariantList verdictOptions() const;
@@ -274,6 +277,7 @@ private:
     QString m_reviewProblem, m_reviewSourceText, m_beforeValueText, m_afterValueText, m_beforeText,
         m_afterText, m_changeText, m_testText, m_beliefText, m_caveatText, m_trainingText, m_chartTitle,
         m_chartReadingText;
+    int m_chartBaselineMatches = 0;
     std::string m_reviewJson; ///< the computed review, stored with a verdict
     ControlChartModel* m_chart;
     int m_verdictChoice = -1;

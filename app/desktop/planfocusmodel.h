@@ -14,7 +14,7 @@ struct PlanFocusRow {
     qint64 focusId = 0;
     QString title;        ///< "Focus 1 · Pre-shot passes against"
     QString zoneText;     ///< "Band 2 · lane 5"
-    QString severityText; ///< "severity 0.42"
+    QString severityText; ///< the zone's state today: "off target", "back on target: no priority"
     int minutes = 0;
     QString minutesText;  ///< "35 min"
     double share = 0;     ///< minutes as a share of the session's minutes, 0–1 (bar length)

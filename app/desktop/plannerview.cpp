@@ -14,6 +14,7 @@
 #include "planweekmodel.h"
 #include "printing.h"
 #include "sessions.h"
+#include "wording.h"
 
 #include <QDate>
 #include <QFile>
@@ -356,6 +357,7 @@ void PlannerView::dropPlan() {
     m_problem.clear();
     m_notes.clear();
     m_planSummary.clear();
+    m_planNotes.clear();
     m_adjustmentsText.clear();
     m_planReplacesSaved = false;
     m_blocks->reset({});
@@ -492,6 +494,7 @@ void PlannerView::showPlan() {
     auto focusTitle = [&](const PlanFocus& f) {
         const MetricSpec* metric = s ? s->metricSpec(f.metric) : nullptr;
         const QString name = metric ? qs(metric->name) : qs(f.metric);
+        if (f.watched) return tr("Watched · %1").arg(name);
         return f.id ? tr("Focus %1 · %2").arg(f.id).arg(name) : name;
     };
 
@@ -526,7 +529,8 @@ void PlannerView::showPlan() {
             row.focusId = fm.focusId;
             row.title = focusTitle(f);
             row.zoneText = zoneText(f.band, f.lane, session()->grid());
-            row.severityText = tr("severity %1").arg(QLocale().toString(f.severity, 'f', 2));
+            row.severityText = f.severity > 0 ? qs(words::stateName(f.state))
+                                              : tr("%1: no priority today").arg(qs(words::stateName(f.state)));
             row.minutes = fm.minutes;
             row.minutesText = tr("%1 min").arg(fm.minutes);
             row.share = m_plan->sessionMinutes > 0
@@ -539,8 +543,12 @@ void PlannerView::showPlan() {
                             .arg(qs(p.day.label), capText(p.cap).toLower(), QString::number(p.minutesUsed),
                                  QString::number(p.sessionMinutes),
                                  QString::number(p.playersAvailable));
+        QStringList planNotes;
+        for (const auto& n : p.notes) planNotes << qs(n);
+        m_planNotes = planNotes.join(QLatin1Char('\n'));
     } else {
         m_planSummary.clear();
+        m_planNotes.clear();
     }
     m_blocks->reset(std::move(blocks));
     m_focusMinutes->reset(std::move(focuses));

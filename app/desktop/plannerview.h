@@ -63,6 +63,8 @@ class PlannerView : public pitchloop::desktop::SessionClient {
     Q_PROPERTY(QString planDate READ planDate NOTIFY planChanged)
     /// "MD-3 · cap 4 (high) · 85 of 90 minutes · 18 players"
     Q_PROPERTY(QString planSummary READ planSummary NOTIFY planChanged)
+    /// What the plan lacks, e.g. a session left short and what the drill book would need.
+    Q_PROPERTY(QString planNotes READ planNotes NOTIFY planChanged)
     /// Why the planner gave no session, in plain words; empty with a plan.
     Q_PROPERTY(QString problem READ problem NOTIFY planChanged)
     /// What the planner left out of its request (focuses it could not rank), one a line.
@@ -105,6 +107,7 @@ public:
     bool hasPlan() const { return m_plan.has_value(); }
     QString planDate() const;
     QString planSummary() const { return m_planSummary; }
+    QString planNotes() const { return m_planNotes; }
     QString problem() const { return m_problem; }
     QString notes() const { return m_notes; }
     QString adjustmentsText() const { return m_adjustmentsText; }
@@ -207,6 +210,7 @@ private:
     QString m_problem;
     QString m_notes;
     QString m_planSummary;
+    QString m_planNotes;
     QString m_adjustmentsText;
     bool m_planReplacesSaved = false;
     bool m_busy = false;

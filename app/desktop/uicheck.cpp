@@ -73,21 +73,28 @@ QStringList visitPages(QQuickWindow* window, const QString& screenshotDir) {
     if (pages <= 0) problems << QStringLiteral("the main window lists no pages");
     if (!screenshotDir.isEmpty() && !QDir().mkpath(screenshotDir))
         problems << QStringLiteral("cannot create %1").arg(screenshotDir);
-    for (int page = 0; page < pages; ++page) {
-        const QString name = page < names.size() ? names[page] : QString::number(page);
-        window->setProperty("currentPage", page);
-        if (window->property("currentPage").toInt() != page) {
-            problems << QStringLiteral("page %1 cannot be shown").arg(name);
-            continue;
+    // Every page in both layers of words: plain words ("04-debrief.png"), then the numbers
+    // ("04-debrief-numbers.png"); the layer the window had is restored afterwards.
+    const QVariant layer = window->property("plainWords");
+    for (const bool plain : {true, false}) {
+        window->setProperty("plainWords", plain);
+        for (int page = 0; page < pages; ++page) {
+            const QString name = page < names.size() ? names[page] : QString::number(page);
+            window->setProperty("currentPage", page);
+            if (window->property("currentPage").toInt() != page) {
+                problems << QStringLiteral("page %1 cannot be shown").arg(name);
+                continue;
+            }
+            // Two frames: Canvas items paint on the frame after they are first laid out.
+            if (!waitForFrames(window, 2)) {
+                problems << QStringLiteral("page %1 was not drawn").arg(name);
+                continue;
+            }
+            if (screenshotDir.isEmpty()) continue;
+            problems << save(window, screenshotDir, page + 1, plain ? name : name + QStringLiteral("-numbers"));
         }
-        // Two frames: Canvas items paint on the frame after they are first laid out.
-        if (!waitForFrames(window, 2)) {
-            problems << QStringLiteral("page %1 was not drawn").arg(name);
-            continue;
-        }
-        if (screenshotDir.isEmpty()) continue;
-        problems << save(window, screenshotDir, page + 1, name);
     }
+    if (layer.isValid()) window->setProperty("plainWords", layer);
     // A delegate that failed to compile shows only as "Component is not ready"; name it.
     for (const QQmlComponent* c : window->findChildren<QQmlComponent*>())
         if (c->isError()) problems << QStringLiteral("%1: %2").arg(c->url().toString(), c->errorString().trimmed());

@@ -22,6 +22,8 @@ public:
 /// `pageNames` properties), waits until it is drawn, and, when `screenshotDir` is not empty,
 /// saves it there as NN-name.png. Returns the problems found (a page not drawn, a file not
 /// written), empty when none.
+/// (Every page is shown in both layers of words, plain first; with a folder, the numbers' shots
+/// end in "-numbers".)
 QStringList visitPages(QQuickWindow* window, const QString& screenshotDir);
 
 /// Waits until what the window shows now is drawn and, when `screenshotDir` is not empty, saves

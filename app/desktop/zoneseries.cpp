@@ -5,6 +5,7 @@
 #include "metriclistmodel.h"
 #include "pitchgeometry.h"
 #include "seriesmodel.h"
+#include "wording.h"
 #include "zonemapmodel.h"
 #include "zonestate.h"
 
@@ -65,6 +66,7 @@ void ZoneSeries::clear() {
     m_summaryCertainty.clear();
     m_summaryMatchText.clear();
     m_summaryEwmaText.clear();
+    m_summaryCoachText.clear();
     m_focusSpans.clear();
     m_focusLines.clear();
     m_series->reset({}, {}, {});
@@ -144,7 +146,7 @@ void ZoneSeries::refresh() {
     m_ewmaText = desktop::windowText(w.ewma);
     m_levelText = desktop::levelText(s->flagSettings().level);
     m_ruleText = tr("Off target when the chance that the true value misses its target is at least "
-                    "%1 over %2; Watch when the chance it misses the target's watch line is at "
+                    "%1 over %2; close to the line when the chance it misses the target's watch line is at "
                     "least %3.")
                      .arg(QLocale().toString(s->flagSettings().offThreshold, 'g', 4),
                           windowPhrase(w.judged),
@@ -209,6 +211,7 @@ void ZoneSeries::refresh() {
         m_summaryState = ZoneState::from(b->state);
         m_summaryStateText = stateText(b->state);
         m_summaryCertainty = certaintyText(b->pMiss);
+        m_summaryCoachText = QString::fromStdString(words::coachSentence(*metric, *b, grid));
     }
     if (const ZoneStatus* a = season->find(*focal, metric->id, m_band, m_lane, w.match))
         m_summaryMatchText = tr("This match alone: %1 · %2")

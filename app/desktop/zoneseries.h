@@ -59,6 +59,8 @@ class ZoneSeries : public pitchloop::desktop::SessionClient {
     /// "This match alone: 42.0% · n = 143" and "EWMA, λ 0.30: 41.8%" at the chosen match.
     Q_PROPERTY(QString summaryMatchText READ summaryMatchText NOTIFY changed)
     Q_PROPERTY(QString summaryEwmaText READ summaryEwmaText NOTIFY changed)
+    /// The judged window's value in the coach's words (model/wording.h); empty without one.
+    Q_PROPERTY(QString summaryCoachText READ summaryCoachText NOTIFY changed)
     /// The focuses this zone has had for this metric in the season, on the chart: a list of
     /// {label: "F1", startRow, endRow (-1 while open), closed}; rows index the series.
     Q_PROPERTY(QVariantList focusSpans READ focusSpans NOTIFY changed)
@@ -102,6 +104,7 @@ public:
     QString summaryCertainty() const { return m_summaryCertainty; }
     QString summaryMatchText() const { return m_summaryMatchText; }
     QString summaryEwmaText() const { return m_summaryEwmaText; }
+    QString summaryCoachText() const { return m_summaryCoachText; }
     QVariantList focusSpans() const { return m_focusSpans; }
     QStringList focusLines() const { return m_focusLines; }
     SeriesModel* series() const { return m_series; }
@@ -146,6 +149,7 @@ private:
     QString m_summaryCertainty;
     QString m_summaryMatchText;
     QString m_summaryEwmaText;
+    QString m_summaryCoachText;
     QVariantList m_focusSpans;
     QStringList m_focusLines;
     SeriesModel* m_series;

@@ -11,6 +11,8 @@ Card {
     id: root
 
     required property FocusView view
+    /// Plain words for the chart and its key, or the analyst's terms.
+    property bool plainWords: true
 
     title: qsTr("Follow-up review")
 
@@ -76,7 +78,9 @@ Card {
         visible: root.view.hasReview
         Layout.fillWidth: true
         Layout.topMargin: Theme.gap
-        text: root.view.chartTitle
+        text: root.plainWords
+              ? qsTr("Each match against the usual range of the %1 matches before training started (the range allows for the usual swing from match to match)").arg(root.view.chartBaselineMatches)
+              : root.view.chartTitle
         color: Theme.textMuted
         font.pixelSize: Theme.fontSmall
         font.bold: true
@@ -97,11 +101,11 @@ Card {
             Rectangle { width: 8; height: 8; radius: 4; color: "#3b4352"; anchors.centerIn: parent }
         }
         KeyEntry {
-            text: qsTr("centre line")
+            text: root.plainWords ? qsTr("usual level before training") : qsTr("centre line")
             Rectangle { width: 18; height: 2; color: "#7c8594"; anchors.centerIn: parent }
         }
         KeyEntry {
-            text: qsTr("3σ limits")
+            text: root.plainWords ? qsTr("usual range before training") : qsTr("3σ limits")
             Row {
                 anchors.centerIn: parent
                 spacing: 3
@@ -112,15 +116,15 @@ Card {
             }
         }
         KeyEntry {
-            text: qsTr("EWMA")
+            text: root.plainWords ? qsTr("recent form") : qsTr("EWMA")
             Rectangle { width: 18; height: 3; color: Theme.accent; anchors.centerIn: parent }
         }
         KeyEntry {
-            text: qsTr("beyond a limit, better side")
+            text: root.plainWords ? qsTr("outside the usual range, better") : qsTr("beyond a limit, better side")
             StateMarker { zoneState: ZoneState.OnTarget; size: 13; anchors.centerIn: parent }
         }
         KeyEntry {
-            text: qsTr("worse side")
+            text: root.plainWords ? qsTr("outside the usual range, worse") : qsTr("worse side")
             StateMarker { zoneState: ZoneState.OffTarget; size: 13; anchors.centerIn: parent }
         }
     }

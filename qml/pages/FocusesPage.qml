@@ -191,6 +191,7 @@ Page {
                         Layout.fillWidth: true
                         Layout.alignment: Qt.AlignTop
                         view: board
+                        plainWords: root.plainWords
                     }
 
                     ColumnLayout {

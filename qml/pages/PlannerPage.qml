@@ -318,6 +318,15 @@ Page {
                     elide: Text.ElideRight
                 }
                 Label {
+                    objectName: "planNotes"
+                    visible: planner.hasPlan && planner.planNotes.length > 0
+                    Layout.fillWidth: true
+                    text: planner.planNotes
+                    color: Theme.error
+                    wrapMode: Text.WordWrap
+                    font.pixelSize: Theme.fontSmall
+                }
+                Label {
                     visible: !planner.hasPlan && planner.problem.length === 0
                     Layout.fillWidth: true
                     text: qsTr("Choose a day above, type the session's minutes and the players available, and press Propose. The planner picks drills from the drill book for the open focuses, within the day's intensity cap.")

@@ -119,16 +119,27 @@ Page {
                         size: 22
                     }
                     Label {
-                        text: trend.summaryStateText + (trend.summaryCertainty.length > 0 ? "  ·  " + trend.summaryCertainty : "")
+                        text: trend.summaryStateText + (!root.plainWords && trend.summaryCertainty.length > 0
+                                                        ? "  ·  " + trend.summaryCertainty : "")
                         font.pixelSize: Theme.fontLarge
                         color: Theme.text
                     }
                 }
                 Label {
+                    objectName: "zoneCoachText"
+                    visible: root.plainWords && trend.summaryCoachText.length > 0
+                    Layout.fillWidth: true
+                    text: trend.summaryCoachText
+                    wrapMode: Text.WordWrap
+                    color: Theme.text
+                }
+                Label {
+                    visible: !root.plainWords
                     text: trend.summaryDetail
                     color: Theme.text
                 }
                 Label {
+                    visible: !root.plainWords
                     text: trend.summaryTarget
                     color: Theme.text
                 }
@@ -138,13 +149,16 @@ Page {
                     color: Theme.textMuted
                 }
                 Label {
+                    visible: !root.plainWords
                     text: trend.summaryEwmaText
                     color: Theme.textMuted
                 }
                 Item { Layout.fillHeight: true }
                 Label {
                     Layout.fillWidth: true
-                    text: trend.ruleText
+                    text: root.plainWords
+                          ? qsTr("A zone is off target only when bad luck is very unlikely to explain it; close to the line when it is on the right side of its target, but only just.")
+                          : trend.ruleText
                     wrapMode: Text.WordWrap
                     color: Theme.textMuted
                     font.pixelSize: Theme.fontSmall
@@ -176,8 +190,8 @@ Page {
             }
             SeriesKey {
                 windowText: trend.windowText
-                ewmaText: trend.ewmaText
-                levelText: trend.levelText
+                ewmaText: root.plainWords ? qsTr("Recent form (recent matches count most)") : trend.ewmaText
+                levelText: root.plainWords ? qsTr("Likely range") : trend.levelText
             }
             Label {
                 Layout.fillWidth: true

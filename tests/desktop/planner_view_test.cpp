@@ -134,11 +134,15 @@ void PlannerViewTest::checkAgainstModel(PlannerView& view, const model::PlanRequ
     QCOMPARE(rows.back().role, QStringLiteral("Cool-down"));
     const auto& focuses = view.focusMinutes()->rows();
     QCOMPARE(focuses.size(), expected.plan->focusMinutes.size());
-    for (const model::FocusMinutes& fm : expected.plan->focusMinutes) {
-        const auto row = std::find_if(focuses.begin(), focuses.end(),
-                                      [&](const PlanFocusRow& r) { return r.focusId == fm.focusId; });
-        QVERIFY(row != focuses.end());
-        QCOMPARE(row->minutes, fm.minutes);
+    // Most severe first, as the model ranks them (watched zones have no focus id, so rows are
+    // compared in order).
+    std::vector<model::FocusMinutes> ranked = expected.plan->focusMinutes;
+    std::stable_sort(ranked.begin(), ranked.end(), [&](const auto& a, const auto& b) {
+        return request.focuses[a.focus].severity > request.focuses[b.focus].severity;
+    });
+    for (std::size_t i = 0; i < ranked.size(); ++i) {
+        QCOMPARE(focuses[i].focusId, ranked[i].focusId);
+        QCOMPARE(focuses[i].minutes, ranked[i].minutes);
     }
     QVERIFY(view.planSummary().contains(QString::number(expected.plan->minutesUsed)));
     QCOMPARE(view.caution(), QString::fromUtf8(model::kPlanCaution.data(),

@@ -205,10 +205,10 @@ TEST_CASE("a hand-worked plan: coverage, order and one line of why per pick", "[
     CHECK_THAT(p.caution, Contains("qualified staff") && Contains("advice"));
     CHECK(
         p.blocks[1].why ==
-        "focus 11, pre_shot_passes_against in B2·L5: 6.8 a match against at most 2 a "
+        "focus 11, pre_shot_passes_against · B2·L5: 6.8 a match against at most 2 a "
         "match (P(miss) > 0.999) — this drill works on pre_shot_passes_against in the focus's zones");
     CHECK(p.blocks[2].why ==
-          "focus 12, shot_after_loss in B5·L3: 5.0% against at least 12.0% (P(miss) 0.97) "
+          "focus 12, shot_after_loss · B5·L3: 5.0% against at least 12.0% (P(miss) 0.97) "
           "— this drill works on shot_after_loss in the focus's zones");
     CHECK(p.blocks[0].why == "warm-up; tagged warm_up, intensity 2 within the cap of 4 for MD-3");
     CHECK(p.blocks[3].why ==
@@ -255,19 +255,19 @@ TEST_CASE("yesterday's drills are left out unless pinned; pins, removals and swa
     // 3 and 4 tie on value (and so do warm-ups 1 and 7); the smaller sum of id ranks wins.
     CHECK(idsOf(plan(r)) == std::vector<std::int64_t>{1, 3, 2});
 
-    r.yesterday = {3, 1};
-    CHECK(idsOf(plan(r)) == std::vector<std::int64_t>{7, 4, 2});
+    r.yesterday = {3, 1}; // main drill 3 is left out; warm-up 1 may repeat (a routine)
+    CHECK(idsOf(plan(r)) == std::vector<std::int64_t>{1, 4, 2});
 
     r.pinned = {3}; // the coach wants yesterday's drill again
     Plan p = plan(r);
-    CHECK(idsOf(p) == std::vector<std::int64_t>{7, 3, 2});
+    CHECK(idsOf(p) == std::vector<std::int64_t>{1, 3, 2});
     CHECK(p.blocks[1].pinned);
-    CHECK_THAT(p.blocks[1].why, Contains("pinned by the coach; focus 1 press_rate"));
+    CHECK_THAT(p.blocks[1].why, Contains("pinned by the coach; focus 1, press_rate"));
 
     r.pinned.clear();
     r.removed = {4}; // 3 was done yesterday, 4 removed: only the drill on no focus is left
     p = plan(r);
-    CHECK(idsOf(p) == std::vector<std::int64_t>{7, 5, 2});
+    CHECK(idsOf(p) == std::vector<std::int64_t>{1, 5, 2});
     CHECK(p.blocks[1].why ==
           "uses the remaining time (works on no open focus); intensity 3 within the cap of 4 "
           "for MD-3");
@@ -306,7 +306,7 @@ TEST_CASE("a drill linked to a focus counts for it, and the why says so", "[plan
     const auto res = planSession(r);
     REQUIRE(res.plan);
     CHECK(res.plan->blocks.at(1).why ==
-          "focus 3, losses in B4·L4: 9.2 a match against at most 7 a match (P(miss) 0.93) "
+          "focus 3, losses · B4·L4: 9.2 a match against at most 7 a match (P(miss) 0.93) "
           "— this drill is linked to the focus");
     CHECK(res.plan->focusMinutes.at(0).minutes == 20);
 }
@@ -491,8 +491,9 @@ BruteForce bruteForce(const PlanRequest& r, int cap) {
                 ok = !pinned;
                 continue;
             }
+            // A warm-up or cool-down routine may repeat from yesterday; a main drill may not.
             ok = d.intensity <= cap && d.playersMin <= r.playersAvailable && !in(r.removed, d.id) &&
-                 (pinned || !in(r.yesterday, d.id));
+                 (pinned || role != 2 || !in(r.yesterday, d.id));
             warm += role == 1;
             cool += role == 3;
             minutes += d.durationMin;
@@ -604,7 +605,7 @@ void requireRulesKept(const PlanRequest& r, const Plan& p, int cap) {
         REQUIRE(d.intensity <= cap);
         REQUIRE(d.playersMin <= r.playersAvailable);
         REQUIRE_FALSE(in(r.removed, d.id));
-        REQUIRE((in(r.pinned, d.id) || !in(r.yesterday, d.id)));
+        REQUIRE((in(r.pinned, d.id) || b.role != BlockRole::Main || !in(r.yesterday, d.id)));
         REQUIRE_FALSE(b.why.empty());
         REQUIRE(b.why.find('\n') == std::string::npos);
         if (i == 0)
@@ -666,4 +667,62 @@ TEST_CASE("the plan is optimal and keeps every rule: GLPK against brute force on
     CHECK(feasible >= 150);
     CHECK(infeasible >= 60);
     CHECK(withFocusMinutes >= 60);
+}
+
+TEST_CASE("warm-ups and cool-downs are known by their tag however it is spelt", "[planner]") {
+    PlanRequest r = baseRequest();
+    r.drills = {drill(1, "Rondo warm-up", 10, 2, {}, {}, {"Warm-up"}),
+                drill(2, "Stretch and walk", 10, 1, {}, {}, {"cool down"}),
+                drill(3, "Press", 20, 3)};
+    r.minutes = 40;
+    const PlanResult res = planSession(r);
+    INFO(res.problem);
+    REQUIRE(res.plan);
+    CHECK(idsOf(*res.plan) == std::vector<std::int64_t>{1, 3, 2});
+    CHECK(res.plan->blocks.front().role == BlockRole::WarmUp);
+    CHECK(res.plan->blocks.back().role == BlockRole::CoolDown);
+}
+
+TEST_CASE("a session left short says what the drill book lacks", "[planner]") {
+    PlanRequest r = baseRequest(); // MD-3, cap 4, 14 players
+    r.drills.push_back(drill(3, "Big game", 30, 5));                    // above the cap
+    r.drills.push_back(drill(4, "Eleven a side", 30, 3, {}, {}, {}, 22)); // too many players
+    r.drills.push_back(drill(5, "Press", 20, 3));
+    r.yesterday = {5, 1}; // the main drill is out; the warm-up routine may repeat
+    r.minutes = 60;
+    const PlanResult res = planSession(r);
+    INFO(res.problem);
+    REQUIRE(res.plan);
+    CHECK(idsOf(*res.plan) == std::vector<std::int64_t>{1, 2});
+    REQUIRE(res.plan->notes.size() == 1);
+    CHECK(res.plan->notes[0] ==
+          "20 of 60 minutes planned: the drill book has no other main drill that fits today (of its "
+          "3 other main drills: 1 above the cap of 4 for MD-3, 1 need more than the 14 players "
+          "available, 1 done yesterday). A main drill of intensity 4 or less for 14 players, up to 40 "
+          "minutes long, would fill it.");
+    // A full session has no note.
+    r.yesterday.clear();
+    r.minutes = 40;
+    const PlanResult full = planSession(r);
+    REQUIRE(full.plan);
+    CHECK(full.plan->notes.empty());
+}
+
+TEST_CASE("a focus back on target has no priority, and the why says so", "[planner]") {
+    PlanRequest r = baseRequest();
+    r.drills.push_back(drill(3, "Cover", 20, 3, {"losses"}, {{4, 4}}));
+    PlanFocus f = focusOf(3, "losses", {{4, 4}}, 0);
+    f.kind = MetricKind::Count;
+    f.direction = Direction::AtMost;
+    f.value = 4.2;
+    f.target = 7;
+    f.pMiss = 0.04;
+    f.state = FlagState::OnTarget;
+    r.focuses = {f};
+    r.minutes = 40;
+    const PlanResult res = planSession(r);
+    REQUIRE(res.plan);
+    CHECK(res.plan->blocks.at(1).why ==
+          "focus 3, losses · B4·L4: 4.2 a match against at most 7 a match (on target, P(miss) 0.04), "
+          "so it has no priority today — this drill works on losses in the focus's zones");
 }
