@@ -3,8 +3,11 @@
 #include "clubsession.h"
 #include "debrieflistmodel.h"
 #include "display.h"
+#include "wording.h"
 
 #include <QLocale>
+
+#include <cmath>
 
 namespace pitchloop::desktop {
 
@@ -30,6 +33,7 @@ void SeasonOverview::clear() {
     m_judged = m_tooLittleData = m_slipped = m_watch = m_recovered = 0;
     m_chanceFlags = 0;
     m_chanceText.clear();
+    m_plainChanceText.clear();
     m_items->reset({});
 }
 
@@ -77,6 +81,12 @@ void SeasonOverview::refresh() {
                           "at most about %1 of these %2 zones at some point this season.")
                            .arg(QLocale().toString(debriefed.seasonChanceFlags, 'f', 1))
                            .arg(debriefed.judged);
+        const double expected = debriefed.seasonChanceFlags;
+        m_plainChanceText =
+            expected < 1 ? tr("Bad luck alone would flag fewer than one of these %1 zones off target in a season.").arg(debriefed.judged)
+                         : tr("Bad luck alone would flag about %1 of these %2 zones off target in a season.")
+                               .arg(QString::fromStdString(words::count(std::round(expected))))
+                               .arg(debriefed.judged);
         const QString window = windowPhrase(debriefed.window);
         auto rows = debriefRows(tr("Off target over %1").arg(window), debriefed.slippedInWindow,
                                 s->metricsById(), s->grid(), debriefed.previousMatchId, true);

@@ -38,6 +38,8 @@ class SeasonOverview : public pitchloop::desktop::SessionClient {
     /// Expected off-target flags among the judged zones if every true value sat on its target.
     Q_PROPERTY(double chanceFlags READ chanceFlags NOTIFY changed)
     Q_PROPERTY(QString chanceText READ chanceText NOTIFY changed)
+    /// The same in the coach's words.
+    Q_PROPERTY(QString plainChanceText READ plainChanceText NOTIFY changed)
     Q_PROPERTY(pitchloop::desktop::DebriefListModel* items READ items CONSTANT)
 public:
     explicit SeasonOverview(QObject* parent = nullptr);
@@ -63,6 +65,7 @@ public:
     int recoveredCount() const { return m_recovered; }
     double chanceFlags() const { return m_chanceFlags; }
     QString chanceText() const { return m_chanceText; }
+    QString plainChanceText() const { return m_plainChanceText; }
     DebriefListModel* items() const { return m_items; }
 
 signals:
@@ -94,6 +97,7 @@ private:
     int m_recovered = 0;
     double m_chanceFlags = 0;
     QString m_chanceText;
+    QString m_plainChanceText;
     DebriefListModel* m_items;
 };
 

@@ -67,10 +67,17 @@ Card {
         }
     }
     Line { visible: root.view.hasReview; text: root.view.testText; font.bold: true }
-    Line { visible: root.view.hasReview; text: root.view.beliefText }
-    Line { visible: root.view.hasReview; text: root.view.changeText }
-    Line { visible: root.view.hasReview; text: root.view.beforeText }
-    Line { visible: root.view.hasReview; text: root.view.afterText }
+    // The numbers behind the finding: the analyst's layer (in plain words they are one
+    // switch away, in the side bar).
+    Line { visible: root.view.hasReview && !root.plainWords; text: root.view.beliefText }
+    Line { visible: root.view.hasReview && !root.plainWords; text: root.view.changeText }
+    Line { visible: root.view.hasReview && !root.plainWords; text: root.view.beforeText }
+    Line { visible: root.view.hasReview && !root.plainWords; text: root.view.afterText }
+    Line {
+        visible: root.view.hasReview && root.plainWords
+        text: qsTr("The numbers behind this (chances, ranges, the matches compared) are under Numbers at the bottom of the side bar.")
+        color: Theme.textMuted
+    }
     Line { visible: root.view.hasReview; text: root.view.caveatText; color: Theme.textMuted }
     Line { visible: root.view.hasReview; text: root.view.trainingText; color: Theme.textMuted }
 

@@ -36,9 +36,11 @@ ItemDelegate {
     readonly property int lineHeight: plainWords ? 62 : 46
     height: (firstInSection ? 30 : 0) + lineHeight
 
-    ToolTip.visible: hovered && ToolTip.text.length > 0
+    /// The other layer, shown on hover.
+    readonly property string hoverText: plainWords ? analystText : coachText
+    ToolTip.visible: hovered && hoverText.length > 0
     ToolTip.delay: 400
-    ToolTip.text: plainWords ? analystText : coachText
+    ToolTip.text: hoverText
     padding: 0
     topPadding: firstInSection ? 30 : 0
     topInset: topPadding
@@ -78,7 +80,7 @@ ItemDelegate {
             size: 15
         }
         Label {
-            Layout.preferredWidth: 92
+            Layout.preferredWidth: root.plainWords ? 124 : 92
             text: root.stateText
             color: Theme.text
             font.bold: root.zoneState === ZoneState.OffTarget

@@ -205,7 +205,7 @@ Page {
                 Label {
                     Layout.fillWidth: true
                     wrapMode: Text.WordWrap
-                    text: overview.chanceText
+                    text: root.plainWords ? overview.plainChanceText : overview.chanceText
                     color: Theme.textMuted
                     font.pixelSize: Theme.fontSmall
                 }
