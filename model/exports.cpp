@@ -1,7 +1,11 @@
 #include "exports.h"
 
+#include <algorithm>
 #include <cmath>
 #include <cstdio>
+#include <filesystem>
+#include <fstream>
+#include <random>
 
 namespace pitchloop::model {
 
@@ -77,6 +81,41 @@ std::string talliesCsv(const std::vector<TallyRow>& rows) {
         out += kCrlf;
     }
     return out;
+}
+
+void writeFileAtomically(const std::string& path, const std::string& bytes) {
+    namespace fs = std::filesystem;
+    const fs::path target(path);
+    std::random_device rd;
+    const fs::path temp =
+        target.parent_path() /
+        ("." + target.filename().string() + ".part-" + std::to_string(rd() % 1000000));
+    {
+        std::ofstream f(temp, std::ios::binary | std::ios::trunc);
+        if (!f) throw IoError(path + ": cannot be written (is the folder there and writable?)");
+        f.write(bytes.data(), static_cast<std::streamsize>(bytes.size()));
+        f.close();
+        if (!f) {
+            std::error_code ignored;
+            fs::remove(temp, ignored);
+            throw IoError(path + ": writing failed (disk full?)");
+        }
+    }
+    std::error_code ec;
+    fs::rename(temp, target, ec);
+    if (ec) {
+        std::error_code ignored;
+        fs::remove(temp, ignored);
+        throw IoError(path + ": cannot be replaced: " + ec.message());
+    }
+}
+
+std::vector<Window> defaultStatusWindows(const FlagSettings& settings) {
+    std::vector<Window> unique;
+    for (const Window& w : {Window{Window::Kind::Match, 1, 0.3}, settings.window, Window{Window::Kind::Season, 0, 0.3},
+                            Window{Window::Kind::Ewma, 0, 0.3}})
+        if (std::find(unique.begin(), unique.end(), w) == unique.end()) unique.push_back(w);
+    return unique;
 }
 
 } // namespace pitchloop::model

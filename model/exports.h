@@ -40,4 +40,12 @@ inline constexpr std::string_view kTalliesCsvHeader = "match_id,metric,band,lane
 /// Stored tallies as CSV (header, then one record a row, CRLF line ends).
 std::string talliesCsv(const std::vector<TallyRow>& rows);
 
+/// The windows a match's statuses are shown and exported in when none are asked for: this
+/// match, the club's judged window, the season so far and the EWMA, each once.
+std::vector<Window> defaultStatusWindows(const FlagSettings& settings);
+
+/// Writes `bytes` to `path` through a temporary file beside it and a rename, so the file is
+/// either the old one or the whole new one. Throws IoError naming the path when it cannot.
+void writeFileAtomically(const std::string& path, const std::string& bytes);
+
 } // namespace pitchloop::model

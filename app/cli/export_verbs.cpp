@@ -10,40 +10,11 @@
 #include "verbs.h"
 
 #include <cstdio>
-#include <filesystem>
-#include <fstream>
-#include <random>
 
 namespace pitchloop::cli {
 
 using namespace pitchloop::model;
 
-void writeFileAtomically(const std::string& path, const std::string& bytes) {
-    namespace fs = std::filesystem;
-    const fs::path target(path);
-    std::random_device rd;
-    const fs::path temp =
-        target.parent_path() /
-        ("." + target.filename().string() + ".part-" + std::to_string(rd() % 1000000));
-    {
-        std::ofstream f(temp, std::ios::binary | std::ios::trunc);
-        if (!f) throw IoError(path + ": cannot be written (is the folder there and writable?)");
-        f.write(bytes.data(), static_cast<std::streamsize>(bytes.size()));
-        f.close();
-        if (!f) {
-            std::error_code ignored;
-            fs::remove(temp, ignored);
-            throw IoError(path + ": writing failed (disk full?)");
-        }
-    }
-    std::error_code ec;
-    fs::rename(temp, target, ec);
-    if (ec) {
-        std::error_code ignored;
-        fs::remove(temp, ignored);
-        throw IoError(path + ": cannot be replaced: " + ec.message());
-    }
-}
 
 ExportVerbs::ExportVerbs(CLI::App& app) {
     m_group = app.add_subcommand("export", "Write files to share: CSV, iCalendar, PDF "

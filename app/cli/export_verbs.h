@@ -45,8 +45,4 @@ class ExportVerbs {
     std::string m_start = "10:30";
 };
 
-/// Writes `bytes` to `path` through a temporary file beside it and a rename, so the file is
-/// either the old one or the whole new one. Throws IoError naming the path when it cannot.
-void writeFileAtomically(const std::string& path, const std::string& bytes);
-
 } // namespace pitchloop::cli

@@ -1,5 +1,6 @@
 #include "commands.h"
 #include "debrief.h"
+#include "exports.h"
 #include "gridchange.h"
 #include "format.h"
 #include "verbs.h"
@@ -125,15 +126,7 @@ std::optional<StatusRun> matchStatuses(ClubRepository& repo, const std::string& 
     run.settings = repo.flagSettings();
     const FlagSettings& settings = run.settings;
     std::vector<Window>& windows = run.windows;
-    if (windowTexts.empty()) {
-        windows = {Window{Window::Kind::Match, 1, 0.3}, settings.window,
-                   Window{Window::Kind::Season, 0, 0.3},
-                   Window{Window::Kind::Ewma, 0, 0.3}};
-        std::vector<Window> unique;
-        for (const auto& w : windows)
-            if (std::find(unique.begin(), unique.end(), w) == unique.end()) unique.push_back(w);
-        windows = unique;
-    }
+    if (windowTexts.empty()) windows = defaultStatusWindows(settings);
     for (const auto& text : windowTexts) {
         auto w = Window::parse(text);
         if (!w) {

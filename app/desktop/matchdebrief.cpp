@@ -7,11 +7,16 @@
 #include "metriclistmodel.h"
 #include "pitchgeometry.h"
 #include "zonemapmodel.h"
+#include "exports.h"
+#include "printing.h"
 #include "zonestate.h"
 
+#include <QFile>
 #include <QLocale>
+#include <QUrl>
 
 #include <algorithm>
+#include <sstream>
 
 namespace pitchloop::desktop {
 
@@ -239,6 +244,93 @@ void MatchDebrief::refresh() {
         m_itemsSeason.reset();
     }
     emit changed();
+}
+
+void MatchDebrief::exported(const QString& message, bool failed) {
+    m_exportMessage = message;
+    m_exportFailed = failed;
+    emit exportDone();
+}
+
+QString MatchDebrief::suggestedFileName(const QString& kind) const {
+    if (kind == QLatin1String("pdf")) return QStringLiteral("debrief-%1.pdf").arg(m_matchId);
+    return QStringLiteral("%1-%2.csv").arg(kind, m_matchId);
+}
+
+bool MatchDebrief::writeExport(const QUrl& file, const std::string& bytes, const QString& what) {
+    const QString path = file.isLocalFile() ? file.toLocalFile() : file.toString();
+    if (path.isEmpty()) {
+        exported(tr("Choose a file to write %1 to.").arg(what), true);
+        return false;
+    }
+    try {
+        writeFileAtomically(QFile::encodeName(path).toStdString(), bytes);
+    } catch (const std::exception& e) {
+        exported(QString::fromStdString(e.what()), true);
+        return false;
+    }
+    exported(tr("Wrote %1 to %2.").arg(what, path), false);
+    return true;
+}
+
+bool MatchDebrief::exportPdf(const QUrl& file) {
+    ClubSession* s = session();
+    const QString path = file.isLocalFile() ? file.toLocalFile() : file.toString();
+    if (!s || !s->isOpen() || m_matchId.isEmpty()) {
+        exported(tr("Open a club file with a match first."), true);
+        return false;
+    }
+    if (path.isEmpty()) {
+        exported(tr("Choose a file to write the debrief to."), true);
+        return false;
+    }
+    std::ostringstream err;
+    int code = 1;
+    try {
+        code = print::exportDebrief(*s->repository(), m_matchId.toStdString(),
+                                    QFile::encodeName(path).toStdString(), err);
+    } catch (const std::exception& e) {
+        err << e.what();
+    }
+    QString message = QString::fromStdString(err.str()).trimmed();
+    if (message.startsWith(QLatin1String("error: "))) message = message.mid(7);
+    if (code != 0) {
+        exported(message.isEmpty() ? tr("The debrief was not written to %1.").arg(path) : message, true);
+        return false;
+    }
+    exported(tr("Wrote the debrief of %1 to %2.").arg(m_matchId, path), false);
+    return true;
+}
+
+bool MatchDebrief::exportStatusesCsv(const QUrl& file) {
+    ClubSession* s = session();
+    const MatchSummary* match = s && s->isOpen() ? s->summary(m_matchId.toStdString()) : nullptr;
+    const auto season = match ? s->seasonOf(match->id) : nullptr;
+    const auto focal = season ? season->indexOf(match->id) : std::nullopt;
+    if (!focal) {
+        exported(tr("Open a club file with a match first."), true);
+        return false;
+    }
+    // The command line's windows and order, so the file is the same bytes.
+    const auto statuses = computeStatus(season->tallies(), *focal, s->metricSpecs(), season->targets(), s->grid(),
+                                        defaultStatusWindows(season->settings()), season->settings());
+    return writeExport(file, statusCsv(match->id, statuses),
+                       tr("%1 zone values of %2").arg(statuses.size()).arg(m_matchId));
+}
+
+bool MatchDebrief::exportTalliesCsv(const QUrl& file) {
+    ClubSession* s = session();
+    if (!s || !s->isOpen() || m_matchId.isEmpty()) {
+        exported(tr("Open a club file with a match first."), true);
+        return false;
+    }
+    try {
+        const auto rows = s->repository()->talliesOnGrid(s->grid(), m_matchId.toStdString(), std::nullopt);
+        return writeExport(file, talliesCsv(rows), tr("%1 tally rows of %2").arg(rows.size()).arg(m_matchId));
+    } catch (const std::exception& e) {
+        exported(QString::fromStdString(e.what()), true);
+        return false;
+    }
 }
 
 } // namespace pitchloop::desktop

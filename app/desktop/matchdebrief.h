@@ -43,6 +43,9 @@ class MatchDebrief : public pitchloop::desktop::SessionClient {
     Q_PROPERTY(QString judgedText READ judgedText NOTIFY changed)
     /// The same note in the coach's words, without the statistics.
     Q_PROPERTY(QString plainJudgedText READ plainJudgedText NOTIFY changed)
+    /// What the last export did, in plain words, and whether it failed.
+    Q_PROPERTY(QString exportMessage READ exportMessage NOTIFY exportDone)
+    Q_PROPERTY(bool exportFailed READ exportFailed NOTIFY exportDone)
     Q_PROPERTY(pitchloop::desktop::ZoneMapModel* matchMap READ matchMap CONSTANT)
     Q_PROPERTY(pitchloop::desktop::ZoneMapModel* windowMap READ windowMap CONSTANT)
     Q_PROPERTY(pitchloop::desktop::DebriefListModel* items READ items CONSTANT)
@@ -57,6 +60,18 @@ public:
     int selectedBand() const { return m_selectedBand; }
     int selectedLane() const { return m_selectedLane; }
     Q_INVOKABLE void selectZone(int band, int lane);
+
+    /// The match's debrief as a PDF (the same sheet as `pitchloop export debrief`).
+    Q_INVOKABLE bool exportPdf(const QUrl& file);
+    /// Every zone's value, interval and state at this match in the club's windows, as CSV
+    /// (docs/exports.md: the same bytes as the command line's statuses export).
+    Q_INVOKABLE bool exportStatusesCsv(const QUrl& file);
+    /// The match's stored tallies on the club grid, as CSV (docs/exports.md).
+    Q_INVOKABLE bool exportTalliesCsv(const QUrl& file);
+    /// "debrief-KB-2026-08.pdf", "statuses-KB-2026-08.csv", "tallies-KB-2026-08.csv".
+    Q_INVOKABLE QString suggestedFileName(const QString& kind) const;
+    QString exportMessage() const { return m_exportMessage; }
+    bool exportFailed() const { return m_exportFailed; }
     int matchRow() const { return m_matchRow; }
     int metricRow() const { return m_metricRow; }
     bool hasMatch() const { return m_matchRow >= 0; }
@@ -78,6 +93,7 @@ signals:
     void metricIdChanged();
     void selectionChanged();
     void changed();
+    void exportDone();
 
 protected:
     void refresh() override;
@@ -85,6 +101,9 @@ protected:
 private:
     void clear();
     void clearModels();
+    void exported(const QString& message, bool failed);
+    /// Writes `bytes` to the chosen file (atomically), reporting `what` it wrote.
+    bool writeExport(const QUrl& file, const std::string& bytes, const QString& what);
 
     QString m_matchId;
     QString m_metricId;
@@ -104,6 +123,8 @@ private:
     QString m_betterText;
     QString m_windowText;
     QString m_judgedText, m_plainJudgedText;
+    QString m_exportMessage;
+    bool m_exportFailed = false;
     ZoneMapModel* m_matchMap;
     ZoneMapModel* m_windowMap;
     DebriefListModel* m_items;

@@ -2,6 +2,7 @@ pragma ComponentBehavior: Bound
 import QtQuick
 import QtQuick.Controls
 import QtQuick.Layouts
+import QtQuick.Dialogs
 import Pitchloop
 
 // A match judged against the season's targets: one metric on two pitches, this match and the
@@ -22,6 +23,29 @@ Page {
     }
 
     background: Rectangle { color: Theme.window }
+
+    function saveAs(kind: string) {
+        saveDialog.kind = kind
+        saveDialog.selectedFile = debrief.suggestedFileName(kind)
+        saveDialog.open()
+    }
+
+    FileDialog {
+        id: saveDialog
+        property string kind: "pdf"
+        title: kind === "pdf" ? qsTr("Save the match debrief") : qsTr("Save the numbers as CSV")
+        fileMode: FileDialog.SaveFile
+        defaultSuffix: kind === "pdf" ? "pdf" : "csv"
+        nameFilters: kind === "pdf" ? [qsTr("PDF files (*.pdf)")] : [qsTr("CSV files (*.csv)")]
+        onAccepted: {
+            if (kind === "pdf")
+                debrief.exportPdf(selectedFile)
+            else if (kind === "statuses")
+                debrief.exportStatusesCsv(selectedFile)
+            else
+                debrief.exportTalliesCsv(selectedFile)
+        }
+    }
 
     MatchDebrief {
         id: debrief
@@ -110,6 +134,38 @@ Page {
                 onActivated: debrief.metricId = currentValue
             }
             Item { Layout.fillWidth: true }
+            // The match's debrief to print or share, and its numbers for a spreadsheet.
+            Button {
+                id: exportButton
+                objectName: "debriefExport"
+                text: qsTr("Save or share…")
+                onClicked: exportMenu.open()
+                Menu {
+                    id: exportMenu
+                    y: exportButton.height
+                    MenuItem {
+                        text: qsTr("The debrief as a PDF…")
+                        onTriggered: root.saveAs("pdf")
+                    }
+                    MenuItem {
+                        text: qsTr("Every zone's values (CSV)…")
+                        onTriggered: root.saveAs("statuses")
+                    }
+                    MenuItem {
+                        text: qsTr("The match's counts per zone (CSV)…")
+                        onTriggered: root.saveAs("tallies")
+                    }
+                }
+            }
+        }
+        Label {
+            objectName: "exportMessage"
+            visible: debrief.exportMessage.length > 0
+            Layout.fillWidth: true
+            text: debrief.exportMessage
+            color: debrief.exportFailed ? Theme.error : Theme.textMuted
+            font.pixelSize: Theme.fontSmall
+            elide: Text.ElideMiddle
         }
 
         Label {

@@ -26,6 +26,7 @@
 
 #include <QAbstractItemModelTester>
 #include <QFile>
+#include <QFileInfo>
 #include <QGuiApplication>
 #include <QLocale>
 #include <QQmlEngine>
@@ -36,6 +37,7 @@
 #include <QSignalSpy>
 #include <QTemporaryDir>
 #include <QTest>
+#include <QUrl>
 #include <QtQml/qqmlextensionplugin.h>
 
 #include <cmath>
@@ -80,6 +82,7 @@ private slots:
     void debriefMaps();
     void debriefList();
     void appAndCommandLineSayTheSame();
+    void debriefExportsFromThePage();
     void seasonOverview();
     void zoneSeries();
     void emptyClub();
@@ -301,6 +304,61 @@ void DesktopTest::appAndCommandLineSayTheSame() {
         ++compared;
     }
     QVERIFY(compared > 0);
+}
+
+void DesktopTest::debriefExportsFromThePage() {
+    // The debrief page writes the same files as the command line's exports: the statuses and
+    // tallies CSV byte for byte, and a PDF.
+    MatchDebrief debrief;
+    debrief.setSession(&m_session);
+    const std::string match = debrief.matchId().toStdString();
+    QVERIFY(!match.empty());
+    const auto cliBytes = [&](std::vector<std::string> args) {
+        args.insert(args.begin(), {"pitchloop", "--db", m_file.toStdString(), "export"});
+        std::vector<char*> argv;
+        for (auto& a : args) argv.push_back(a.data());
+        std::ostringstream out, err;
+        const int code = cli::run(static_cast<int>(argv.size()), argv.data(), out, err);
+        return code == 0 ? out.str() : "failed: " + err.str();
+    };
+    const auto fileBytes = [](const QString& path) {
+        QFile f(path);
+        return f.open(QIODevice::ReadOnly) ? f.readAll().toStdString() : std::string("unreadable");
+    };
+    const QString statuses = m_dir.filePath(debrief.suggestedFileName(QStringLiteral("statuses")));
+    QCOMPARE(QFileInfo(statuses).fileName(), QStringLiteral("statuses-%1.csv").arg(debrief.matchId()));
+    QVERIFY(debrief.exportStatusesCsv(QUrl::fromLocalFile(statuses)));
+    QVERIFY(!debrief.exportFailed());
+    QVERIFY(debrief.exportMessage().startsWith(QStringLiteral("Wrote ")));
+    const auto firstDifference = [](const std::string& a, const std::string& b) {
+        std::istringstream sa(a), sb(b);
+        std::string la, lb;
+        for (int n = 1;; ++n) {
+            const bool moreA = static_cast<bool>(std::getline(sa, la)), moreB = static_cast<bool>(std::getline(sb, lb));
+            if (!moreA && !moreB) break;
+            if (!moreA) la.clear();
+            if (!moreB) lb.clear();
+            if (la != lb) return "line " + std::to_string(n) + ":\n  app " + la + "\n  cli " + lb;
+        }
+        return std::string();
+    };
+    const std::string fromCli = cliBytes({"statuses", match, "--out", "-"});
+    QVERIFY2(fileBytes(statuses) == fromCli, firstDifference(fileBytes(statuses), fromCli).c_str());
+
+    const QString tallies = m_dir.filePath(debrief.suggestedFileName(QStringLiteral("tallies")));
+    QVERIFY(debrief.exportTalliesCsv(QUrl::fromLocalFile(tallies)));
+    QCOMPARE(fileBytes(tallies), cliBytes({"tallies", "--match", match, "--out", "-"}));
+
+    const QString pdf = m_dir.filePath(debrief.suggestedFileName(QStringLiteral("pdf")));
+    QVERIFY(debrief.exportPdf(QUrl::fromLocalFile(pdf)));
+    QVERIFY(fileBytes(pdf).rfind("%PDF-", 0) == 0);
+
+    // A folder that is not there: a clear message, no file.
+    const QString nowhere = m_dir.filePath(QStringLiteral("no-such-folder/x.csv"));
+    QVERIFY(!debrief.exportStatusesCsv(QUrl::fromLocalFile(nowhere)));
+    QVERIFY(debrief.exportFailed());
+    QVERIFY2(debrief.exportMessage().contains(QStringLiteral("no-such-folder")), qPrintable(debrief.exportMessage()));
+    QVERIFY(!QFileInfo::exists(nowhere));
 }
 
 void DesktopTest::seasonOverview() {
