@@ -217,6 +217,7 @@ void PlannerView::refresh() {
         m_selectedDayText = dateText(m_selected.toStdString());
         m_selectedDayDetail.clear();
         m_selectedHasSession = false;
+        m_selectedFixture.clear();
         m_selectedSessionText.clear();
         m_selectedDrillsText.clear();
         m_selectedCap = -1;
@@ -287,6 +288,13 @@ void PlannerView::fillWeek(model::ClubRepository& repo) {
         anyMicrocycle = anyMicrocycle || cap.has_value();
 
         if (row.selected) {
+            m_selectedFixture.clear();
+            if (row.matchDay)
+                m_selectedFixture = {{QStringLiteral("date"), qs(day.next->date)},
+                                     {QStringLiteral("kickoff"), qs(day.next->kickoff)},
+                                     {QStringLiteral("opponent"), qs(day.next->opponent)},
+                                     {QStringLiteral("venue"), qs(day.next->venue)},
+                                     {QStringLiteral("competition"), qs(day.next->competition)}};
             m_selectedHasSession = row.hasSession;
             m_selectedSessionText = row.sessionText;
             m_selectedDrillsText = row.drillLines.join(QLatin1Char('\n'));
@@ -646,6 +654,70 @@ bool PlannerView::importFixtures(const QUrl& file) {
                    .arg(r.unchanged),
                false);
     session()->reload(); // the week and every page see the schedule
+    return true;
+}
+
+bool PlannerView::saveFixture(const QString& originalDate, const QString& date, const QString& kickoff,
+                              const QString& opponent, const QString& venue, const QString& competition) {
+    model::ClubRepository* repo = repository();
+    if (!repo) {
+        setMessage(tr("No club file is open."), true);
+        return false;
+    }
+    Fixture f;
+    f.date = date.trimmed().toStdString();
+    f.kickoff = kickoff.trimmed().toStdString();
+    f.opponent = opponent.trimmed().toStdString();
+    f.venue = venue.trimmed().toStdString();
+    f.competition = competition.trimmed().toStdString();
+    // In the form's words: the field as it is labelled, and what to type.
+    static const std::map<std::string, QString> labels{
+        {"date", tr("Date")}, {"kickoff", tr("Kick-off")}, {"opponent", tr("Opponent")},
+        {"venue", tr("Venue")}, {"competition", tr("Competition")}};
+    auto refuse = [&](const Problems& problems) {
+        QStringList lines;
+        for (const auto& p : problems) {
+            const auto label = labels.find(p.field);
+            lines << (label != labels.end() ? label->second + QStringLiteral(": ") : QString()) + qs(p.message);
+        }
+        setMessage(tr("The fixture was not saved:\n%1").arg(lines.join(QLatin1Char('\n'))), true);
+        return false;
+    };
+    if (const Problems problems = validateFixture(f, "the fixture form", ""); !problems.empty()) return refuse(problems);
+    try {
+        FixtureStore store(*repo);
+        const FixtureImport r = store.importFixtures(m_squad, {f}, "the fixture form");
+        if (!r.errors.empty()) return refuse(r.errors);
+        const std::string before = originalDate.trimmed().toStdString();
+        if (!before.empty() && before != f.date) store.remove(m_squad, before);
+    } catch (const std::exception& e) {
+        setMessage(tr("The fixture was not saved: %1").arg(QString::fromUtf8(e.what())), true);
+        return false;
+    }
+    setMessage(tr("Saved the fixture v %1 on %2.").arg(qs(f.opponent), dateText(f.date)), false);
+    session()->reload(); // the week, the home page and the planner see the schedule
+    return true;
+}
+
+bool PlannerView::removeFixture(const QString& date) {
+    model::ClubRepository* repo = repository();
+    if (!repo) {
+        setMessage(tr("No club file is open."), true);
+        return false;
+    }
+    bool removed = false;
+    try {
+        removed = FixtureStore(*repo).remove(m_squad, date.toStdString());
+    } catch (const std::exception& e) {
+        setMessage(tr("The fixture was not removed: %1").arg(QString::fromUtf8(e.what())), true);
+        return false;
+    }
+    if (!removed) {
+        setMessage(tr("There is no fixture on %1 to remove.").arg(dateText(date.toStdString())), true);
+        return false;
+    }
+    setMessage(tr("Removed the fixture on %1.").arg(dateText(date.toStdString())), false);
+    session()->reload();
     return true;
 }
 

@@ -9,6 +9,7 @@
 
 #include <QFutureWatcher>
 #include <QString>
+#include <QVariantMap>
 #include <QUrl>
 #include <QtQml/qqmlregistration.h>
 
@@ -51,6 +52,9 @@ class PlannerView : public pitchloop::desktop::SessionClient {
     /// "MD-3 · cap 4 · high", or a note when the day has no microcycle.
     Q_PROPERTY(QString selectedDayDetail READ selectedDayDetail NOTIFY dayChanged)
     Q_PROPERTY(bool selectedHasSession READ selectedHasSession NOTIFY dayChanged)
+    /// The fixture on the selected day, for the fixture form: {date, kickoff, opponent, venue,
+    /// competition}; empty when the day has none.
+    Q_PROPERTY(QVariantMap selectedFixture READ selectedFixture NOTIFY dayChanged)
     /// The chosen day's saved session: "90 min · 18 players", and its drills one a line.
     Q_PROPERTY(QString selectedSessionText READ selectedSessionText NOTIFY dayChanged)
     Q_PROPERTY(QString selectedDrillsText READ selectedDrillsText NOTIFY dayChanged)
@@ -98,6 +102,7 @@ public:
     QString selectedDayText() const { return m_selectedDayText; }
     QString selectedDayDetail() const { return m_selectedDayDetail; }
     bool selectedHasSession() const { return m_selectedHasSession; }
+    QVariantMap selectedFixture() const { return m_selectedFixture; }
     QString selectedSessionText() const { return m_selectedSessionText; }
     QString selectedDrillsText() const { return m_selectedDrillsText; }
     QString suggestedMinutes() const { return m_suggestedMinutes; }
@@ -151,6 +156,13 @@ public:
     /// Imports the squad's fixtures from a CSV or JSON file (docs/planner.md): all or nothing,
     /// problems in the message naming the file, the line and the field.
     Q_INVOKABLE bool importFixtures(const QUrl& file);
+    /// Adds or changes one fixture of the squad from the form. `originalDate` is the date it
+    /// had (empty for a new one): moved to another date, the old one is removed once the new
+    /// one is stored. Problems are named in the form's words and change nothing.
+    Q_INVOKABLE bool saveFixture(const QString& originalDate, const QString& date, const QString& kickoff,
+                                 const QString& opponent, const QString& venue, const QString& competition);
+    /// Removes the squad's fixture on `date`.
+    Q_INVOKABLE bool removeFixture(const QString& date);
     /// The week's saved sessions and the open focuses' review dates that fall in it as an
     /// iCalendar file; sessions start at `start` ("HH:MM").
     Q_INVOKABLE bool exportCalendar(const QUrl& file, const QString& start);
@@ -211,6 +223,7 @@ private:
     QString m_notes;
     QString m_planSummary;
     QString m_planNotes;
+    QVariantMap m_selectedFixture;
     QString m_adjustmentsText;
     bool m_planReplacesSaved = false;
     bool m_busy = false;

@@ -141,6 +141,13 @@ Page {
             }
             Item { Layout.fillWidth: planner.weekNote.length === 0 }
             Button {
+                objectName: "editFixture"
+                text: planner.selectedFixture.date !== undefined
+                      ? qsTr("Edit the fixture on %1…").arg(planner.selectedDayText)
+                      : qsTr("Add a fixture on %1…").arg(planner.selectedDayText)
+                onClicked: fixtureForm.openFor(planner.selectedFixture)
+            }
+            Button {
                 objectName: "importFixtures"
                 text: qsTr("Import fixtures…")
                 onClicked: fixturesDialog.open()
@@ -437,6 +444,53 @@ Page {
         defaultSuffix: "pdf"
         nameFilters: [qsTr("PDF files (*.pdf)")]
         onAccepted: planner.exportSheet(selectedFile)
+    }
+
+    // One fixture, added or edited in place: date, kick-off, opponent, venue, competition.
+    Dialog {
+        id: fixtureForm
+        objectName: "fixtureForm"
+        property string originalDate
+        function openFor(fixture) {
+            originalDate = fixture.date !== undefined ? fixture.date : ""
+            fixtureDate.text = fixture.date !== undefined ? fixture.date : planner.selectedDate
+            fixtureKickoff.text = fixture.kickoff !== undefined ? fixture.kickoff : ""
+            fixtureOpponent.text = fixture.opponent !== undefined ? fixture.opponent : ""
+            fixtureVenue.currentIndex = Math.max(0, ["home", "away", "neutral"].indexOf(fixture.venue !== undefined ? fixture.venue : "home"))
+            fixtureCompetition.text = fixture.competition !== undefined ? fixture.competition : ""
+            open()
+        }
+        title: originalDate.length > 0 ? qsTr("Edit the fixture") : qsTr("Add a fixture")
+        modal: true
+        width: 440
+        anchors.centerIn: parent
+        standardButtons: Dialog.Save | Dialog.Cancel
+        onAccepted: planner.saveFixture(originalDate, fixtureDate.text, fixtureKickoff.text, fixtureOpponent.text,
+                                        ["home", "away", "neutral"][fixtureVenue.currentIndex], fixtureCompetition.text)
+        GridLayout {
+            width: parent.width
+            columns: 2
+            columnSpacing: Theme.gap
+            Label { text: qsTr("Date"); color: Theme.textMuted }
+            TextField { id: fixtureDate; Layout.fillWidth: true; placeholderText: "YYYY-MM-DD" }
+            Label { text: qsTr("Kick-off"); color: Theme.textMuted }
+            TextField { id: fixtureKickoff; Layout.fillWidth: true; placeholderText: qsTr("HH:MM, or empty while unknown") }
+            Label { text: qsTr("Opponent"); color: Theme.textMuted }
+            TextField { id: fixtureOpponent; Layout.fillWidth: true }
+            Label { text: qsTr("Venue"); color: Theme.textMuted }
+            ComboBox { id: fixtureVenue; Layout.fillWidth: true; model: [qsTr("Home"), qsTr("Away"), qsTr("Neutral ground")] }
+            Label { text: qsTr("Competition"); color: Theme.textMuted }
+            TextField { id: fixtureCompetition; Layout.fillWidth: true; placeholderText: qsTr("League, Cup… (optional)") }
+            Button {
+                Layout.columnSpan: 2
+                visible: fixtureForm.originalDate.length > 0
+                text: qsTr("Remove this fixture")
+                onClicked: {
+                    planner.removeFixture(fixtureForm.originalDate)
+                    fixtureForm.close()
+                }
+            }
+        }
     }
 
     FileDialog {

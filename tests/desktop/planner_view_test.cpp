@@ -81,6 +81,7 @@ private slots:
     void sessionSheet();
     void pageShowsTheProposal();
     void emptyClub();
+    void fixturesEnteredInTheApp();
 
 private:
     /// Proposes and waits for the worker; the blocks shown must then be the plan's.
@@ -543,6 +544,50 @@ void PlannerViewTest::emptyClub() {
     QVERIFY(view.message().contains(QStringLiteral("added")));
     QVERIFY(!model::FixtureStore(*empty.repository()).list(kSquad, "2026-27").empty());
     QVERIFY(view.weekNote().isEmpty());
+}
+
+void PlannerViewTest::fixturesEnteredInTheApp() {
+    // A club with no schedule enters its fixtures one by one in the planner: add, edit (move
+    // the date), remove; a bad field is named in the form's words and changes nothing.
+    QTemporaryDir dir;
+    ClubSession club;
+    QVERIFY(club.open(dir.filePath(QStringLiteral("club.sqlite"))));
+    PlannerView view;
+    view.setSession(&club);
+    QVERIFY(view.goToDate(QStringLiteral("2026-09-29")));
+    const auto stored = [&] { return model::FixtureStore(*club.repository()).list(kSquad, "2026-27"); };
+
+    QVERIFY(!view.saveFixture({}, QStringLiteral("2026-10-03"), QStringLiteral("25:00"), QString(),
+                              QStringLiteral("home"), QString()));
+    QVERIFY(view.messageIsError());
+    QVERIFY2(view.message().contains(QStringLiteral("Kick-off: '25:00' is not a time")), qPrintable(view.message()));
+    QVERIFY2(view.message().contains(QStringLiteral("Opponent: missing")), qPrintable(view.message()));
+    QVERIFY(stored().empty());
+
+    QVERIFY(view.saveFixture({}, QStringLiteral("2026-10-03"), QStringLiteral("15:00"), QStringLiteral("Saltmere Rovers"),
+                             QStringLiteral("home"), QStringLiteral("League")));
+    QVERIFY2(!view.messageIsError(), qPrintable(view.message()));
+    QCOMPARE(stored().size(), std::size_t{1});
+    QCOMPARE(stored().front().opponent, std::string("Saltmere Rovers"));
+    // The week now has its microcycle: 29 Sep is MD-4 before the match on 3 Oct.
+    view.selectDay(QStringLiteral("2026-09-29"));
+    QVERIFY2(view.selectedDayDetail().startsWith(QStringLiteral("MD-4")), qPrintable(view.selectedDayDetail()));
+    view.selectDay(QStringLiteral("2026-10-03"));
+    QCOMPARE(view.selectedFixture().value(QStringLiteral("opponent")).toString(), QStringLiteral("Saltmere Rovers"));
+
+    // Moved to the Sunday with a new kick-off: one fixture, on the new date.
+    QVERIFY(view.saveFixture(QStringLiteral("2026-10-03"), QStringLiteral("2026-10-04"), QStringLiteral("13:30"),
+                             QStringLiteral("Saltmere Rovers"), QStringLiteral("away"), QStringLiteral("League")));
+    QCOMPARE(stored().size(), std::size_t{1});
+    QCOMPARE(stored().front().date, std::string("2026-10-04"));
+    QCOMPARE(stored().front().venue, std::string("away"));
+    view.selectDay(QStringLiteral("2026-10-03"));
+    QVERIFY(view.selectedFixture().isEmpty());
+
+    QVERIFY(view.removeFixture(QStringLiteral("2026-10-04")));
+    QVERIFY(stored().empty());
+    QVERIFY(!view.removeFixture(QStringLiteral("2026-10-04")));
+    QVERIFY(view.messageIsError());
 }
 
 int main(int argc, char* argv[]) {
