@@ -246,6 +246,18 @@ CREATE TABLE import_profile(
     R"sql(
 ALTER TABLE match ADD COLUMN zone_grid TEXT NOT NULL DEFAULT '';
 )sql",
+    // 10: training as held (docs/planner.md, "Training as held"): a saved session is planned
+    // until the staff mark it held, changed (minutes per block as done) or cancelled, with how
+    // many players took part; focus minutes then count what was held.
+    R"sql(
+ALTER TABLE session ADD COLUMN outcome TEXT NOT NULL DEFAULT 'planned'
+  CHECK(outcome IN ('planned', 'held', 'changed', 'cancelled'));
+ALTER TABLE session ADD COLUMN players_present INTEGER;
+ALTER TABLE session ADD COLUMN recorded_by TEXT NOT NULL DEFAULT '';
+ALTER TABLE session ADD COLUMN recorded_at TEXT NOT NULL DEFAULT '';
+ALTER TABLE session_block ADD COLUMN held_minutes INTEGER;
+ALTER TABLE session_focus ADD COLUMN held_minutes INTEGER;
+)sql",
 };
 
 static_assert(std::size(kMigrations) == ClubRepository::kSchemaVersion);

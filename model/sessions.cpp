@@ -1,6 +1,8 @@
 #include "sessions.h"
 #include "storeguard.h"
 
+#include "drills.h"
+#include "focus.h"
 #include "repository.h"
 
 #include <SQLiteCpp/Database.h>
@@ -272,7 +274,8 @@ std::vector<SavedSession> SessionStore::list(const std::string& squad, const std
         std::vector<SavedSession> out;
         SQLite::Statement q(db, "SELECT s.id, sq.name, se.name, s.date, s.minutes, s.players, "
                                 "s.day_label, s.intensity_cap, s.objective, s.saved_by, "
-                                "s.saved_at FROM session s JOIN season se ON se.id = s.season_id "
+                                "s.saved_at, s.outcome, s.players_present, s.recorded_by, "
+                                "s.recorded_at FROM session s JOIN season se ON se.id = s.season_id "
                                 "JOIN squad sq ON sq.id = se.squad_id WHERE sq.name = ? AND "
                                 "(? = '' OR s.date >= ?) AND (? = '' OR s.date <= ?) "
                                 "ORDER BY s.date");
@@ -294,10 +297,17 @@ std::vector<SavedSession> SessionStore::list(const std::string& squad, const std
             s.objective = static_cast<long>(q.getColumn(8).getInt64());
             s.savedBy = q.getColumn(9).getString();
             s.savedAt = q.getColumn(10).getString();
+            const std::string outcome = q.getColumn(11).getString();
+            const auto o = sessionOutcomeFromString(outcome);
+            if (!o) throw StorageError("stored session has unknown outcome '" + outcome + "'");
+            s.outcome = *o;
+            if (!q.getColumn(12).isNull()) s.playersPresent = q.getColumn(12).getInt();
+            s.recordedBy = q.getColumn(13).getString();
+            s.recordedAt = q.getColumn(14).getString();
             out.push_back(std::move(s));
         }
-        SQLite::Statement b(db, "SELECT role, drill_id, minutes, focus_id, pinned, why FROM "
-                                "session_block WHERE session_id = ? ORDER BY position");
+        SQLite::Statement b(db, "SELECT role, drill_id, minutes, focus_id, pinned, why, held_minutes "
+                                "FROM session_block WHERE session_id = ? ORDER BY position");
         SQLite::Statement f(db, "SELECT focus_id, minutes FROM session_focus WHERE session_id = ? "
                                 "ORDER BY focus_id");
         for (SavedSession& s : out) {
@@ -314,6 +324,8 @@ std::vector<SavedSession> SessionStore::list(const std::string& squad, const std
                 if (!b.getColumn(3).isNull()) block.focusId = b.getColumn(3).getInt64();
                 block.pinned = b.getColumn(4).getInt() != 0;
                 block.why = b.getColumn(5).getString();
+                s.heldMinutes.push_back(b.getColumn(6).isNull() ? std::nullopt
+                                                                : std::optional(b.getColumn(6).getInt()));
                 s.blocks.push_back(std::move(block));
             }
             f.reset();
@@ -390,6 +402,158 @@ int SessionStore::minutesOnFocus(std::int64_t focusId, const std::string& from,
         q.executeStep();
         return q.getColumn(0).getInt();
     });
+}
+
+std::string_view toString(SessionOutcome o) {
+    switch (o) {
+    case SessionOutcome::Planned: return "planned";
+    case SessionOutcome::Held: return "held";
+    case SessionOutcome::Changed: return "changed";
+    case SessionOutcome::Cancelled: return "cancelled";
+    }
+    return "planned";
+}
+
+std::optional<SessionOutcome> sessionOutcomeFromString(std::string_view s) {
+    for (SessionOutcome o : {SessionOutcome::Planned, SessionOutcome::Held, SessionOutcome::Changed,
+                             SessionOutcome::Cancelled})
+        if (toString(o) == s) return o;
+    return std::nullopt;
+}
+
+FocusTraining SessionStore::trainingOnFocus(std::int64_t focusId, const std::string& from,
+                                            const std::string& to) const {
+    SQLite::Database& db = m_repo.database();
+    return guarded("cannot read sessions", [&] {
+        FocusTraining t;
+        SQLite::Statement q(db, "SELECT s.outcome, f.minutes, f.held_minutes FROM session_focus f JOIN "
+                                "session s ON s.id = f.session_id WHERE f.focus_id = ? AND "
+                                "s.date >= ? AND s.date <= ?");
+        q.bind(1, focusId);
+        q.bind(2, from);
+        q.bind(3, to);
+        while (q.executeStep()) {
+            const std::string outcome = q.getColumn(0).getString();
+            const int planned = q.getColumn(1).getInt();
+            if (outcome == "held" || outcome == "changed") {
+                const int held = q.getColumn(2).isNull() ? planned : q.getColumn(2).getInt();
+                t.heldMinutes += held;
+                t.heldSessions += held > 0;
+            } else if (outcome == "cancelled") {
+                ++t.cancelledSessions;
+            } else {
+                ++t.unrecordedSessions;
+                t.unrecordedMinutes += planned;
+            }
+        }
+        return t;
+    });
+}
+
+std::string trainingNote(const FocusTraining& t, const std::string& from, const std::string& to) {
+    const auto plural = [](int n, const char* one, const char* many) {
+        return std::to_string(n) + " " + (n == 1 ? one : many);
+    };
+    std::string s = plural(t.heldMinutes, "minute", "minutes") + " in " +
+                    plural(t.heldSessions, "session", "sessions") + " held from " + from + " to " + to;
+    if (t.cancelledSessions > 0) s += "; " + plural(t.cancelledSessions, "session was", "sessions were") + " cancelled";
+    if (t.unrecordedSessions > 0)
+        s += "; " + plural(t.unrecordedSessions, "saved session", "saved sessions") + " (" +
+             std::to_string(t.unrecordedMinutes) + " min) not yet marked held or cancelled " +
+             (t.unrecordedSessions == 1 ? "is" : "are") + " not counted";
+    return s;
+}
+
+Problems SessionStore::record(const std::string& squad, const std::string& date, const SessionRecord& how,
+                              const std::string& today, const std::string& by, const std::string& now) {
+    Problems problems;
+    const std::string source = "the session of " + date;
+    auto problem = [&](const std::string& field, const std::string& message) {
+        problems.push_back({source, "", field, message});
+    };
+    const auto saved = get(squad, date);
+    if (!saved) {
+        problem("date", "no saved session of " + squad + " on " + date);
+        return problems;
+    }
+    if (date > today) problem("date", "is after today (" + today + "): a session is marked once its day has come");
+    if (how.outcome == SessionOutcome::Planned) problem("outcome", "choose held, changed or cancelled");
+    const bool took = how.outcome == SessionOutcome::Held || how.outcome == SessionOutcome::Changed;
+    if (took && (how.playersPresent < 1 || how.playersPresent > 200))
+        problem("players", "expected how many players took part, 1 or more (got " + std::to_string(how.playersPresent) + ")");
+    if (how.outcome == SessionOutcome::Changed) {
+        if (how.blockMinutes.size() != saved->blocks.size())
+            problem("minutes", "expected the minutes of each of the " + std::to_string(saved->blocks.size()) +
+                                   " blocks (got " + std::to_string(how.blockMinutes.size()) + ")");
+        for (std::size_t i = 0; i < how.blockMinutes.size(); ++i)
+            if (how.blockMinutes[i] < 0 || how.blockMinutes[i] > 300)
+                problem("minutes", "block " + std::to_string(i + 1) + ": " + std::to_string(how.blockMinutes[i]) +
+                                       " is not a number of minutes from 0 to 300");
+    }
+    if (!problems.empty()) return problems;
+
+    // Minutes as done per block, and per focus: a block counts for a focus when its drill works
+    // on it, as when the plan was made (the live drill and focus).
+    std::vector<int> done;
+    for (std::size_t i = 0; i < saved->blocks.size(); ++i)
+        done.push_back(how.outcome == SessionOutcome::Cancelled ? 0
+                       : how.outcome == SessionOutcome::Changed ? how.blockMinutes[i]
+                                                                : saved->blocks[i].minutes);
+    std::map<std::int64_t, int> focusDone;
+    const ZoneGrid grid = m_repo.tallyGrid();
+    for (const auto& [focusId, planned] : saved->focusMinutes) {
+        if (how.outcome == SessionOutcome::Held) {
+            focusDone[focusId] = planned;
+            continue;
+        }
+        int minutes = 0;
+        if (how.outcome == SessionOutcome::Changed) {
+            const auto focus = FocusStore(m_repo).get(focusId);
+            PlanFocus f;
+            if (focus) {
+                f.metric = focus->metric;
+                f.zones = focus->grid == grid ? focus->zones : mapZones(focus->zones, focus->grid, grid);
+                f.linkedDrills = focus->drills;
+            }
+            for (std::size_t i = 0; i < saved->blocks.size(); ++i) {
+                const auto drill = DrillBook(m_repo).get(saved->blocks[i].drillId);
+                if (focus && drill && worksOn(*drill, f)) minutes += done[i];
+            }
+        }
+        focusDone[focusId] = minutes;
+    }
+    SQLite::Database& db = m_repo.database();
+    guarded("cannot record the session", [&] {
+        SQLite::Transaction tx(db);
+        SQLite::Statement s(db, "UPDATE session SET outcome = ?, players_present = ?, recorded_by = ?, "
+                                "recorded_at = ? WHERE id = ?");
+        s.bind(1, std::string(toString(how.outcome)));
+        if (how.outcome == SessionOutcome::Cancelled) s.bind(2);
+        else s.bind(2, how.playersPresent);
+        s.bind(3, by);
+        s.bind(4, now);
+        s.bind(5, saved->id);
+        s.exec();
+        SQLite::Statement b(db, "UPDATE session_block SET held_minutes = ? WHERE session_id = ? AND position = ?");
+        for (std::size_t i = 0; i < done.size(); ++i) {
+            b.reset();
+            b.bind(1, done[i]);
+            b.bind(2, saved->id);
+            b.bind(3, static_cast<int>(i));
+            b.exec();
+        }
+        SQLite::Statement f(db, "UPDATE session_focus SET held_minutes = ? WHERE session_id = ? AND focus_id = ?");
+        for (const auto& [focusId, minutes] : focusDone) {
+            f.reset();
+            f.bind(1, minutes);
+            f.bind(2, saved->id);
+            f.bind(3, focusId);
+            f.exec();
+        }
+        tx.commit();
+        return 0;
+    });
+    return problems;
 }
 
 } // namespace pitchloop::model

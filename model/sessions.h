@@ -64,6 +64,11 @@ struct SavedBlock {
     std::string why;
 };
 
+/// What became of a saved session.
+enum class SessionOutcome { Planned, Held, Changed, Cancelled };
+std::string_view toString(SessionOutcome o);
+std::optional<SessionOutcome> sessionOutcomeFromString(std::string_view s);
+
 struct SavedSession {
     std::int64_t id = 0;
     std::string squad;
@@ -78,7 +83,35 @@ struct SavedSession {
     std::string savedAt;
     std::vector<SavedBlock> blocks;
     std::vector<std::pair<std::int64_t, int>> focusMinutes; ///< (focus id, minutes), by id
+    SessionOutcome outcome = SessionOutcome::Planned;
+    std::optional<int> playersPresent; ///< once marked held or changed
+    std::vector<std::optional<int>> heldMinutes; ///< per block, as done (held or changed)
+    std::string recordedBy;
+    std::string recordedAt;
 };
+
+/// How a session went, as the staff record it: held as planned, changed (the minutes each
+/// block really took, 0 for a block left out), or cancelled; and how many players took part
+/// (a count: no per-player load is kept).
+struct SessionRecord {
+    SessionOutcome outcome = SessionOutcome::Held;
+    int playersPresent = 0;        ///< held or changed: 1 or more
+    std::vector<int> blockMinutes; ///< changed: one per block, in the saved order
+};
+
+/// The training a focus got between two dates, from sessions as held.
+struct FocusTraining {
+    int heldMinutes = 0;        ///< minutes of sessions held or changed that worked on it
+    int heldSessions = 0;       ///< sessions held or changed that gave it minutes
+    int unrecordedSessions = 0; ///< saved sessions for it not yet marked held or cancelled
+    int unrecordedMinutes = 0;  ///< the minutes those sessions planned for it
+    int cancelledSessions = 0;
+};
+
+/// The review's and the focus pages' sentence about it: "94 minutes in 5 sessions held from
+/// 2026-09-27 to 2026-10-24; 1 saved session (20 min) not yet marked held or cancelled is not
+/// counted".
+std::string trainingNote(const FocusTraining& t, const std::string& from, const std::string& to);
 
 struct SessionSave {
     std::int64_t id = 0;
@@ -107,8 +140,21 @@ class SessionStore {
     /// drill is one of `drills`: the training time a focus review reports.
     int minutesOnDrills(const std::string& squad, const std::string& from, const std::string& to,
                         const std::vector<std::int64_t>& drills) const;
-    /// Minutes saved sessions dated `from`–`to` gave to focus `focusId` (any drill working on it).
+    /// Minutes saved sessions dated `from`–`to` gave to focus `focusId` (any drill working on it),
+    /// as planned: every saved session, held or not.
     int minutesOnFocus(std::int64_t focusId, const std::string& from, const std::string& to) const;
+    /// The training focus `focusId` got from sessions dated `from`–`to` as held: held and changed
+    /// sessions count (changed ones with the minutes really done), cancelled ones do not, and
+    /// sessions not yet marked are counted apart.
+    FocusTraining trainingOnFocus(std::int64_t focusId, const std::string& from, const std::string& to) const;
+
+    /// Records how the squad's session on `date` went. Refused (a problem, nothing changed)
+    /// when there is no saved session that day, the day is after `today`, the players are not
+    /// a count of 1 or more, or a changed session's minutes are not one whole number 0–300 per
+    /// block. A changed session's focus minutes are counted again from the blocks as done
+    /// (a block counts for a focus when its drill works on it: model/planner.h worksOn).
+    Problems record(const std::string& squad, const std::string& date, const SessionRecord& how,
+                    const std::string& today, const std::string& by, const std::string& now);
 
   private:
     ClubRepository& m_repo;

@@ -53,6 +53,16 @@ if(sessions STREQUAL "[]")
         club(plan ${date} --minutes ${minutes} --players 18 --save
              --by "D. Arkwright (head coach)")
     endforeach()
+    # How the week went, recorded on Sat 3 Oct: four sessions held (players who took part),
+    # Friday's cancelled; reviews count the minutes held (docs/planner.md, "Training as held").
+    set(ENV{PITCHLOOP_TODAY} 2026-10-03)
+    foreach(day 2026-09-28:17 2026-09-29:18 2026-09-30:16 2026-10-01:18)
+        string(REPLACE ":" ";" parts ${day})
+        list(GET parts 0 date)
+        list(GET parts 1 players)
+        club(sessions mark ${date} --outcome held --players ${players} --by "R. Tamsin (analyst)")
+    endforeach()
+    club(sessions mark 2026-10-02 --outcome cancelled --by "R. Tamsin (analyst)")
 endif()
 unset(ENV{PITCHLOOP_TODAY})
 message(STATUS "demo club ready: ${CLUB}")

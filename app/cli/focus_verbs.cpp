@@ -327,11 +327,11 @@ int FocusVerbs::runReview(ClubRepository& repo, std::ostream& out, std::ostream&
         return kExitBadInput;
     }
     Review r = *result.review;
-    // Training time: the minutes saved sessions gave this focus, from the start to the last
+    // Training time: the minutes sessions held gave this focus, from the start to the last
     // match reviewed (the same count the app's focus list shows up to today).
-    r.trainingMinutes = SessionStore(repo).minutesOnFocus(f->id, f->startDate, r.after.dates.back());
-    r.trainingNote = "minutes saved training sessions gave this focus from " + f->startDate +
-                     " to " + r.after.dates.back() + " (the last match reviewed)";
+    const FocusTraining held = SessionStore(repo).trainingOnFocus(f->id, f->startDate, r.after.dates.back());
+    r.trainingMinutes = held.heldMinutes;
+    r.trainingNote = trainingNote(held, f->startDate, r.after.dates.back()) + " (the last match reviewed)";
     const std::string json = reviewToJson(r);
     if (!m_verdict.empty()) {
         if (m_by.empty()) {
@@ -411,8 +411,7 @@ int FocusVerbs::runReview(ClubRepository& repo, std::ostream& out, std::ostream&
                       p.above ? "   above the upper limit" : p.below ? "   below the lower limit" : "");
         out << line;
     }
-    out << "\nTraining time: " << (r.trainingMinutes ? std::to_string(static_cast<int>(*r.trainingMinutes)) : std::string("-"))
-        << " minutes (" << r.trainingNote << ").\n";
+    out << "\nTraining time: " << r.trainingNote << ".\n";
     if (m_verdict.empty())
         out << "Record the staff's verdict with: pitchloop review " << f->id
             << " --verdict worked|partly|no_change|cant_tell --by NAME --note \"...\"\n";

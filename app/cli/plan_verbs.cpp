@@ -117,6 +117,17 @@ PlanVerbs::PlanVerbs(CLI::App& app) {
     m_sessions->add_option("--format", m_format, "table or json")
         ->check(CLI::IsMember({"table", "json"}));
     squad(m_sessions);
+    m_mark = m_sessions->add_subcommand("mark", "Record how a saved session went: held, changed "
+                                                "(minutes per block as done) or cancelled");
+    m_mark->add_option("date", m_date, "The session's date, YYYY-MM-DD")->required();
+    m_mark->add_option("--outcome", m_outcome, "held, changed or cancelled")
+        ->required()
+        ->check(CLI::IsMember({"held", "changed", "cancelled"}));
+    m_mark->add_option("--players", m_players, "How many players took part (held or changed)");
+    m_mark->add_option("--minutes", m_blockMinutes, "Changed: the minutes each block took, in order "
+                                                    "(0 for one left out), e.g. --minutes 10 12 0 10");
+    m_mark->add_option("--by", m_by, "Who records it")->required();
+    squad(m_mark);
 }
 
 int PlanVerbs::run(const Globals& g, std::ostream& out, std::ostream& err) {
@@ -127,6 +138,7 @@ int PlanVerbs::run(const Globals& g, std::ostream& out, std::ostream& err) {
     if (m_remove->parsed()) return runRemove(*repo, err);
     if (m_next->parsed()) return runNext(*repo, out, err);
     if (m_caps->parsed()) return runCaps(*repo, out, err);
+    if (m_mark->parsed()) return runMark(*repo, out, err);
     if (m_sessions->parsed()) return runSessions(*repo, out, err);
     return runPlan(*repo, out, err);
 }
@@ -415,19 +427,52 @@ int PlanVerbs::runSessions(ClubRepository& repo, std::ostream& out, std::ostream
                             {"blocks", blocks},
                             {"focus_minutes", focus},
                             {"saved_by", s.savedBy},
-                            {"saved_at", s.savedAt}});
+                            {"saved_at", s.savedAt},
+                            {"outcome", toString(s.outcome)},
+                            {"players_present", s.playersPresent ? nlohmann::json(*s.playersPresent) : nlohmann::json()},
+                            {"held_minutes", [&] {
+                                 nlohmann::json held = nlohmann::json::array();
+                                 for (const auto& m : s.heldMinutes) held.push_back(m ? nlohmann::json(*m) : nlohmann::json());
+                                 return held;
+                             }()},
+                            {"recorded_by", s.recordedBy},
+                            {"recorded_at", s.recordedAt}});
         }
         out << list.dump(2) << "\n";
         return kExitOk;
     }
     for (const auto& s : sessions) {
         out << s.date << "  " << s.dayLabel << "  " << s.minutes << " min, " << s.players
-            << " players, cap " << s.cap << "\n";
-        for (const auto& b : s.blocks)
-            out << "    " << b.minutes << " min  " << toString(b.role) << "  " << title(b.drillId)
-                << "\n";
+            << " players, cap " << s.cap << "  " << toString(s.outcome)
+            << (s.playersPresent ? " (" + std::to_string(*s.playersPresent) + " took part)" : std::string()) << "\n";
+        for (std::size_t i = 0; i < s.blocks.size(); ++i) {
+            const auto& b = s.blocks[i];
+            std::string done;
+            if (i < s.heldMinutes.size() && s.heldMinutes[i].has_value() && s.heldMinutes[i].value() != b.minutes)
+                done = "  (done: " + std::to_string(s.heldMinutes[i].value()) + " min)";
+            out << "    " << b.minutes << " min  " << toString(b.role) << "  " << title(b.drillId) << done << "\n";
+        }
     }
     if (sessions.empty()) err << "(no saved sessions: pitchloop plan DATE ... --save)\n";
+    return kExitOk;
+}
+
+int PlanVerbs::runMark(ClubRepository& repo, std::ostream& out, std::ostream& err) {
+    SessionRecord how;
+    how.outcome = *sessionOutcomeFromString(m_outcome);
+    how.playersPresent = m_players;
+    how.blockMinutes = m_blockMinutes;
+    if (how.outcome != SessionOutcome::Changed && !m_blockMinutes.empty()) {
+        err << "error: --minutes: only a changed session takes the minutes of its blocks\n";
+        return kExitBadInput;
+    }
+    const Problems problems = SessionStore(repo).record(m_squad, m_date, how, today(), m_by, nowUtc());
+    if (!problems.empty()) {
+        for (const auto& p : problems) err << "error: " << p.describe() << "\n";
+        err << "nothing recorded\n";
+        return kExitBadInput;
+    }
+    out << "recorded the session of " << m_date << " as " << m_outcome << "\n";
     return kExitOk;
 }
 

@@ -30,6 +30,7 @@ class PlanVerbs {
     int runCaps(model::ClubRepository& repo, std::ostream& out, std::ostream& err);
     int runPlan(model::ClubRepository& repo, std::ostream& out, std::ostream& err);
     int runSessions(model::ClubRepository& repo, std::ostream& out, std::ostream& err);
+    int runMark(model::ClubRepository& repo, std::ostream& out, std::ostream& err);
 
     CLI::App* m_fixtures = nullptr;
     CLI::App* m_import = nullptr;
@@ -40,6 +41,9 @@ class PlanVerbs {
     CLI::App* m_caps = nullptr;
     CLI::App* m_plan = nullptr;
     CLI::App* m_sessions = nullptr;
+    CLI::App* m_mark = nullptr;
+    std::string m_outcome;
+    std::vector<int> m_blockMinutes;
     std::string m_from;
     std::string m_to;
 

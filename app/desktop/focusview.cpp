@@ -23,6 +23,7 @@
 #include <QVariantMap>
 
 #include <algorithm>
+#include <cctype>
 #include <cmath>
 #include <optional>
 
@@ -189,8 +190,10 @@ void FocusView::refreshList() {
                                        .arg(compactDateText(f.startDate));
         r.drillsText = f.drills.size() == 1 ? tr("1 drill linked") : tr("%1 drills linked").arg(f.drills.size());
         const std::string until = state == FocusState::Closed ? f.closedAt.substr(0, 10) : day;
-        r.minutesText = tr("%1 min of training up to today")
-                            .arg(sessions.minutesOnFocus(f.id, f.startDate, until));
+        const FocusTraining t = sessions.trainingOnFocus(f.id, f.startDate, until);
+        r.minutesText = t.unrecordedSessions > 0
+                            ? tr("%1 min held up to today (%2 planned not marked)").arg(t.heldMinutes).arg(t.unrecordedMinutes)
+                            : tr("%1 min held up to today").arg(t.heldMinutes);
         due += state == FocusState::DueForReview;
         open += state == FocusState::Open;
         rows.push_back(std::move(r));
@@ -286,10 +289,9 @@ void FocusView::refreshDetail() {
                   .arg(since);
     m_noteText = qs(f.note);
     const std::string until = m_closed ? f.closedAt.substr(0, 10) : day;
-    const int minutes = SessionStore(*repo).minutesOnFocus(f.id, f.startDate, until);
-    m_minutesText = tr("%1 minutes of saved training sessions worked on this focus from %2 to %3 (the review counts up to its last match).")
-                        .arg(minutes)
-                        .arg(compactDateText(f.startDate), compactDateText(until));
+    const FocusTraining held = SessionStore(*repo).trainingOnFocus(f.id, f.startDate, until);
+    m_minutesText = tr("Training held on this focus: %1 (the review counts up to its last match). Mark each session held, changed or cancelled in the Week planner.")
+                        .arg(qs(trainingNote(held, f.startDate, until)));
     if (m_closed)
         m_verdictText = tr("Closed %1 with the verdict “%2”%3")
                             .arg(compactDateText(f.closedAt.substr(0, 10)), verdictWord(f.verdict),
@@ -333,9 +335,9 @@ void FocusView::refreshDetail() {
             m_reviewProblem = tr("The review cannot be computed yet: %1.").arg(qs(result.problem));
         } else {
             Review r = *result.review;
-            r.trainingMinutes = SessionStore(*repo).minutesOnFocus(f.id, f.startDate, r.after.dates.back());
-            r.trainingNote = "minutes saved training sessions gave this focus from " + f.startDate +
-                             " to " + r.after.dates.back() + " (the last match reviewed)";
+            const FocusTraining reviewed = SessionStore(*repo).trainingOnFocus(f.id, f.startDate, r.after.dates.back());
+            r.trainingMinutes = reviewed.heldMinutes;
+            r.trainingNote = trainingNote(reviewed, f.startDate, r.after.dates.back()) + " (the last match reviewed)";
             m_reviewJson = reviewToJson(r);
             showReview(r, false);
             m_reviewSourceText = state == FocusState::DueForReview
@@ -423,7 +425,9 @@ void FocusView::showReview(const Review& r, bool stored) {
                       .arg(r.target->direction == Direction::AtLeast ? tr("at least") : tr("at most"),
                            valueText(kind, r.target->value), prob(r.probAfterMeetsTarget));
     m_beliefText = belief;
-    m_trainingText = r.trainingMinutes
+    // Notes from sessions as held begin with their minutes; reviews stored before say them apart.
+    const bool noteHasMinutes = !r.trainingNote.empty() && std::isdigit(static_cast<unsigned char>(r.trainingNote[0]));
+    m_trainingText = r.trainingMinutes && !noteHasMinutes
                          ? tr("Training: %1 %2.").arg(static_cast<int>(*r.trainingMinutes)).arg(qs(r.trainingNote))
                          : tr("Training: %1.").arg(qs(r.trainingNote));
     m_chart->reset(r);

@@ -20,6 +20,7 @@
 #include <QFile>
 #include <QFileInfo>
 #include <QLocale>
+#include <QRegularExpression>
 #include <QSaveFile>
 #include <QtConcurrent/QtConcurrentRun>
 
@@ -218,6 +219,8 @@ void PlannerView::refresh() {
         m_selectedDayDetail.clear();
         m_selectedHasSession = false;
         m_selectedFixture.clear();
+        m_selectedCanMark = false;
+        m_selectedOutcomeText.clear();
         m_selectedSessionText.clear();
         m_selectedDrillsText.clear();
         m_selectedCap = -1;
@@ -296,6 +299,23 @@ void PlannerView::fillWeek(model::ClubRepository& repo) {
                                      {QStringLiteral("venue"), qs(day.next->venue)},
                                      {QStringLiteral("competition"), qs(day.next->competition)}};
             m_selectedHasSession = row.hasSession;
+            m_selectedCanMark = row.hasSession && date <= today;
+            m_selectedOutcomeText.clear();
+            if (session != saved.end()) {
+                switch (session->outcome) {
+                case SessionOutcome::Planned:
+                    m_selectedOutcomeText = date <= today ? tr("Not yet marked held, changed or cancelled: its minutes do not count for the focuses yet.")
+                                                          : tr("Planned.");
+                    break;
+                case SessionOutcome::Held:
+                    m_selectedOutcomeText = tr("Held as planned · %1 players took part").arg(session->playersPresent.value_or(0));
+                    break;
+                case SessionOutcome::Changed:
+                    m_selectedOutcomeText = tr("Held with changes · %1 players took part").arg(session->playersPresent.value_or(0));
+                    break;
+                case SessionOutcome::Cancelled: m_selectedOutcomeText = tr("Cancelled"); break;
+                }
+            }
             m_selectedSessionText = row.sessionText;
             m_selectedDrillsText = row.drillLines.join(QLatin1Char('\n'));
             m_selectedCap = row.cap;
@@ -696,6 +716,61 @@ bool PlannerView::saveFixture(const QString& originalDate, const QString& date, 
     }
     setMessage(tr("Saved the fixture v %1 on %2.").arg(qs(f.opponent), dateText(f.date)), false);
     session()->reload(); // the week, the home page and the planner see the schedule
+    return true;
+}
+
+bool PlannerView::markSession(const QString& outcome, const QString& players, const QString& blockMinutes,
+                              const QString& by) {
+    model::ClubRepository* repo = repository();
+    if (!repo) {
+        setMessage(tr("No club file is open."), true);
+        return false;
+    }
+    const auto o = sessionOutcomeFromString(outcome.toStdString());
+    if (!o || *o == SessionOutcome::Planned) {
+        setMessage(tr("Choose held, changed or cancelled."), true);
+        return false;
+    }
+    if (by.trimmed().isEmpty()) {
+        setMessage(tr("Type your name in “Saved by” first: the record says who marked the session."), true);
+        return false;
+    }
+    SessionRecord how;
+    how.outcome = *o;
+    if (*o != SessionOutcome::Cancelled) {
+        const auto n = wholeNumber(players);
+        if (!n) {
+            setMessage(tr("Players: type how many took part, e.g. 16."), true);
+            return false;
+        }
+        how.playersPresent = *n;
+    }
+    if (*o == SessionOutcome::Changed) {
+        for (const QString& part : blockMinutes.split(QRegularExpression(QStringLiteral("[\\s,;]+")), Qt::SkipEmptyParts)) {
+            const auto m = wholeNumber(part);
+            if (!m) {
+                setMessage(tr("Minutes per block: '%1' is not a whole number; type one number per block, e.g. 10 12 0 10.").arg(part), true);
+                return false;
+            }
+            how.blockMinutes.push_back(*m);
+        }
+    }
+    Problems problems;
+    try {
+        problems = SessionStore(*repo).record(m_squad, m_selected.toStdString(), how, todayIso(), by.trimmed().toStdString(),
+                                              nowUtcIso());
+    } catch (const std::exception& e) {
+        setMessage(tr("Nothing was recorded: %1").arg(QString::fromUtf8(e.what())), true);
+        return false;
+    }
+    if (!problems.empty()) {
+        QStringList lines;
+        for (const auto& p : problems) lines << qs(p.message);
+        setMessage(tr("Nothing was recorded: %1").arg(lines.join(QStringLiteral("; "))), true);
+        return false;
+    }
+    setMessage(tr("Recorded the session of %1 as %2.").arg(dateText(m_selected.toStdString()), outcome), false);
+    session()->reload(); // focus pages and reviews count the minutes held
     return true;
 }
 

@@ -55,6 +55,11 @@ class PlannerView : public pitchloop::desktop::SessionClient {
     /// The fixture on the selected day, for the fixture form: {date, kickoff, opponent, venue,
     /// competition}; empty when the day has none.
     Q_PROPERTY(QVariantMap selectedFixture READ selectedFixture NOTIFY dayChanged)
+    /// How the selected day's saved session went: "Held · 17 players took part", "Not yet
+    /// marked held, changed or cancelled", "Cancelled"; empty without a session.
+    Q_PROPERTY(QString selectedOutcomeText READ selectedOutcomeText NOTIFY dayChanged)
+    /// The selected day's session can be marked: it is saved and its day has come.
+    Q_PROPERTY(bool selectedCanMark READ selectedCanMark NOTIFY dayChanged)
     /// The chosen day's saved session: "90 min · 18 players", and its drills one a line.
     Q_PROPERTY(QString selectedSessionText READ selectedSessionText NOTIFY dayChanged)
     Q_PROPERTY(QString selectedDrillsText READ selectedDrillsText NOTIFY dayChanged)
@@ -103,6 +108,8 @@ public:
     QString selectedDayDetail() const { return m_selectedDayDetail; }
     bool selectedHasSession() const { return m_selectedHasSession; }
     QVariantMap selectedFixture() const { return m_selectedFixture; }
+    QString selectedOutcomeText() const { return m_selectedOutcomeText; }
+    bool selectedCanMark() const { return m_selectedCanMark; }
     QString selectedSessionText() const { return m_selectedSessionText; }
     QString selectedDrillsText() const { return m_selectedDrillsText; }
     QString suggestedMinutes() const { return m_suggestedMinutes; }
@@ -163,6 +170,10 @@ public:
                                  const QString& opponent, const QString& venue, const QString& competition);
     /// Removes the squad's fixture on `date`.
     Q_INVOKABLE bool removeFixture(const QString& date);
+    /// Records how the selected day's session went: "held", "changed" (with the minutes each
+    /// block took, e.g. "10 12 0 10") or "cancelled", with the players who took part.
+    Q_INVOKABLE bool markSession(const QString& outcome, const QString& players, const QString& blockMinutes,
+                                 const QString& by);
     /// The week's saved sessions and the open focuses' review dates that fall in it as an
     /// iCalendar file; sessions start at `start` ("HH:MM").
     Q_INVOKABLE bool exportCalendar(const QUrl& file, const QString& start);
@@ -224,6 +235,8 @@ private:
     QString m_planSummary;
     QString m_planNotes;
     QVariantMap m_selectedFixture;
+    QString m_selectedOutcomeText;
+    bool m_selectedCanMark = false;
     QString m_adjustmentsText;
     bool m_planReplacesSaved = false;
     bool m_busy = false;

@@ -293,6 +293,43 @@ Page {
                     font.pixelSize: Theme.fontSmall
                     wrapMode: Text.WordWrap
                 }
+                // Training as held: what really happened, which is what reviews count.
+                Label {
+                    objectName: "sessionOutcome"
+                    visible: planner.selectedOutcomeText.length > 0
+                    Layout.fillWidth: true
+                    text: planner.selectedOutcomeText
+                    color: Theme.textMuted
+                    font.pixelSize: Theme.fontSmall
+                    wrapMode: Text.WordWrap
+                }
+                RowLayout {
+                    visible: planner.selectedCanMark
+                    spacing: 4
+                    TextField {
+                        id: presentField
+                        objectName: "playersPresent"
+                        Layout.preferredWidth: 70
+                        placeholderText: qsTr("players")
+                        ToolTip.visible: hovered
+                        ToolTip.text: qsTr("How many players took part (a count; no per-player load is kept)")
+                    }
+                    Button {
+                        objectName: "markHeld"
+                        text: qsTr("Held")
+                        onClicked: planner.markSession("held", presentField.text, "", byField.text)
+                    }
+                    Button {
+                        objectName: "markChanged"
+                        text: qsTr("Changed…")
+                        onClicked: changedDialog.open()
+                    }
+                    Button {
+                        objectName: "markCancelled"
+                        text: qsTr("Cancelled")
+                        onClicked: planner.markSession("cancelled", "", "", byField.text)
+                    }
+                }
                 Label {
                     Layout.fillWidth: true
                     Layout.fillHeight: true
@@ -444,6 +481,25 @@ Page {
         defaultSuffix: "pdf"
         nameFilters: [qsTr("PDF files (*.pdf)")]
         onAccepted: planner.exportSheet(selectedFile)
+    }
+
+    Dialog {
+        id: changedDialog
+        title: qsTr("The session as it was held")
+        modal: true
+        width: 460
+        anchors.centerIn: parent
+        standardButtons: Dialog.Save | Dialog.Cancel
+        onAccepted: planner.markSession("changed", presentField.text, changedMinutes.text, byField.text)
+        ColumnLayout {
+            width: parent.width
+            Label {
+                Layout.fillWidth: true
+                text: qsTr("The minutes each block really took, in the saved order (0 for a block left out):\n%1").arg(planner.selectedDrillsText)
+                wrapMode: Text.WordWrap
+            }
+            TextField { id: changedMinutes; Layout.fillWidth: true; placeholderText: qsTr("e.g. 10 12 0 10") }
+        }
     }
 
     // One fixture, added or edited in place: date, kick-off, opponent, venue, competition.

@@ -280,3 +280,41 @@ TEST_CASE("plan: bad input gives a clear message and saves nothing", "[cli][plan
     refused({"30/09/2026", "--minutes", "60", "--players", "16"},
             "'30/09/2026' is not a date YYYY-MM-DD");
 }
+
+TEST_CASE("sessions mark: held, changed and cancelled, with refusals that record nothing", "[cli][plan]") {
+    PlanClub club; // today is 2026-09-30
+    REQUIRE(planCli({"--db", club.db, "fixtures", "import", (club.dir / "autumn.csv").string()}).code == 0);
+    REQUIRE(planCli({"--db", club.db, "plan", "2026-09-30", "--minutes", "60", "--players", "16", "--save", "--by",
+                     "R. Tamsin"})
+                .code == 0);
+    auto r = planCli({"--db", club.db, "sessions", "mark", "2026-10-01", "--outcome", "held", "--players", "16",
+                      "--by", "R. Tamsin"});
+    CHECK(r.code == 2);
+    CHECK(has(r.err, "no saved session of First team on 2026-10-01"));
+    r = planCli({"--db", club.db, "sessions", "mark", "2026-09-30", "--outcome", "held", "--by", "R. Tamsin"});
+    CHECK(r.code == 2);
+    CHECK(has(r.err, "players: expected how many players took part, 1 or more (got 0)"));
+    CHECK(has(r.err, "nothing recorded"));
+    r = planCli({"--db", club.db, "sessions", "mark", "2026-09-30", "--outcome", "held", "--players", "15", "--by",
+                 "R. Tamsin"});
+    REQUIRE(r.code == 0);
+    CHECK(has(r.out, "recorded the session of 2026-09-30 as held"));
+    auto listed = nlohmann::json::parse(planCli({"--db", club.db, "sessions", "--format", "json"}).out);
+    REQUIRE(listed.size() == 1);
+    CHECK(listed[0]["outcome"] == "held");
+    CHECK(listed[0]["players_present"] == 15);
+    CHECK(listed[0]["recorded_by"] == "R. Tamsin");
+    const std::size_t blocks = listed[0]["blocks"].size();
+    std::vector<std::string> args{"--db", club.db, "sessions", "mark", "2026-09-30", "--outcome", "changed",
+                                  "--players", "14", "--by", "R. Tamsin", "--minutes"};
+    for (std::size_t i = 0; i < blocks; ++i) args.push_back(i == 1 ? "0" : "10");
+    REQUIRE(planCli(args).code == 0);
+    listed = nlohmann::json::parse(planCli({"--db", club.db, "sessions", "--format", "json"}).out);
+    CHECK(listed[0]["outcome"] == "changed");
+    CHECK(listed[0]["held_minutes"][1] == 0);
+    r = planCli({"--db", club.db, "sessions", "mark", "2026-09-30", "--outcome", "cancelled", "--by", "R. Tamsin"});
+    REQUIRE(r.code == 0);
+    listed = nlohmann::json::parse(planCli({"--db", club.db, "sessions", "--format", "json"}).out);
+    CHECK(listed[0]["outcome"] == "cancelled");
+    CHECK(listed[0]["players_present"].is_null());
+}

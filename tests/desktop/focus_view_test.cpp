@@ -269,14 +269,31 @@ void FocusViewTest::listAndTrainingMinutes() {
              QStringLiteral("0 of 5 matches for the review played since %1").arg(compactDateText("2026-09-27")));
     QCOMPARE(role(*view.focuses(), 0, "phase").toInt(), static_cast<int>(FocusPhase::Open));
     QCOMPARE(role(*view.focuses(), 0, "minutesText").toString(),
-             QStringLiteral("0 min of training up to today")); // the session is after "today"
+             QStringLiteral("0 min held up to today")); // the session is after "today"
 
+    // Training as held: a saved session counts once the staff mark it held; until then it is
+    // counted apart, a cancelled one not at all, a changed one with the minutes really done.
     view.setToday(kToday);
-    const int minutes = model::SessionStore(*m_reference).minutesOnFocus(m_focusId, f->startDate,
-                                                                        kToday.toStdString());
-    QCOMPARE(minutes, 25);
+    QCOMPARE(model::SessionStore(*m_reference).minutesOnFocus(m_focusId, f->startDate, kToday.toStdString()), 25);
     QCOMPARE(role(*view.focuses(), 0, "minutesText").toString(),
-             QStringLiteral("%1 min of training up to today").arg(minutes));
+             QStringLiteral("0 min held up to today (25 planned not marked)"));
+    model::SessionStore store(*m_reference);
+    const auto record = [&](model::SessionOutcome outcome, std::vector<int> minutes) {
+        model::SessionRecord how;
+        how.outcome = outcome;
+        how.playersPresent = 16;
+        how.blockMinutes = std::move(minutes);
+        const auto problems = store.record("First team", "2026-09-29", how, kToday.toStdString(), "R. Tamsin",
+                                           "2026-09-29T12:00:00Z");
+        QVERIFY(problems.empty());
+        m_session.reload();
+    };
+    record(model::SessionOutcome::Cancelled, {});
+    QCOMPARE(role(*view.focuses(), 0, "minutesText").toString(), QStringLiteral("0 min held up to today"));
+    record(model::SessionOutcome::Changed, {10});
+    QCOMPARE(role(*view.focuses(), 0, "minutesText").toString(), QStringLiteral("10 min held up to today"));
+    record(model::SessionOutcome::Held, {});
+    QCOMPARE(role(*view.focuses(), 0, "minutesText").toString(), QStringLiteral("25 min held up to today"));
     // By 1 Dec the review point is passed: the 5 the review needs, and how many in all (the
     // same count the detail's "played so far" gives).
     QCOMPARE(role(*view.focuses(), 0, "progressText").toString(),

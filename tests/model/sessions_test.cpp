@@ -11,6 +11,8 @@
 #include <SQLiteCpp/Database.h>
 #include <catch2/catch.hpp>
 
+#include <tuple>
+
 using namespace pitchloop::model;
 using namespace pitchloop::testutil;
 using Catch::Matchers::Contains;
@@ -289,4 +291,100 @@ TEST_CASE("a planned session is saved with its blocks and minutes per focus, and
     CHECK(sessions.remove(kSquad, "2026-08-12"));
     CHECK(sessions.minutesOnFocus(focusId, "2026-08-09", "2026-08-31") == 20);
     CHECK(sessions.drillsOn(kSquad, "2026-08-12").empty());
+}
+
+TEST_CASE("training as held: a session counts for its focus once marked held, with the minutes "
+          "really done when changed, and not when cancelled",
+          "[sessions][planner]") {
+    const auto dir = freshTempDir("sessions-held");
+    const std::string file = (dir / "club.sqlite").string();
+    ClubRepository repo(file);
+    repo.ensureSeason(kSquad, "2026-27");
+    DrillBook book(repo);
+    const auto warm = addDrill(book, bookDrill("Rondo warm-up", 10, 2, {}, {}, {"warm_up"}));
+    const auto press = addDrill(book, bookDrill("Press the first pass", 20, 4, {"press_rate"}, {{4, 3}}, {}));
+    const auto other = addDrill(book, bookDrill("Crossing", 15, 3, {"pass_completion"}, {{5, 1}}, {}));
+    const auto cool = addDrill(book, bookDrill("Walk and stretch", 10, 1, {}, {}, {"cool_down"}));
+    Focus f;
+    f.squad = kSquad;
+    f.season = "2026-27";
+    f.metric = "press_rate";
+    f.zones = {{4, 3}};
+    f.openedAfterMatch = "KB-2026-01";
+    f.startDate = "2026-08-09";
+    f.evidence = "{}";
+    f.openedBy = "R. Tamsin";
+    const auto focusId = FocusStore(repo).open(f, kNow);
+    Plan plan;
+    plan.date = "2026-08-11";
+    plan.sessionMinutes = 55;
+    plan.playersAvailable = 18;
+    for (auto [id, minutes, role] : {std::tuple{warm, 10, BlockRole::WarmUp}, {press, 20, BlockRole::Main},
+                                     {other, 15, BlockRole::Main}, {cool, 10, BlockRole::CoolDown}}) {
+        PlanBlock b;
+        b.drillId = id;
+        b.minutes = minutes;
+        b.role = role;
+        if (id == press) b.focus = 0;
+        plan.blocks.push_back(b);
+    }
+    plan.focusMinutes = {{0, focusId, 20}};
+    SessionStore sessions(repo);
+    sessions.save(kSquad, plan, "R. Tamsin", kNow);
+
+    // Planned, not yet marked: counted apart, and said so.
+    FocusTraining t = sessions.trainingOnFocus(focusId, "2026-08-09", "2026-08-31");
+    CHECK(t.heldMinutes == 0);
+    CHECK(t.unrecordedSessions == 1);
+    CHECK(t.unrecordedMinutes == 20);
+    CHECK(trainingNote(t, "2026-08-09", "2026-08-31") ==
+          "0 minutes in 0 sessions held from 2026-08-09 to 2026-08-31; 1 saved session (20 min) not "
+          "yet marked held or cancelled is not counted");
+
+    // Refused, nothing changed: a future day, no players, the wrong number of blocks, no session.
+    const std::string before = dataSnapshot(file);
+    SessionRecord held{SessionOutcome::Held, 16, {}};
+    const auto future = sessions.record(kSquad, "2026-08-11", held, "2026-08-10", "R. Tamsin", kNow);
+    REQUIRE(future.size() == 1);
+    CHECK(future[0].describe() == "the session of 2026-08-11: date: is after today (2026-08-10): a "
+                                  "session is marked once its day has come");
+    const auto nobody = sessions.record(kSquad, "2026-08-11", {SessionOutcome::Held, 0, {}}, "2026-08-31", "R. Tamsin", kNow);
+    REQUIRE(nobody.size() == 1);
+    CHECK(nobody[0].field == "players");
+    const auto blocks = sessions.record(kSquad, "2026-08-11", {SessionOutcome::Changed, 16, {10, 5}}, "2026-08-31", "R. Tamsin", kNow);
+    REQUIRE(blocks.size() == 1);
+    CHECK(blocks[0].message == "expected the minutes of each of the 4 blocks (got 2)");
+    CHECK(sessions.record(kSquad, "2026-08-12", held, "2026-08-31", "R. Tamsin", kNow).at(0).message ==
+          "no saved session of First team on 2026-08-12");
+    CHECK(dataSnapshot(file) == before);
+
+    // Held as planned.
+    REQUIRE(sessions.record(kSquad, "2026-08-11", held, "2026-08-31", "R. Tamsin", kNow).empty());
+    t = sessions.trainingOnFocus(focusId, "2026-08-09", "2026-08-31");
+    CHECK(t.heldMinutes == 20);
+    CHECK(t.heldSessions == 1);
+    CHECK(t.unrecordedSessions == 0);
+    auto saved = sessions.get(kSquad, "2026-08-11");
+    REQUIRE(saved);
+    CHECK(saved->outcome == SessionOutcome::Held);
+    CHECK(saved->playersPresent == 16);
+    CHECK(saved->heldMinutes == std::vector<std::optional<int>>{10, 20, 15, 10});
+
+    // Changed: the press drill ran 12 minutes, the crossing drill was dropped; the focus gets 12.
+    REQUIRE(sessions.record(kSquad, "2026-08-11", {SessionOutcome::Changed, 14, {10, 12, 0, 10}}, "2026-08-31",
+                            "R. Tamsin", kNow)
+                .empty());
+    CHECK(sessions.trainingOnFocus(focusId, "2026-08-09", "2026-08-31").heldMinutes == 12);
+    CHECK(sessions.get(kSquad, "2026-08-11")->playersPresent == 14);
+
+    // Cancelled: nothing counts; the planned minutes stay for what was planned.
+    REQUIRE(sessions.record(kSquad, "2026-08-11", {SessionOutcome::Cancelled, 0, {}}, "2026-08-31", "R. Tamsin", kNow)
+                .empty());
+    t = sessions.trainingOnFocus(focusId, "2026-08-09", "2026-08-31");
+    CHECK(t.heldMinutes == 0);
+    CHECK(t.cancelledSessions == 1);
+    CHECK(sessions.minutesOnFocus(focusId, "2026-08-09", "2026-08-31") == 20);
+    CHECK(trainingNote(t, "2026-08-09", "2026-08-31") ==
+          "0 minutes in 0 sessions held from 2026-08-09 to 2026-08-31; 1 session was cancelled");
+    CHECK_FALSE(sessions.get(kSquad, "2026-08-11")->playersPresent.has_value());
 }

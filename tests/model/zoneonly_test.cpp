@@ -410,7 +410,7 @@ INSERT INTO event(match_id, seq, file_index, period, t, side, type, result, x, y
     }
     {
         ClubRepository repo(file);
-        CHECK(repo.schemaVersion() == 9);
+        CHECK(repo.schemaVersion() == ClubRepository::kSchemaVersion);
         const auto summary = repo.matchSummary("KB-OLD-02");
         REQUIRE(summary);
         CHECK(summary->zoneOnlyGrid.empty());
