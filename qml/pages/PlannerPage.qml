@@ -303,13 +303,14 @@ Page {
                     font.pixelSize: Theme.fontSmall
                     wrapMode: Text.WordWrap
                 }
-                RowLayout {
+                Flow {
                     visible: planner.selectedCanMark
+                    Layout.fillWidth: true
                     spacing: 4
                     TextField {
                         id: presentField
                         objectName: "playersPresent"
-                        Layout.preferredWidth: 70
+                        width: 70
                         placeholderText: qsTr("players")
                         ToolTip.visible: hovered
                         ToolTip.text: qsTr("How many players took part (a count; no per-player load is kept)")
