@@ -1,4 +1,5 @@
 #include "drills.h"
+#include "fixtures.h"
 #include "pdfdocument.h"
 #include "pitchpainter.h"
 #include "sheetcolours.h"
@@ -29,6 +30,8 @@ constexpr double kGap = 2;       ///< between a block's role column and its text
 /// Font sizes (points) of the drill text at scale 1; shrunk together to fit the page.
 constexpr double kTitlePt = 10.5, kMetaPt = 7.8, kBodyPt = 8.6, kMinutesPt = 13, kRolePt = 7.5;
 constexpr std::array<double, 5> kScales{1.0, 0.95, 0.9, 0.86, 0.82};
+/// The drill text's size when the blocks run onto a second page: readable on the pitch.
+constexpr double kContinuedScale = 0.95;
 
 /// Lines kept of the organisation text and of each coaching point, and how many points, when
 /// even the smallest type does not fit the page: tried in order, keeping as much as fits.
@@ -89,17 +92,23 @@ QString metaLine(const SheetBlock& b, const SessionSheetData& d) {
 
 constexpr double kPad = 2.0, kPointIndent = 3.2;
 
+/// "on Sunday 27 September 2026 at 08:00 UTC" from an ISO date-time; as given when it is not one.
+std::string savedWhen(const std::string& iso) {
+    if (iso.size() < 16) return iso.empty() ? "" : "at " + iso;
+    const std::string date = iso.substr(0, 10);
+    const auto day = dayNumber(date);
+    if (!day) return "at " + iso;
+    return "on " + longDate(date, *day) + " at " + iso.substr(11, 5) + (iso.back() == 'Z' ? " UTC" : "");
+}
+
 BlockLayout layoutBlock(const SheetBlock& b, const SessionSheetData& d, const Fonts& f,
                         QPaintDevice* dev, const Mm& mm, const Limits& lim) {
     BlockLayout l;
     const double w = mm(kContentW - kRoleColW - kGap);
     l.title = wrapText(q(b.title), f.title, dev, w, 2);
     l.meta = wrapText(metaLine(b, d), f.meta, dev, w, 2);
-    // The meta line sits at the right of a one-line title when both fit.
-    l.metaInline = l.title.lines.size() == 1 && l.meta.lines.size() == 1 &&
-                   textWidth(l.title.lines[0], f.title, dev) + mm(5) +
-                           textWidth(l.meta.lines[0], f.meta, dev) <=
-                       w;
+    // The meta line (intensity, drill, focus) always sits under the title: one place to look.
+    l.metaInline = false;
     l.organisation = wrapText(q(b.organisation), f.body, dev, w, lim.organisationLines);
     std::size_t shown = b.coachingPoints.size();
     if (lim.points > 0 && shown > static_cast<std::size_t>(lim.points))
@@ -252,7 +261,8 @@ double drawFocuses(QPainter* painter, const SessionSheetData& d, const Mm& mm, Q
                    double top) {
     const QFont heading = sheetFont(10.5, true), name = sheetFont(8.6, true),
                 small = sheetFont(7.2), label = sheetFont(7.5, true), body = sheetFont(8.4);
-    constexpr double listW = 100, gap = 5, pitchW = kContentW - listW - gap;
+    // A sketch just large enough to read the zones: the room goes to the drill texts.
+    constexpr double listW = 122, gap = 5, pitchW = kContentW - listW - gap;
     const double pitchX = kMargin + listW + gap;
 
     const Paragraph h =
@@ -291,13 +301,13 @@ double drawFocuses(QPainter* painter, const SessionSheetData& d, const Mm& mm, Q
         Row r;
         r.top = ly;
         r.name = wrapText(q(f.metricName), name, dev, mm(textW), 2);
-        r.detail = wrapText(QStringLiteral("%1 min today  ·  focus %2  ·  %3\n%4")
+        r.detail = wrapText(QStringLiteral("%1 min today  ·  focus %2%3\n%4")
                                 .arg(f.minutes)
                                 .arg(f.id)
-                                .arg(q(f.metric))
+                                .arg(f.note.empty() ? QString() : QStringLiteral("  ·  “%1”").arg(q(f.note)))
                                 .arg(zones.isEmpty() ? QStringLiteral("whole pitch")
                                                      : zones.join(QStringLiteral("; "))),
-                            small, dev, mm(textW), 3);
+                            small, dev, mm(textW), 4);
         ly = std::max(ly + r.name.height() + r.detail.height(), ly + mm(sh)) + mm(2.2);
         rows.push_back(std::move(r));
     }
@@ -392,14 +402,32 @@ double drawFocuses(QPainter* painter, const SessionSheetData& d, const Mm& mm, Q
     return bottom - top;
 }
 
+/// The top of a continued page: the sheet's name, the squad and day, the page count.
+void drawContinuationHeader(QPainter& p, const SessionSheetData& d, const Mm& mm, int page, int pages) {
+    QPaintDevice* dev = p.device();
+    const QFont kicker = sheetFont(8, true), title = sheetFont(11, true);
+    double y = mm(kTop);
+    p.setPen(colours::kMuted);
+    p.setFont(kicker);
+    p.drawText(QPointF(mm(kMargin), y + QFontMetricsF(kicker, dev).ascent()),
+               QStringLiteral("TRAINING SESSION SHEET · PAGE %1 OF %2").arg(page).arg(pages));
+    y += QFontMetricsF(kicker, dev).lineSpacing() + mm(0.8);
+    p.setPen(colours::kInk);
+    drawParagraph(p,
+                  wrapText(QStringLiteral("%1 · %2 · blocks continued")
+                               .arg(q(d.squad), q(longDate(d.date, d.dayNumber))),
+                           title, dev, mm(kContentW), 1),
+                  QPointF(mm(kMargin), y));
+}
+
 /// The caution, boxed, above the foot line. Returns its top.
 double drawCaution(QPainter& p, const SessionSheetData& d, const Mm& mm) {
     QPaintDevice* dev = p.device();
     const QFont body = sheetFont(8.6), foot = sheetFont(6.8);
     const Paragraph footLine = wrapText(
-        QStringLiteral("Saved by %1 at %2 · drill notes as the drill book holds them today · "
+        QStringLiteral("Saved by %1 %2 · drill notes as the drill book holds them today · "
                        "printed with Pitchloop")
-            .arg(d.savedBy.empty() ? QStringLiteral("–") : q(d.savedBy), q(d.savedAt)),
+            .arg(d.savedBy.empty() ? QStringLiteral("–") : q(d.savedBy), q(savedWhen(d.savedAt))),
         foot, dev, mm(kContentW), 1);
     const double footTop = mm(kBottom) - footLine.height();
     p.setPen(colours::kMuted);
@@ -440,7 +468,6 @@ DrawReport drawSessionSheet(const SessionSheetData& d, QPdfWriter& writer) {
     QPainter p;
     if (!p.begin(&writer)) return report;
     report.ok = true;
-    report.pages = 1;
     const Mm mm(writer);
     QPaintDevice* dev = &writer;
     p.setRenderHint(QPainter::Antialiasing);
@@ -451,73 +478,83 @@ DrawReport drawSessionSheet(const SessionSheetData& d, QPdfWriter& writer) {
     const double focusTop = cautionTop - mm(3) - drawFocuses(nullptr, d, mm, dev, 0);
     drawFocuses(&p, d, mm, dev, focusTop);
 
-    // Blocks: the largest type that fits, then shortened notes, never past the focus section.
+    // Blocks: the largest type at which every text fits this page in full; when none does, the
+    // texts stay whole at a readable size and the blocks run onto a second page. Only a block
+    // taller than a whole page is shortened (and says so).
     const double blocksTop = headerBottom + mm(4);
-    const double room = focusTop - mm(3) - blocksTop;
     const Paragraph heading =
         wrapText(QStringLiteral("Blocks"), sheetFont(10.5, true), dev, mm(kContentW));
-    // A line under the blocks is kept free for the note on shortened or missing blocks.
+    // A line under the blocks is kept free for the note on continued or shortened blocks.
     const Paragraph noteLine =
         wrapText(QStringLiteral("x"), Fonts(kScales.back()).meta, dev, mm(kContentW));
     const double noteRoom = noteLine.height() + mm(1.5);
-    const double avail = room - heading.height() - mm(1) - noteRoom;
-    // First the largest type that fits; at the smallest, the least uniform cut that fits, then
-    // blocks get detail back one step at a time, in order, while the page has room.
+    const double firstLimit = focusTop - mm(3) - noteRoom;
+    const double avail = firstLimit - blocksTop - heading.height() - mm(1);
+    const double nextTop = mm(kTop) + mm(14); // under the continuation header
+    const double nextLimit = mm(kBottom) - noteRoom;
     const std::size_t n = d.blocks.size();
     std::vector<BlockLayout> layouts(n);
-    double scale = kScales.back();
-    auto layoutAll = [&](const Fonts& f, std::size_t level) {
+    auto layoutAll = [&](const Fonts& f) {
         double total = 0;
         for (std::size_t i = 0; i < n; ++i) {
-            layouts[i] = layoutBlock(d.blocks[i], d, f, dev, mm, kLimits[level]);
+            layouts[i] = layoutBlock(d.blocks[i], d, f, dev, mm, kLimits[0]);
             total += layouts[i].height;
         }
         return total;
     };
-    bool fits = false;
+    double scale = kContinuedScale;
+    bool onePage = false;
     for (const double s : kScales)
-        if (layoutAll(Fonts(s), 0) <= avail) {
+        if (layoutAll(Fonts(s)) <= avail) {
             scale = s;
-            fits = true;
+            onePage = true;
             break;
         }
-    if (!fits) {
-        const Fonts f(scale);
-        std::vector<std::size_t> level(n, kLimits.size() - 1);
-        double total = 0;
-        for (std::size_t lv = 1; lv < kLimits.size(); ++lv) {
-            total = layoutAll(f, lv);
-            if (total <= avail) {
-                std::fill(level.begin(), level.end(), lv);
-                fits = true;
-                break;
-            }
-        }
-        for (bool changed = fits; changed;) {
-            changed = false;
-            for (std::size_t i = 0; i < n; ++i) {
-                if (level[i] == 0) continue;
-                BlockLayout more = layoutBlock(d.blocks[i], d, f, dev, mm, kLimits[level[i] - 1]);
-                if (total - layouts[i].height + more.height > avail) continue;
-                total += more.height - layouts[i].height;
-                layouts[i] = std::move(more);
-                --level[i];
-                changed = true;
-            }
-        }
+    const Fonts fonts(scale);
+    if (!onePage) {
+        layoutAll(fonts);
+        // A block longer than a whole page keeps as much as fits one.
+        for (std::size_t i = 0; i < n; ++i)
+            for (std::size_t lv = 1; lv < kLimits.size() && layouts[i].height > nextLimit - nextTop; ++lv)
+                layouts[i] = layoutBlock(d.blocks[i], d, fonts, dev, mm, kLimits[lv]);
     }
     report.fontScale = scale;
-    const Fonts fonts(scale);
+    // Where each block goes: page 1 under the heading, then the next pages from the top.
+    std::vector<std::pair<int, double>> place(n);
+    {
+        int page = 1;
+        double y = blocksTop + heading.height() + mm(1);
+        for (std::size_t i = 0; i < n; ++i) {
+            if (y + layouts[i].height > (page == 1 ? firstLimit : nextLimit) && y > (page == 1 ? blocksTop + heading.height() + mm(1) : nextTop)) {
+                ++page;
+                y = nextTop;
+            }
+            place[i] = {page, y};
+            y += layouts[i].height;
+        }
+        report.pages = n > 0 ? place.back().first : 1;
+    }
 
     p.setPen(colours::kInk);
-    double y = blocksTop + drawParagraph(p, heading, QPointF(mm(kMargin), blocksTop)) + mm(1);
-    int startMinute = 0;
-    for (std::size_t i = 0; i < d.blocks.size(); ++i) {
-        const BlockLayout& l = layouts[i];
-        if (y + l.height > focusTop - mm(3) - noteRoom) {
-            report.blocksLeftOut = static_cast<int>(d.blocks.size() - i);
-            break;
+    drawParagraph(p, heading, QPointF(mm(kMargin), blocksTop));
+    int startMinute = 0, page = 1;
+    double y = blocksTop + heading.height() + mm(1);
+    const auto continued = [&](double at) {
+        p.setPen(colours::kMuted);
+        drawParagraph(p, wrapText(QStringLiteral("Continued on page %1.").arg(page + 1), fonts.meta, dev, mm(kContentW), 1),
+                      QPointF(mm(kMargin), at + mm(0.8)));
+    };
+    for (std::size_t i = 0; i < n; ++i) {
+        if (place[i].first != page) {
+            p.setPen(QPen(colours::kRule, mm(0.25)));
+            p.drawLine(QPointF(mm(kMargin), y), QPointF(mm(kMargin + kContentW), y));
+            continued(y);
+            writer.newPage();
+            ++page;
+            drawContinuationHeader(p, d, mm, page, report.pages);
         }
+        y = place[i].second;
+        const BlockLayout& l = layouts[i];
         p.setPen(QPen(colours::kRule, mm(0.25)));
         p.drawLine(QPointF(mm(kMargin), y), QPointF(mm(kMargin + kContentW), y));
         drawBlock(p, d.blocks[i], l, fonts, mm, y, startMinute);
@@ -527,17 +564,10 @@ DrawReport drawSessionSheet(const SessionSheetData& d, QPdfWriter& writer) {
     }
     p.setPen(QPen(colours::kRule, mm(0.25)));
     p.drawLine(QPointF(mm(kMargin), y), QPointF(mm(kMargin + kContentW), y));
-    if (report.blocksLeftOut > 0 || report.elidedTexts > 0) {
-        QString note = report.blocksLeftOut > 0
-                           ? QStringLiteral("%1 more block%2 did not fit on this page: see the "
-                                            "session in Pitchloop.")
-                                 .arg(report.blocksLeftOut)
-                                 .arg(report.blocksLeftOut == 1 ? "" : "s")
-                           : QStringLiteral("Notes ending in … are shortened, and \"+ more "
-                                            "coaching points\" left out, to fit the page; the "
-                                            "drill book has them in full.");
-        p.setPen(report.blocksLeftOut > 0 ? colours::kAlert : colours::kMuted);
-        drawParagraph(p, wrapText(note, fonts.meta, dev, mm(kContentW), 1),
+    if (report.elidedTexts > 0) {
+        p.setPen(colours::kMuted);
+        drawParagraph(p, wrapText(QStringLiteral("A drill longer than a page is shortened (…); the drill book has it in full."),
+                                  fonts.meta, dev, mm(kContentW), 1),
                       QPointF(mm(kMargin), y + mm(0.8)));
     }
     p.end();

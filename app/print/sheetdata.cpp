@@ -79,6 +79,7 @@ SheetResult<SessionSheetData> sessionSheetData(ClubRepository& repo, const std::
         if (const auto focus = focuses.get(id)) {
             f.metric = focus->metric;
             f.metricName = metricName(repo, focus->metric);
+            f.note = focus->note;
             // The sketch is drawn on the club's grid; a focus from an earlier grid is shown
             // on the zones its own fall in (as the planner reads it).
             f.zones = focus->grid == d.grid ? focus->zones : mapZones(focus->zones, focus->grid, d.grid);

@@ -43,6 +43,7 @@ struct SheetFocus {
     std::string label; ///< "F1", "F2", ... in the sheet's order (by focus id)
     std::string metric;
     std::string metricName;         ///< the metric's name (its id when it has none)
+    std::string note;               ///< the coach's own words when opening it
     std::vector<model::Zone> zones; ///< empty: the whole pitch
     int minutes = 0;                ///< minutes of the session's drills that work on it
 };
