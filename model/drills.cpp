@@ -30,7 +30,24 @@ bool Drill::sameContent(const Drill& o) const {
            coachingPoints == o.coachingPoints && durationMin == o.durationMin &&
            intensity == o.intensity && playersMin == o.playersMin && playersMax == o.playersMax &&
            areaLengthM == o.areaLengthM && areaWidthM == o.areaWidthM && equipment == o.equipment &&
-           metrics == o.metrics && zones == o.zones && tags == o.tags && author == o.author;
+           metrics == o.metrics && zones == o.zones && tags == o.tags && role == o.role &&
+           author == o.author;
+}
+
+std::string_view toString(DrillRole r) {
+    switch (r) {
+    case DrillRole::Any: return "";
+    case DrillRole::WarmUp: return "warm_up";
+    case DrillRole::Main: return "main";
+    case DrillRole::CoolDown: return "cool_down";
+    }
+    return "";
+}
+
+std::optional<DrillRole> drillRoleFromString(std::string_view s) {
+    for (DrillRole r : {DrillRole::WarmUp, DrillRole::Main, DrillRole::CoolDown})
+        if (toString(r) == s) return r;
+    return std::nullopt;
 }
 
 namespace {
@@ -67,6 +84,7 @@ template <typename J> J contentJson(const Drill& d) {
         zones.push_back(J::array({z.band, z.lane}));
     j["zones"] = zones;
     j["tags"] = d.tags;
+    if (d.role != DrillRole::Any) j["role"] = std::string(toString(d.role));
     j["author"] = d.author;
     return j;
 }
@@ -171,6 +189,9 @@ void from_json(const json& j, Drill& d) {
         for (const auto& z : *it)
             d.zones.push_back({z.at(0).get<int>(), z.at(1).get<int>()});
     d.tags = j.value("tags", std::vector<std::string>());
+    d.role = DrillRole::Any;
+    if (auto it = j.find("role"); it != j.end())
+        if (const auto r = drillRoleFromString(it->get<std::string>())) d.role = *r;
     d.author = j.at("author").get<std::string>();
 }
 
@@ -294,7 +315,7 @@ class DrillReader {
         static const std::set<std::string> kKeys{
             "title",     "purpose", "organisation", "coaching_points", "duration_min",
             "intensity", "players", "area_m",       "equipment",       "metrics",
-            "zones",     "tags",    "author"};
+            "zones",     "tags",    "role",         "author"};
         for (auto it = v.begin(); it != v.end(); ++it)
             if (!kKeys.contains(it.key())) error(it.key(), "unknown key");
         if (complete)
@@ -360,6 +381,11 @@ class DrillReader {
             }
         }
         textList(v, "tags", d.tags);
+        if (auto it = v.find("role"); it != v.end()) {
+            const auto r = it->is_string() ? drillRoleFromString(it->get<std::string>()) : std::nullopt;
+            if (!r) error("role", "expected warm_up, main or cool_down, found " + shown(*it));
+            else d.role = *r;
+        }
         text(v, "author", d.author);
     }
 

@@ -27,6 +27,13 @@ inline constexpr int kIntensityMax = 5;
 /// "recovery", "light", "moderate", "high", "maximal"; "" outside 1–5.
 std::string_view intensityName(int level);
 
+/// A drill's part in a session, when its author says so: a warm-up or cool-down routine, or a
+/// main drill. Unset (Any), the planner reads the tags `warm_up` / `cool_down` (however spelt).
+enum class DrillRole { Any, WarmUp, Main, CoolDown };
+/// "warm_up", "main", "cool_down"; "" for Any (the drills file's `role` key).
+std::string_view toString(DrillRole r);
+std::optional<DrillRole> drillRoleFromString(std::string_view s);
+
 /// Limits checked by validateDrill (docs/drills.md).
 inline constexpr int kDrillMinutesMax = 180;
 inline constexpr int kDrillPlayersMax = 40;
@@ -50,6 +57,7 @@ struct Drill {
     std::vector<std::string> metrics; ///< metric ids the drill works on
     std::vector<Zone> zones;          ///< zones of the club grid it works on
     std::vector<std::string> tags;
+    DrillRole role = DrillRole::Any; ///< its part in a session, when set (else the tags say)
     std::string author;
 
     std::int64_t id = 0;   ///< 0 before it is stored

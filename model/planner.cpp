@@ -368,9 +368,9 @@ std::string noneFits(const std::vector<Candidate>& cands, bool warmUp, int cap,
             ++other;
     }
     if (tagged == 0)
-        return "no " + what + " fits: no drill in the book is tagged " + std::string(tag);
-    std::string s = "no " + what + " fits: of the " + std::to_string(tagged) + " drills tagged " +
-                    std::string(tag);
+        return "no " + what + " fits: no drill in the book has the role " + what + " or the tag " +
+               std::string(tag);
+    std::string s = "no " + what + " fits: of the " + std::to_string(tagged) + " " + what + " drills";
     std::vector<std::string> parts;
     if (aboveCap) parts.push_back(std::to_string(aboveCap) + " above " + capText(cap, day));
     if (tooMany)
@@ -413,7 +413,9 @@ std::string whyLine(const PlanBlock& b, const Candidate& c, const PlanRequest& r
         s += "uses the remaining time (works on no open focus); intensity " +
              std::to_string(b.intensity) + " within " + capText(cap, day);
     } else {
-        s += "tagged " + std::string(b.role == BlockRole::WarmUp ? kWarmUpTag : kCoolDownTag) +
+        s += (c.drill->role != DrillRole::Any
+                  ? std::string("its role is ") + (b.role == BlockRole::WarmUp ? "warm-up" : "cool-down")
+                  : "tagged " + std::string(b.role == BlockRole::WarmUp ? kWarmUpTag : kCoolDownTag)) +
              ", intensity " + std::to_string(b.intensity) + " within " + capText(cap, day);
     }
     return s;
@@ -484,8 +486,9 @@ PlanResult planSession(const PlanRequest& req) {
         Candidate c;
         c.drill = &d;
         c.rank = static_cast<int>(i) + 1;
-        c.warmUp = hasTag(d, kWarmUpTag);
-        c.coolDown = hasTag(d, kCoolDownTag);
+        // The drill's role when its author set one; else its tags, however spelt.
+        c.warmUp = d.role == DrillRole::WarmUp || (d.role == DrillRole::Any && hasTag(d, kWarmUpTag));
+        c.coolDown = d.role == DrillRole::CoolDown || (d.role == DrillRole::Any && hasTag(d, kCoolDownTag));
         c.pinned = contains(req.pinned, d.id);
         if (contains(req.removed, d.id))
             c.outBecause = "was removed by the coach";

@@ -213,6 +213,9 @@ void DrillVerbs::addFieldFlags(CLI::App* sub) {
         ->allow_extra_args(false);
     sub->add_option("--tag", m_tags, "Tag, e.g. warm_up, cool_down, pressing (repeat)")
         ->allow_extra_args(false);
+    sub->add_option("--role", m_role, "Its part in a session: warm_up, main or cool_down (else the "
+                                      "tags warm_up / cool_down say)")
+        ->check(CLI::IsMember({"warm_up", "main", "cool_down"}));
 }
 
 DrillVerbs::DrillVerbs(CLI::App& app) {
@@ -352,6 +355,7 @@ bool DrillVerbs::applyFlags(const CLI::App* sub, Drill& d, bool& given, std::ost
         }
     }
     if (has("--tag")) d.tags = m_tags;
+    if (has("--role")) d.role = *drillRoleFromString(m_role);
     return true;
 }
 
@@ -549,6 +553,7 @@ int DrillVerbs::runShow(DrillBook& book, std::ostream& out, std::ostream& err) {
     const ZoneGrid grid = book.grid();
     line("zones", d.zones.empty() ? "-" : join(zoneTexts(d, &grid), ", "));
     line("tags", d.tags.empty() ? "-" : join(d.tags, ", "));
+    if (d.role != DrillRole::Any) line("role", std::string(toString(d.role)));
     line("author", d.author);
     line("created", d.createdAt);
     line("last edited", d.editedAt + " by " + d.editedBy);

@@ -61,6 +61,7 @@ class DrillVerbs {
     std::vector<std::string> m_metrics;
     std::vector<std::string> m_zones;
     std::vector<std::string> m_tags;
+    std::string m_role;
     std::string m_author;
     std::vector<std::string> m_clear;
 

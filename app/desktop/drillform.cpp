@@ -45,6 +45,13 @@ void DrillForm::set(QString& field, const QString& value) {
     emit changed();
 }
 
+void DrillForm::setRole(int v) {
+    if (m_role == v || v < 0 || v > 3) return;
+    m_role = v;
+    m_dirty = true;
+    emit changed();
+}
+
 void DrillForm::setIntensity(int v) {
     if (m_intensity == v) return;
     m_intensity = v;
@@ -109,6 +116,7 @@ void DrillForm::load(const Drill& d) {
     for (const auto& m : d.metrics) m_metrics << text(m);
     m_zones = d.zones;
     m_tags = joined(d.tags, QStringLiteral(", "));
+    m_role = static_cast<int>(d.role);
     m_author = text(d.author);
     m_dirty = false;
     emit changed();
@@ -135,6 +143,7 @@ Drill DrillForm::toDrill(std::vector<Problem>& problems) const {
     d.intensity = m_intensity;
     d.equipment = parts(m_equipment, QLatin1Char(','));
     d.tags = parts(m_tags, QLatin1Char(','));
+    d.role = static_cast<DrillRole>(m_role);
     for (const QString& m : m_metrics) d.metrics.push_back(m.toStdString());
     d.zones = m_zones;
     d.author = m_author.trimmed().toStdString();

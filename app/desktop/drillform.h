@@ -34,6 +34,8 @@ class DrillForm : public QObject {
     Q_PROPERTY(QVariantList zones READ zones NOTIFY changed)
     Q_PROPERTY(QString zonesText READ zonesText NOTIFY changed)
     Q_PROPERTY(QString tags READ tags WRITE setTags NOTIFY changed)
+    /// Its part in a session: 0 from the tags, 1 warm-up, 2 main, 3 cool-down.
+    Q_PROPERTY(int role READ role WRITE setRole NOTIFY changed)
     Q_PROPERTY(QString author READ author WRITE setAuthor NOTIFY changed)
     /// Who writes this version (recorded with it; the drill's author stays as it is).
     Q_PROPERTY(QString savedBy READ savedBy WRITE setSavedBy NOTIFY changed)
@@ -69,6 +71,8 @@ public:
     QString zonesText() const;
     QString tags() const { return m_tags; }
     void setTags(const QString& v) { set(m_tags, v); }
+    int role() const { return m_role; }
+    void setRole(int v);
     QString author() const { return m_author; }
     void setAuthor(const QString& v) { set(m_author, v); }
     QString savedBy() const { return m_savedBy; }
@@ -113,6 +117,7 @@ private:
     std::vector<model::Zone> m_zones;
     model::ZoneGrid m_grid;
     QString m_tags, m_author, m_savedBy;
+    int m_role = 0;
     bool m_dirty = false;
 };
 

@@ -57,7 +57,7 @@ QString fieldWords(const std::string& key) {
         {"players", "players"},       {"area_m", "area"},
         {"equipment", "equipment"},   {"metrics", "metrics"},
         {"zones", "zones"},           {"tags", "tags"},
-        {"author", "author"}};
+        {"role", "role"},             {"author", "author"}};
     const auto it = words.find(key);
     return it == words.end() ? QString::fromStdString(key) : QString::fromLatin1(it->second);
 }

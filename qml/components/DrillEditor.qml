@@ -210,6 +210,18 @@ ColumnLayout {
             }
         }
 
+        FieldLabel { text: qsTr("Role in a session") }
+        Field {
+            name: "role"
+            ComboBox {
+                objectName: "drillRole"
+                Layout.preferredWidth: 220
+                model: [qsTr("From the tags"), qsTr("Warm-up"), qsTr("Main drill"), qsTr("Cool-down")]
+                currentIndex: root.form.role
+                onActivated: index => root.form.role = index
+            }
+        }
+
         FieldLabel { text: qsTr("Works on") }
         Field {
             name: "metrics"

@@ -187,6 +187,7 @@ void DrillBookViewTest::addEditAndUndo() {
     f->toggleZone(2, 5);
     f->toggleZone(3, 5);
     f->setTags(QStringLiteral("overload, full_back"));
+    f->setRole(2); // a main drill
     f->setAuthor(QStringLiteral("L. Farrant"));
     QVERIFY(f->dirty());
     QVERIFY(view.save());
@@ -211,6 +212,7 @@ void DrillBookViewTest::addEditAndUndo() {
     QCOMPARE(stored->metrics, std::vector<std::string>{"regain_5s"});
     QCOMPARE(stored->zones, (std::vector<model::Zone>{{2, 5}, {3, 5}}));
     QCOMPARE(stored->tags, (std::vector<std::string>{"overload", "full_back"}));
+    QVERIFY(stored->role == model::DrillRole::Main);
     QCOMPARE(stored->editedBy, std::string("L. Farrant")); // no "saved by": the author
     QCOMPARE(stored->versionCount, 1);
     QCOMPARE(reference().list().size(), before + 1);

@@ -719,3 +719,24 @@ TEST_CASE("the demo drill book is valid and covers what the demo needs", "[drill
     CHECK(book.search(query("", "cool_down")).size() >= 2);
     CHECK(book.search(query("", "", "pre_shot_passes_against", Zone{2, 5})).size() >= 3);
 }
+
+TEST_CASE("a drill's role is kept in the drills file, and a wrong one is named", "[drills]") {
+    Drill warm = goodDrill();
+    warm.title = "Rondo";
+    warm.role = DrillRole::WarmUp;
+    Drill plain = goodDrill(); // no role: the tags say
+    const std::string text = writeDrillFile({warm, plain});
+    const json root = json::parse(text);
+    CHECK(root["drills"][0]["role"] == "warm_up");
+    CHECK_FALSE(root["drills"][1].contains("role"));
+    const auto parsed = parseDrillFile(text, "x.json", builtinMetrics(), ZoneGrid());
+    REQUIRE(parsed.errors.empty());
+    CHECK(parsed.drills[0].role == DrillRole::WarmUp);
+    CHECK(parsed.drills[1].role == DrillRole::Any);
+    CHECK(changedFields(plain, warm) == std::vector<std::string>{"role", "title"});
+    json wrong = goodObject("x");
+    wrong["role"] = "warm-up";
+    const auto bad = parseDrillFile(fileOf({wrong}), "drills.json", builtinMetrics(), ZoneGrid());
+    CHECK(described(bad.errors) ==
+          std::vector<std::string>{"drills.json: drills[0].role: expected warm_up, main or cool_down, found \"warm-up\""});
+}

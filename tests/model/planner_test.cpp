@@ -341,7 +341,7 @@ TEST_CASE("bad input: no drill fits the day's intensity cap", "[planner][bad]") 
                 drill(2, "Jog down", 10, 1, {}, {}, {"cool_down"})};
     const auto warm = planSession(r);
     CHECK_FALSE(warm.plan);
-    CHECK(warm.problem == "no warm-up fits: of the 2 drills tagged warm_up, 1 above the cap of 2 "
+    CHECK(warm.problem == "no warm-up fits: of the 2 warm-up drills, 1 above the cap of 2 "
                           "for MD-1 and 1 need more than the 14 players available");
 }
 
@@ -725,4 +725,20 @@ TEST_CASE("a focus back on target has no priority, and the why says so", "[plann
     CHECK(res.plan->blocks.at(1).why ==
           "focus 3, losses · B4·L4: 4.2 a match against at most 7 a match (on target, P(miss) 0.04), "
           "so it has no priority today — this drill works on losses in the focus's zones");
+}
+
+TEST_CASE("a drill's role decides its place in the session over its tags", "[planner]") {
+    PlanRequest r = baseRequest();
+    Drill warm = drill(5, "Passing pattern", 10, 2); // no tag, but the role
+    warm.role = DrillRole::WarmUp;
+    Drill main = drill(6, "Rondo into a game", 20, 3, {}, {}, {"warm_up"}); // tagged, but a main drill
+    main.role = DrillRole::Main;
+    r.drills = {warm, main, drill(2, "Stretch and walk", 10, 1, {}, {}, {"cool_down"})};
+    r.minutes = 40;
+    const PlanResult res = planSession(r);
+    INFO(res.problem);
+    REQUIRE(res.plan);
+    CHECK(idsOf(*res.plan) == std::vector<std::int64_t>{5, 6, 2});
+    CHECK(res.plan->blocks.front().why == "warm-up; its role is warm-up, intensity 2 within the cap of 4 for MD-3");
+    CHECK(res.plan->blocks.at(1).role == BlockRole::Main);
 }
