@@ -117,6 +117,8 @@ class DebriefLayout {
                   const std::vector<DebriefMark>& list, const QRectF& rect) const;
     std::vector<std::pair<QString, QString>> rows(const DebriefMark& m) const;
     Paragraph cardTitle(const DebriefMark& m, std::size_t index) const;
+    /// The zone in the coach's words, wrapped to the card's text column.
+    Paragraph sentenceOf(const DebriefMark& m) const;
 
     const DebriefSheetData& m_d;
     Mm m_mm;
@@ -296,6 +298,11 @@ std::vector<std::pair<QString, QString>> DebriefLayout::rows(const DebriefMark& 
     return out;
 }
 
+Paragraph DebriefLayout::sentenceOf(const DebriefMark& m) const {
+    const double textW = kCardW - 2 * kCardPad - kMapW - 4;
+    return wrapText(q(m.sentence), sheetFont(8.2, false), m_dev, m_mm(textW), 5);
+}
+
 Paragraph DebriefLayout::cardTitle(const DebriefMark& m, std::size_t index) const {
     const double textW = kCardW - 2 * kCardPad - kMapW - 4;
     return wrapText(QStringLiteral("%1. %2").arg(index + 1).arg(q(m.metricName)),
@@ -307,6 +314,7 @@ double DebriefLayout::cardHeight(const DebriefMark& m, std::size_t index) const 
     const double textW = kCardW - 2 * kCardPad - kMapW - 4;
     double text = cardTitle(m, index).height() + mm(0.5);
     text += wrapText(QStringLiteral("x"), m_small, m_dev, mm(textW)).height() + mm(1.2);
+    if (!m.sentence.empty()) text += sentenceOf(m).height() + mm(1.2);
     text += static_cast<double>(rows(m).size()) * QFontMetricsF(m_body, m_dev).lineSpacing();
     const double map = PitchFrame::heightFor(m_d.pitch, mm(kMapW)) + mm(1) +
                        QFontMetricsF(m_small, m_dev).lineSpacing();
@@ -362,6 +370,11 @@ void DebriefLayout::drawCard(QPainter& p, const DebriefMark& m, std::size_t inde
             p, wrapText(q(zoneText(m.band, m.lane, m_d.grid)), m_small, m_dev, textW, 1),
             QPointF(x, y)) +
         mm(1.2);
+    // The coach's words first, then the numbers behind them.
+    if (!m.sentence.empty()) {
+        p.setPen(colours::kInk);
+        y += drawParagraph(p, sentenceOf(m), QPointF(x, y)) + mm(1.2);
+    }
     const QFontMetricsF fm(m_body, m_dev);
     const double labelW = mm(22);
     for (const auto& [label, value] : rows(m)) {
@@ -398,14 +411,16 @@ struct Column {
     const char* title;
     double width; ///< mm
 };
-constexpr std::array<Column, 8> kColumns{{{"Metric", 70},
-                                          {"Zone", 28},
-                                          {"Value", 28},
-                                          {"Target", 22},
-                                          {"Interval", 38},
-                                          {"Sample", 38},
+// The zone's name is the longest cell after the metric's ("right half-space in their half
+// (B4·L2)"): it gets the room the numbers do not need.
+constexpr std::array<Column, 8> kColumns{{{"Metric", 56},
+                                          {"Zone", 56},
+                                          {"Value", 24},
+                                          {"Target", 18},
+                                          {"Interval", 33},
+                                          {"Sample", 33},
                                           {"P(miss)", 18},
-                                          {"Before", 31}}};
+                                          {"Before", 35}}};
 
 } // namespace
 

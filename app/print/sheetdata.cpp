@@ -4,8 +4,10 @@
 #include "fixtures.h"
 #include "focus.h"
 #include "sessions.h"
+#include "wording.h"
 
 #include <algorithm>
+#include <cmath>
 #include <map>
 
 namespace pitchloop::print {
@@ -97,7 +99,7 @@ SheetResult<SessionSheetData> sessionSheetData(ClubRepository& repo, const std::
 namespace {
 
 DebriefMark mark(const DebriefItem& item, const std::map<std::string, MetricSpec>& specs,
-                 bool window, bool hasPrevious) {
+                 const ZoneGrid& grid, bool window, bool hasPrevious) {
     const ZoneStatus& s = item.now;
     DebriefMark m;
     m.metric = s.metric;
@@ -105,6 +107,9 @@ DebriefMark mark(const DebriefItem& item, const std::map<std::string, MetricSpec
         m.metricName = it->second.name.empty() ? s.metric : it->second.name;
         m.question = it->second.question;
         m.kind = it->second.kind();
+        m.sentence = s.state == FlagState::TooLittleData && !std::isnan(s.matchTail)
+                         ? words::unusualMatchSentence(it->second, s, grid)
+                         : words::coachSentence(it->second, s, grid);
     } else {
         m.metricName = s.metric;
     }
@@ -188,15 +193,15 @@ SheetResult<DebriefSheetData> debriefSheetData(ClubRepository& repo, const std::
         d.previousMatchId = debrief.previousMatchId;
         const bool hasPrevious = !debrief.previousMatchId.empty();
         for (const auto& item : debrief.slippedInWindow)
-            d.slippedInWindow.push_back(mark(item, specs, true, hasPrevious));
+            d.slippedInWindow.push_back(mark(item, specs, d.grid, true, hasPrevious));
         for (const auto& item : debrief.slippedInMatch)
-            d.slippedInMatch.push_back(mark(item, specs, false, hasPrevious));
+            d.slippedInMatch.push_back(mark(item, specs, d.grid, false, hasPrevious));
         for (const auto& item : debrief.recovered)
-            d.recovered.push_back(mark(item, specs, false, hasPrevious));
+            d.recovered.push_back(mark(item, specs, d.grid, false, hasPrevious));
         for (const auto& item : debrief.watched)
-            d.watched.push_back(mark(item, specs, false, hasPrevious));
+            d.watched.push_back(mark(item, specs, d.grid, false, hasPrevious));
         for (const auto& item : debrief.unusualInMatch)
-            d.unusualInMatch.push_back(mark(item, specs, false, hasPrevious));
+            d.unusualInMatch.push_back(mark(item, specs, d.grid, false, hasPrevious));
         d.judged = debrief.judged;
         d.tooLittleData = debrief.tooLittleData;
         d.chanceFlags = debrief.seasonChanceFlags;

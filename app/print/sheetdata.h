@@ -94,6 +94,7 @@ struct DebriefMark {
     double gap = 0;    ///< how far on the wrong side of the target (metric units)
     std::optional<model::FlagState> before; ///< state after the previous match
     bool isNew = false;                     ///< off target now, not before (window slips only)
+    std::string sentence; ///< the zone in the coach's words (model/wording.h)
 };
 
 struct DebriefSheetData {

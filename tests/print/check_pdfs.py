@@ -172,6 +172,8 @@ def main():
             slipped.append({"name": name, "zone": zone.split("  (")[0]})
         elif "P(miss)" in line:
             slipped[-1]["p_miss"] = re.search(r"P\(miss\) ([<>] )?[0-9.]+", line).group(0)
+        else:
+            slipped[-1]["sentence"] = line.strip()
     check(len(slipped) >= 1, f"the command line's debrief of {MATCH} lists slipped targets: {slipped}")
     joined = " ".join(text.split())
     for z in slipped:
@@ -179,6 +181,10 @@ def main():
               f"debrief shows {z['name']} in {z['zone']} as the command line names them")
         check(z.get("p_miss", "?").replace("P(miss) ", "") in joined,
               f"debrief gives the same {z.get('p_miss')} as the command line")
+        # Compared without white space and hyphens: the sheet wraps the sentence, and pdftotext
+        # joins a word broken at its hyphen ("left-" / "back" reads "leftback").
+        check(re.sub(r"[\s-]+", "", z.get("sentence", "?")) in re.sub(r"[\s-]+", "", text),
+              f"debrief says it in the same plain words: {z.get('sentence')}")
     check(MATCH in text and "P(miss)" in text, "debrief names the match and gives P(miss)")
 
     # Bad input: no session that day gives exit code 2 and no file.
