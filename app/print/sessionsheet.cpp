@@ -475,8 +475,8 @@ DrawReport drawSessionSheet(const SessionSheetData& d, QPdfWriter& writer) {
 
     const double headerBottom = drawHeader(p, d, mm);
     const double cautionTop = drawCaution(p, d, mm);
-    const double focusTop = cautionTop - mm(3) - drawFocuses(nullptr, d, mm, dev, 0);
-    drawFocuses(&p, d, mm, dev, focusTop);
+    const double focusH = drawFocuses(nullptr, d, mm, dev, 0);
+    const double focusTop = cautionTop - mm(3) - focusH;
 
     // Blocks: the largest type at which every text fits this page in full; when none does, the
     // texts stay whole at a readable size and the blocks run onto a second page. Only a block
@@ -488,10 +488,12 @@ DrawReport drawSessionSheet(const SessionSheetData& d, QPdfWriter& writer) {
     const Paragraph noteLine =
         wrapText(QStringLiteral("x"), Fonts(kScales.back()).meta, dev, mm(kContentW));
     const double noteRoom = noteLine.height() + mm(1.5);
-    const double firstLimit = focusTop - mm(3) - noteRoom;
-    const double avail = firstLimit - blocksTop - heading.height() - mm(1);
+    const double avail = focusTop - mm(3) - noteRoom - blocksTop - heading.height() - mm(1);
+    // On a sheet of several pages the blocks fill each page down to the caution (on every
+    // page), and the focus section follows the last block.
+    const double firstLimit = cautionTop - mm(3) - noteRoom;
     const double nextTop = mm(kTop) + mm(14); // under the continuation header
-    const double nextLimit = mm(kBottom) - noteRoom;
+    const double nextLimit = firstLimit;
     const std::size_t n = d.blocks.size();
     std::vector<BlockLayout> layouts(n);
     auto layoutAll = [&](const Fonts& f) {
@@ -519,9 +521,19 @@ DrawReport drawSessionSheet(const SessionSheetData& d, QPdfWriter& writer) {
                 layouts[i] = layoutBlock(d.blocks[i], d, fonts, dev, mm, kLimits[lv]);
     }
     report.fontScale = scale;
-    // Where each block goes: page 1 under the heading, then the next pages from the top.
+    // Where each block goes: page 1 under the heading, then the next pages from the top; on one
+    // page the focus section sits above the caution, on several after the last block.
     std::vector<std::pair<int, double>> place(n);
-    {
+    int focusPage = 1;
+    double focusAt = focusTop;
+    if (onePage) {
+        double y = blocksTop + heading.height() + mm(1);
+        for (std::size_t i = 0; i < n; ++i) {
+            place[i] = {1, y};
+            y += layouts[i].height;
+        }
+        report.pages = 1;
+    } else {
         int page = 1;
         double y = blocksTop + heading.height() + mm(1);
         for (std::size_t i = 0; i < n; ++i) {
@@ -532,8 +544,15 @@ DrawReport drawSessionSheet(const SessionSheetData& d, QPdfWriter& writer) {
             place[i] = {page, y};
             y += layouts[i].height;
         }
-        report.pages = n > 0 ? place.back().first : 1;
+        focusAt = y + noteRoom + mm(3);
+        if (focusAt + focusH > cautionTop - mm(3)) {
+            ++page;
+            focusAt = nextTop;
+        }
+        focusPage = page;
+        report.pages = page;
     }
+    if (focusPage == 1) drawFocuses(&p, d, mm, dev, focusAt);
 
     p.setPen(colours::kInk);
     drawParagraph(p, heading, QPointF(mm(kMargin), blocksTop));
@@ -552,6 +571,7 @@ DrawReport drawSessionSheet(const SessionSheetData& d, QPdfWriter& writer) {
             writer.newPage();
             ++page;
             drawContinuationHeader(p, d, mm, page, report.pages);
+            drawCaution(p, d, mm);
         }
         y = place[i].second;
         const BlockLayout& l = layouts[i];
@@ -569,6 +589,15 @@ DrawReport drawSessionSheet(const SessionSheetData& d, QPdfWriter& writer) {
         drawParagraph(p, wrapText(QStringLiteral("A drill longer than a page is shortened (…); the drill book has it in full."),
                                   fonts.meta, dev, mm(kContentW), 1),
                       QPointF(mm(kMargin), y + mm(0.8)));
+    }
+    if (focusPage > 1) {
+        while (page < focusPage) {
+            writer.newPage();
+            ++page;
+            drawContinuationHeader(p, d, mm, page, report.pages);
+            drawCaution(p, d, mm);
+        }
+        drawFocuses(&p, d, mm, dev, focusAt);
     }
     p.end();
     return report;
