@@ -536,9 +536,8 @@ MappedTable mapTable(const Table& table, const MappingProfile& p, const MatchDet
             if (!m.contains(k)) m[k] = v;
     for (const char* needed : {"id", "date", "venue", "us", "opponent"})
         if (!m.contains(needed))
-            error("match", needed, std::string("not given: set it in the profile's match details, the "
-                                               "file name pattern or the command line (--") +
-                                       (std::string(needed) == "id" ? "match-id" : needed) + ")" +
+            error("match", needed, std::string("not given: set it in the profile's match details or "
+                                               "the file name pattern, or give it with the files") +
                                        patternNote);
     if (!m.contains("pitch")) m["pitch"] = {{"length_m", 105}, {"width_m", 68}};
     const double length = m["pitch"].value("length_m", 105.0), width = m["pitch"].value("width_m", 68.0);

@@ -31,7 +31,7 @@ IngestReport ingestRead(ClubRepository& repo, ReadResult read, std::string_view 
         if (!stored->ingestedAt.empty()) from += " on " + stored->ingestedAt.substr(0, 10);
         report.errors.push_back({fileName, "match", "id",
                                  "match '" + match.info.id + "' is already in the club file" +
-                                     from + " with different content; use --replace to replace it"});
+                                     from + " with different content, so it was not replaced"});
         report.status = IngestStatus::Refused;
         return report;
     }

@@ -369,8 +369,7 @@ void readEvent(const json& e, std::size_t index, const MatchHeader& h, const Rea
                 known += wordOf(*eventTypeFromString(name), version);
             }
             c.error(place, "type",
-                    "unknown event type '" + *typeName + "' (known: " + known +
-                        "; map foreign names with --map-type NAME=TYPE)");
+                    "unknown event type '" + *typeName + "' (known: " + known + ")");
             good = false;
         } else {
             ev.type = *type;

@@ -1,7 +1,7 @@
 #!/usr/bin/env python3
 """The app never sends a coach to the command line: no text the app shows (qsTr/tr strings in
-qml/, app/desktop/ and app/print/, which the app prints and whose messages it shows) may
-contain a Pitchloop command or option. Comments are not shown and are skipped; main.cpp
+qml/, app/desktop/, app/print/ and model/, which the app prints and whose messages it shows)
+may contain a Pitchloop command or option. Comments are not shown and are skipped; main.cpp
 parses the app's own command line (--db, --self-test) and is left out."""
 import pathlib
 import re
@@ -25,8 +25,10 @@ def strip_comments(text, cpp):
 def scan(root):
     files = sorted((root / "qml").rglob("*.qml"))
     files += [p for p in sorted((root / "app" / "desktop").glob("*.cpp")) if p.name != "main.cpp"]
-    # The printed sheets are made from the app too: their messages reach the same people.
+    # The printed sheets are made from the app too, and the model's messages (bad input, refused
+    # files) are shown by the app as they are: both reach the same people.
     files += sorted((root / "app" / "print").glob("*.cpp"))
+    files += sorted((root / "model").glob("*.cpp"))
     problems = []
     for path in files:
         cpp = path.suffix == ".cpp"

@@ -20,6 +20,7 @@
 #include <cstdlib>
 #include <filesystem>
 #include <iostream>
+#include <set>
 #include <unistd.h>
 
 namespace pitchloop::cli {
@@ -52,6 +53,25 @@ struct DetailOptions {
                         "With --profile: the periods' lengths in seconds, e.g. 2831,2904");
     }
 };
+
+/// The command line's own advice for problems whose words name no option (the model's messages
+/// are shown by the app too, which gives its own): how to give match details, map a foreign
+/// event type.
+void printHints(const Problems& errors, std::ostream& err) {
+    std::set<std::string> details;
+    bool foreignType = false;
+    for (const Problem& e : errors) {
+        if (e.place == "match" && e.message.rfind("not given", 0) == 0)
+            details.insert(e.field == "id" ? "--match-id" : "--" + e.field);
+        foreignType |= e.field == "type" && e.message.rfind("unknown event type", 0) == 0;
+    }
+    if (!details.empty()) {
+        std::string flags;
+        for (const auto& f : details) flags += (flags.empty() ? "" : ", ") + f;
+        err << "hint: " << flags << " give" << (details.size() == 1 ? "s" : "") << " it on the command line\n";
+    }
+    if (foreignType) err << "hint: --map-type NAME=TYPE reads a foreign event type as one of ours\n";
+}
 
 /// A profile from its file, or the problems on stderr.
 std::optional<MappingProfile> loadProfile(const std::string& path, std::ostream& err) {
@@ -113,6 +133,11 @@ int cmdIngest(const Globals& g, const std::vector<std::string>& files, const Ing
                 for (const auto& e : r.errors) err << "error: " << e.describe() << "\n";
                 err << r.file << (r.matchId.empty() ? "" : " (match " + r.matchId + ")")
                     << ": not ingested; the club file is unchanged by it\n";
+                // The command line's own advice (the model's messages name no option: the app
+                // shows them too, with its own).
+                if (r.status == IngestStatus::Refused)
+                    err << "hint: --replace replaces the stored match with this file\n";
+                printHints(r.errors, err);
                 break;
             }
             if (!progress && r.ok())
@@ -174,6 +199,7 @@ int cmdProfileCheck(const std::string& profilePath, const std::string& file,
     }
     for (const auto& w : warnings) err << "warning: " << w.describe() << "\n";
     for (const auto& e : errors) err << "error: " << e.describe() << "\n";
+    printHints(errors, err);
     if (!errors.empty()) {
         err << file << ": the profile does not read it cleanly (" << errors.size() << " problem"
             << (errors.size() == 1 ? "" : "s") << "); nothing was stored\n";

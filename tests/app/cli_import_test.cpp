@@ -121,6 +121,11 @@ TEST_CASE("zone labels load with the shipped zone-tags layout; other grids say w
                     "2026-08-22", "--venue", "away", "--opponent", "Duneford City",
                     "--period-lengths", "2700,2760"});
     };
+    // Without the match details: the model names what is missing, the command line how to give it.
+    const auto bare = cli({"profile", "check", profile, file});
+    CHECK(bare.code == 2);
+    CHECK(contains(bare.err, "match.id: not given"));
+    CHECK(contains(bare.err, "hint: --date, --match-id, --opponent, --venue give it on the command line"));
     const auto check = cli({"profile", "check", profile, file, "--match-id", "KB-Z-02", "--date",
                             "2026-08-22", "--venue", "away", "--opponent", "Duneford City"});
     CHECK(check.code == 0);

@@ -421,3 +421,19 @@ TEST_CASE("the installed binary returns the exit codes", "[cli]") {
     const auto csv = lines(pitchloop::model::readFileBytes(out));
     CHECK(csv == withHeader(expectedMinimalRows()));
 }
+
+TEST_CASE("ingest gives the command line's own hint for a foreign event type", "[cli]") {
+    Workspace w;
+    std::string text = pitchloop::model::readFileBytes(minimalPath());
+    const auto at = text.find("\"type\": \"carry\"");
+    REQUIRE(at != std::string::npos);
+    text.replace(at, 15, "\"type\": \"dribble\"");
+    const std::string file = w.write("foreign.json", text);
+    const auto r = cli({"--db", w.db, "ingest", file});
+    CHECK(r.code == 2);
+    CHECK(contains(r.err, "unknown event type 'dribble'"));
+    CHECK(contains(r.err, "hint: --map-type NAME=TYPE reads a foreign event type as one of ours"));
+    const auto mapped = cli({"--db", w.db, "ingest", "--map-type", "dribble=carry", file});
+    INFO(mapped.err);
+    CHECK(mapped.code == 0);
+}

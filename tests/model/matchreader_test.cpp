@@ -416,7 +416,9 @@ TEST_CASE("a foreign type name can be mapped onto one of ours") {
         CHECK(r.errors[0].place == "events[0]");
         CHECK(r.errors[0].field == "type");
         CHECK_THAT(r.errors[0].message, Contains("dribble"));
-        CHECK_THAT(r.errors[0].message, Contains("--map-type"));
+        // The model's words name no option (the app shows them too); the command line adds its
+        // own hint (tests/app/cli_test.cpp).
+        CHECK_THAT(r.errors[0].message, !Contains("--"));
     }
     SECTION("mapped, like --map-type dribble=carry") {
         ReadOptions options;
