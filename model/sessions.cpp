@@ -391,17 +391,7 @@ int SessionStore::minutesOnDrills(const std::string& squad, const std::string& f
 
 int SessionStore::minutesOnFocus(std::int64_t focusId, const std::string& from,
                                  const std::string& to) const {
-    SQLite::Database& db = m_repo.database();
-    return guarded("cannot read sessions", [&] {
-        SQLite::Statement q(db, "SELECT coalesce(sum(f.minutes), 0) FROM session_focus f JOIN "
-                                "session s ON s.id = f.session_id WHERE f.focus_id = ? AND "
-                                "s.date >= ? AND s.date <= ?");
-        q.bind(1, focusId);
-        q.bind(2, from);
-        q.bind(3, to);
-        q.executeStep();
-        return q.getColumn(0).getInt();
-    });
+    return trainingOnFocus(focusId, from, to).plannedMinutes;
 }
 
 std::string_view toString(SessionOutcome o) {
@@ -435,6 +425,7 @@ FocusTraining SessionStore::trainingOnFocus(std::int64_t focusId, const std::str
         while (q.executeStep()) {
             const std::string outcome = q.getColumn(0).getString();
             const int planned = q.getColumn(1).getInt();
+            t.plannedMinutes += planned;
             if (outcome == "held" || outcome == "changed") {
                 const int held = q.getColumn(2).isNull() ? planned : q.getColumn(2).getInt();
                 t.heldMinutes += held;

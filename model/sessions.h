@@ -106,6 +106,7 @@ struct FocusTraining {
     int unrecordedSessions = 0; ///< saved sessions for it not yet marked held or cancelled
     int unrecordedMinutes = 0;  ///< the minutes those sessions planned for it
     int cancelledSessions = 0;
+    int plannedMinutes = 0;     ///< what every saved session planned for it, held or not
 };
 
 /// The review's and the focus pages' sentence about it: "94 minutes in 5 sessions held from

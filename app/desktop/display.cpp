@@ -80,8 +80,7 @@ QString singleMatchText(double matchTail) {
     if (matchTail > model::kUnusualMatchTail)
         return QStringLiteral("a usual match for a team on target");
     if (matchTail <= 0) return QStringLiteral("unusual match: never if on target");
-    return QStringLiteral("unusual match: 1 in %1 if on target")
-        .arg(QLocale().toString(std::round(1 / matchTail), 'f', 0));
+    return QStringLiteral("unusual match: 1 in %1 if on target").arg(qs(words::grouped(1 / matchTail)));
 }
 
 QString certaintyText(double pMiss) {
@@ -150,6 +149,19 @@ QString kindText(MetricKind kind) {
 QString betterText(Better better) {
     return better == Better::Higher ? QStringLiteral("Higher is better")
                                     : QStringLiteral("Lower is better");
+}
+
+QString localPath(const QUrl& file) { return file.isLocalFile() ? file.toLocalFile() : file.toString(); }
+
+QString plainMessage(const std::string& text) {
+    QStringList lines;
+    for (QString line : qs(text).split(QLatin1Char('\n'), Qt::SkipEmptyParts)) {
+        for (const QString& prefix : {QStringLiteral("error: "), QStringLiteral("warning: ")})
+            if (line.startsWith(prefix)) line = line.mid(prefix.size());
+        if (!line.isEmpty()) line[0] = line[0].toUpper();
+        lines << line;
+    }
+    return lines.join(QLatin1Char('\n'));
 }
 
 double ScaleDomain::position(double value) const {

@@ -8,6 +8,7 @@
 
 #include <QString>
 #include <QStringList>
+#include <QUrl>
 
 #include <optional>
 #include <vector>
@@ -60,6 +61,12 @@ QString scoreText(const model::MatchSummary& m);
 QString outcomeText(const model::MatchSummary& m);
 /// "Won", "Drawn", "Lost", empty without a score.
 QString outcomeWord(const model::MatchSummary& m);
+/// The local path of a file chosen in a dialog (a file: URL), or the text as given.
+QString localPath(const QUrl& file);
+/// A message of the print or model library for a screen: without "error: " / "warning: "
+/// prefixes, each line starting upper-case.
+QString plainMessage(const std::string& text);
+
 /// "rate", "count a match", "per exposure event" in a sentence: "share of items" etc.
 QString kindText(model::MetricKind kind);
 /// "Higher is better" / "Lower is better".

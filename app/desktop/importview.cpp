@@ -356,7 +356,7 @@ bool ImportView::saveLayout(const QUrl& profileFile) {
         setSummary(tr("No club file is open, so there is nowhere to save the layout."));
         return false;
     }
-    const QString path = profileFile.isLocalFile() ? profileFile.toLocalFile() : profileFile.toString();
+    const QString path = localPath(profileFile);
     const QString shortName = QFileInfo(path).fileName();
     std::string text;
     try {

@@ -258,7 +258,7 @@ QString MatchDebrief::suggestedFileName(const QString& kind) const {
 }
 
 bool MatchDebrief::writeExport(const QUrl& file, const std::string& bytes, const QString& what) {
-    const QString path = file.isLocalFile() ? file.toLocalFile() : file.toString();
+    const QString path = localPath(file);
     if (path.isEmpty()) {
         exported(tr("Choose a file to write %1 to.").arg(what), true);
         return false;
@@ -275,7 +275,7 @@ bool MatchDebrief::writeExport(const QUrl& file, const std::string& bytes, const
 
 bool MatchDebrief::exportPdf(const QUrl& file) {
     ClubSession* s = session();
-    const QString path = file.isLocalFile() ? file.toLocalFile() : file.toString();
+    const QString path = localPath(file);
     if (!s || !s->isOpen() || m_matchId.isEmpty()) {
         exported(tr("Open a club file with a match first."), true);
         return false;
@@ -292,8 +292,7 @@ bool MatchDebrief::exportPdf(const QUrl& file) {
     } catch (const std::exception& e) {
         err << e.what();
     }
-    QString message = QString::fromStdString(err.str()).trimmed();
-    if (message.startsWith(QLatin1String("error: "))) message = message.mid(7);
+    const QString message = plainMessage(err.str());
     if (code != 0) {
         exported(message.isEmpty() ? tr("The debrief was not written to %1.").arg(path) : message, true);
         return false;

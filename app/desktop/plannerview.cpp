@@ -82,22 +82,6 @@ QString shortCapText(int cap) {
     return QStringLiteral("%1 · %2").arg(cap).arg(qs(std::string(intensityName(cap))));
 }
 
-/// A message from the print library without its "error: " prefixes, one sentence a line.
-QString plainMessage(const std::string& text) {
-    QStringList lines;
-    for (QString line : qs(text).split(QLatin1Char('\n'), Qt::SkipEmptyParts)) {
-        for (const QString& prefix : {QStringLiteral("error: "), QStringLiteral("warning: ")})
-            if (line.startsWith(prefix)) line = line.mid(prefix.size());
-        if (!line.isEmpty()) line[0] = line[0].toUpper();
-        lines << line;
-    }
-    return lines.join(QLatin1Char('\n'));
-}
-
-QString localPath(const QUrl& file) {
-    return file.isLocalFile() ? file.toLocalFile() : file.toString();
-}
-
 /// A whole number typed in a form; nullopt when it is not one.
 std::optional<int> wholeNumber(const QString& text) {
     bool ok = false;

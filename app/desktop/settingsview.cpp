@@ -308,7 +308,7 @@ bool SettingsView::write(const Stored& values) {
 
 bool SettingsView::openClubFile(const QUrl& file) {
     ClubSession* s = session();
-    const QString path = file.isLocalFile() ? file.toLocalFile() : file.toString();
+    const QString path = localPath(file);
     if (!s) return false;
     if (!QFileInfo(path).isFile()) {
         setResult(tr("There is no club file at %1.").arg(path), {});

@@ -50,6 +50,20 @@ std::int64_t addDrill(DrillBook& book, const Drill& d) {
     return c.id;
 }
 
+/// The press_rate focus on zone 4,3 both session tests train, opened after the first match.
+std::int64_t openPressFocus(ClubRepository& repo) {
+    Focus f;
+    f.squad = kSquad;
+    f.season = "2026-27";
+    f.metric = "press_rate";
+    f.zones = {{4, 3}};
+    f.openedAfterMatch = "KB-2026-01";
+    f.startDate = "2026-08-09";
+    f.evidence = "{}";
+    f.openedBy = "R. Tamsin";
+    return FocusStore(repo).open(f, kNow);
+}
+
 } // namespace
 
 TEST_CASE("a version-4 club file gains the fixture and session tables",
@@ -192,17 +206,7 @@ TEST_CASE("a planned session is saved with its blocks and minutes per focus, and
     const auto build =
         addDrill(book, bookDrill("Build-up 7v5", 15, 3, {"pass_completion"}, {{2, 3}}, {}));
 
-    FocusStore focuses(repo);
-    Focus f;
-    f.squad = kSquad;
-    f.season = "2026-27";
-    f.metric = "press_rate";
-    f.zones = {{4, 3}};
-    f.openedAfterMatch = "KB-2026-01";
-    f.startDate = "2026-08-09";
-    f.evidence = "{}";
-    f.openedBy = "R. Tamsin";
-    const auto focusId = focuses.open(f, kNow);
+    const auto focusId = openPressFocus(repo);
 
     FixtureStore fixtures(repo);
     REQUIRE(fixtures
@@ -305,16 +309,7 @@ TEST_CASE("training as held: a session counts for its focus once marked held, wi
     const auto press = addDrill(book, bookDrill("Press the first pass", 20, 4, {"press_rate"}, {{4, 3}}, {}));
     const auto other = addDrill(book, bookDrill("Crossing", 15, 3, {"pass_completion"}, {{5, 1}}, {}));
     const auto cool = addDrill(book, bookDrill("Walk and stretch", 10, 1, {}, {}, {"cool_down"}));
-    Focus f;
-    f.squad = kSquad;
-    f.season = "2026-27";
-    f.metric = "press_rate";
-    f.zones = {{4, 3}};
-    f.openedAfterMatch = "KB-2026-01";
-    f.startDate = "2026-08-09";
-    f.evidence = "{}";
-    f.openedBy = "R. Tamsin";
-    const auto focusId = FocusStore(repo).open(f, kNow);
+    const auto focusId = openPressFocus(repo);
     Plan plan;
     plan.date = "2026-08-11";
     plan.sessionMinutes = 55;
