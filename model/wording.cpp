@@ -2,6 +2,7 @@
 
 #include "zonenames.h"
 
+#include <algorithm>
 #include <cmath>
 #include <cstdio>
 
@@ -65,6 +66,27 @@ std::string windowTitle(const Window& window) {
 std::string capitalised(std::string text) {
     if (!text.empty() && text[0] >= 'a' && text[0] <= 'z') text[0] = static_cast<char>(text[0] - 'a' + 'A');
     return text;
+}
+
+std::string itemsWord(const MetricSpec& metric) {
+    if (metric.items.losses) return "losses";
+    const auto& types = metric.items.select.types;
+    if (types.size() == 1) {
+        switch (types.front()) {
+        case EventType::Pass: return "passes";
+        case EventType::Shot: return "shots";
+        case EventType::Carry: return "carries";
+        case EventType::Tackle: return "tackles";
+        case EventType::Interception: return "interceptions";
+        case EventType::Recovery: return "recoveries";
+        default: break;
+        }
+    }
+    const bool defensive = !types.empty() && std::all_of(types.begin(), types.end(), [](EventType t) {
+        return t == EventType::Tackle || t == EventType::Interception || t == EventType::Foul ||
+               t == EventType::Block;
+    });
+    return defensive ? "defensive actions" : "events";
 }
 
 std::string rate(double share) {

@@ -30,6 +30,9 @@ std::string windowName(const Window& window);
 std::string windowTitle(const Window& window);
 /// The first letter upper-case (ASCII), the rest unchanged: headings and table cells.
 std::string capitalised(std::string text);
+/// What a metric counts, in the plural: "losses", "passes", "shots", "defensive actions" (the
+/// tackles, interceptions, fouls and blocks of docs/metrics.md), otherwise "events".
+std::string itemsWord(const MetricSpec& metric);
 
 // --- Numbers (one format everywhere; '.' as the decimal mark) -------------------------------
 

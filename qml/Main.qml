@@ -225,6 +225,7 @@ ApplicationWindow {
                 onShowRequested: root.showPage("import")
             }
             TargetsPage {
+                plainWords: root.plainWords
                 session: root.session
             }
             DebriefPage {

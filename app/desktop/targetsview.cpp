@@ -9,6 +9,7 @@
 #include "status.h"
 #include "targetedits.h"
 #include "targethistorymodel.h"
+#include "wording.h"
 #include "targetzonemodel.h"
 #include "zonemapmodel.h"
 #include "zonestate.h"
@@ -101,7 +102,7 @@ QString TargetsView::marginUnitText() const {
 
 QString TargetsView::sampleUnitText() const {
     if (!m_kind) return {};
-    return *m_kind == MetricKind::Count ? tr("matches") : *m_kind == MetricKind::Rate ? tr("items")
+    return *m_kind == MetricKind::Count ? tr("matches") : *m_kind == MetricKind::Rate ? m_itemsWord
                                                                                       : tr("exposure events");
 }
 
@@ -308,6 +309,7 @@ void TargetsView::refresh() {
     }
     const MetricKind kind = metric->kind();
     m_kind = kind;
+    m_itemsWord = QString::fromStdString(model::words::itemsWord(*metric));
     m_defaultDirection = defaultDirection(*metric);
     m_metricName = QString::fromStdString(metric->name.empty() ? metric->id : metric->name);
     m_betterText = desktop::betterText(metric->better);

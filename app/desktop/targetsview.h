@@ -209,6 +209,7 @@ private:
     QStringList m_seasonOptions;
     int m_metricRow = -1;
     std::optional<model::MetricKind> m_kind;
+    QString m_itemsWord; ///< what a rate metric counts: "losses", "passes" (model/wording)
     model::Direction m_defaultDirection = model::Direction::AtLeast;
     QString m_metricName;
     QString m_betterText;

@@ -11,6 +11,8 @@ ColumnLayout {
     id: root
 
     required property TargetsView view
+    /// The coach's words for the form's two rule fields, or the analyst's (the other as a tip).
+    property bool plainWords: true
 
     spacing: Theme.gap
 
@@ -66,7 +68,10 @@ ColumnLayout {
             }
         }
 
-        FieldLabel { text: qsTr("Watch margin") }
+        FieldLabel {
+            objectName: "marginLabel"
+            text: root.plainWords ? qsTr("Close to the line within") : qsTr("Watch margin")
+        }
         TextField {
             objectName: "marginField"
             Layout.fillWidth: true
@@ -74,11 +79,16 @@ ColumnLayout {
             onTextEdited: root.view.marginText = text
             ToolTip.visible: hovered
             ToolTip.delay: 500
-            ToolTip.text: qsTr("How far on the good side of the target a zone is still watched")
+            ToolTip.text: root.plainWords
+                          ? qsTr("A zone this close to the target on the good side shows as “close to the line” (the watch margin)")
+                          : qsTr("How far on the good side of the target a zone is still watched")
         }
         Unit { text: root.view.marginUnitText }
 
-        FieldLabel { text: qsTr("Min. sample") }
+        FieldLabel {
+            objectName: "minSampleLabel"
+            text: root.plainWords ? qsTr("Judge from") : qsTr("Min. sample")
+        }
         TextField {
             objectName: "minSampleField"
             Layout.fillWidth: true
@@ -86,7 +96,9 @@ ColumnLayout {
             onTextEdited: root.view.minSampleText = text
             ToolTip.visible: hovered
             ToolTip.delay: 500
-            ToolTip.text: qsTr("Below this many in a window a zone shows “too little data” instead of a judgement")
+            ToolTip.text: root.plainWords
+                          ? qsTr("With fewer %1 than this in a window, the zone says “too little data” instead of judging (the minimum sample)").arg(root.view.sampleUnitText)
+                          : qsTr("Below this many in a window a zone shows “too little data” instead of a judgement")
         }
         Unit { text: root.view.sampleUnitText }
 

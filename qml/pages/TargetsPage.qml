@@ -11,6 +11,7 @@ Page {
     id: root
 
     required property ClubSession session
+    property bool plainWords: true
     readonly property alias editor: editor
 
     background: Rectangle { color: Theme.window }
@@ -179,6 +180,7 @@ Page {
                     }
                     TargetEditor {
                         Layout.fillWidth: true
+                        plainWords: root.plainWords
                         view: editor
                     }
                 }

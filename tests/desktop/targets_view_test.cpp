@@ -259,6 +259,8 @@ void TargetsViewTest::formFillsFromTheZonesTarget() {
     QCOMPARE(m_view->effectiveFrom(), QStringLiteral("2026-11-15"));
     QVERIFY(m_view->isRate());
     QCOMPARE(m_view->unitText(), QStringLiteral("%"));
+    // The minimum sample counts what the metric counts (model/wording itemsWord), not "items".
+    QCOMPARE(m_view->sampleUnitText(), QStringLiteral("losses"));
 }
 
 void TargetsViewTest::saveWritesOneVersionPerZone() {

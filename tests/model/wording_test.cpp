@@ -177,3 +177,13 @@ TEST_CASE("one match of a count target: how rare, and no claim about luck", "[wo
           "for at most 2. One match cannot judge that target, but a team on its target has a match "
           "like this only about 1 in 6,889.");
 }
+
+TEST_CASE("a metric's items have a plural noun", "[wording]") {
+    // The built-in metrics of model/metrics/builtin.json, read by hand: what each counts.
+    CHECK(words::itemsWord(builtin("regain_5s")) == "losses");
+    CHECK(words::itemsWord(builtin("pass_completion")) == "passes");
+    CHECK(words::itemsWord(builtin("press_rate")) == "defensive actions");
+    MetricSpec anything;
+    anything.items.select.types = {EventType::Pass, EventType::Shot};
+    CHECK(words::itemsWord(anything) == "events");
+}
