@@ -44,19 +44,24 @@ namespace {
 constexpr double kTimeToleranceS = 1e-6;
 } // namespace
 
-WindowOutcome findWithin(const Match& m, std::size_t anchor, const WindowQuery& query,
-                         const std::function<bool(const Event&)>& matches) {
+WindowHit findHitWithin(const Match& m, std::size_t anchor, const WindowQuery& query,
+                        const std::function<bool(const Event&)>& matches) {
     const auto& events = m.events;
     const Event& a = events[anchor];
     for (std::size_t i = query.includeAnchor ? anchor : anchor + 1; i < events.size(); ++i) {
         const Event& e = events[i];
         if (e.period != a.period || e.t - a.t > query.withinS + kTimeToleranceS) break;
         if (!query.sameTime && e.t <= a.t) continue;
-        if (matches(e)) return WindowOutcome::Found;
+        if (matches(e)) return {WindowOutcome::Found, i};
     }
     const double left = m.info.periodLength(a.period) - a.t;
-    return left < query.withinS - kTimeToleranceS ? WindowOutcome::Censored
-                                                  : WindowOutcome::NotFound;
+    return {left < query.withinS - kTimeToleranceS ? WindowOutcome::Censored : WindowOutcome::NotFound,
+            0};
+}
+
+WindowOutcome findWithin(const Match& m, std::size_t anchor, const WindowQuery& query,
+                         const std::function<bool(const Event&)>& matches) {
+    return findHitWithin(m, anchor, query, matches).outcome;
 }
 
 WindowOutcome regainWithin(const Match& m, const Loss& loss, double withinS) {

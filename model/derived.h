@@ -44,6 +44,14 @@ struct WindowQuery {
 WindowOutcome findWithin(const Match& m, std::size_t anchor, const WindowQuery& query,
                          const std::function<bool(const Event&)>& matches);
 
+/// The outcome of findWithin and, when Found, the index of the event that answered.
+struct WindowHit {
+    WindowOutcome outcome = WindowOutcome::NotFound;
+    std::size_t index = 0; ///< in Match::events; meaningful only when Found
+};
+WindowHit findHitWithin(const Match& m, std::size_t anchor, const WindowQuery& query,
+                        const std::function<bool(const Event&)>& matches);
+
 /// Whether `side` won the ball back within `withinS` of `loss` (BRIEF §3 "Regain"): the first
 /// later event that is the loser's control event, a foul by the taker, or a ball out by it.
 WindowOutcome regainWithin(const Match& m, const Loss& loss, double withinS);

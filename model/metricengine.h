@@ -46,4 +46,25 @@ std::string zoneOnlyNote(const MatchInfo& info, const ZoneGrid& grid);
 /// or the exposure events binned at their own place.
 MatchTally computeTally(const MatchFacts& facts, const MetricSpec& spec, const ZoneGrid& grid);
 
+/// One thing a metric counted in a match: an item (a loss, a pass, a defensive action ...) or,
+/// for a per-exposure metric, an exposure event. A match's items added up per zone give
+/// computeTally exactly: num = the items with inNum, den = those with inDen (a per-match count's
+/// den is the match itself, 1 a zone, and no item carries it).
+struct TallyItem {
+    int zone = 0;
+    bool exposure = false;                ///< an exposure event, not an item
+    std::size_t event = 0;                ///< the item's event; a loss: the event that took the ball
+    std::optional<std::size_t> lastEvent; ///< a loss: the losing side's last event before it
+    Point place;                          ///< where it is binned
+    WindowHit hit{WindowOutcome::Found, 0}; ///< the success test; Found for metrics without one
+    bool inNum = false;
+    bool inDen = false;
+};
+
+/// The items behind computeTally, items in event order and then the exposure events. Items
+/// that count in neither part are left out (a pass that no shot followed, for "passes before
+/// shots"), except the censored items of a rate, kept with inDen false so that a list can say
+/// why they do not count. Empty for a zone-only match on a grid it cannot be binned on.
+std::vector<TallyItem> tallyItems(const MatchFacts& facts, const MetricSpec& spec, const ZoneGrid& grid);
+
 } // namespace pitchloop::model

@@ -8,12 +8,15 @@
 #include "derived.h"
 #include "metricengine.h"
 #include "metricspec.h"
+#include "matchreader.h"
+#include "moments.h"
 #include "testutil.h"
 #include "zones.h"
 
 #include <catch2/catch.hpp>
 
 #include <algorithm>
+#include <filesystem>
 #include <cmath>
 #include <optional>
 #include <random>
@@ -607,4 +610,80 @@ TEST_CASE("findLosses agrees with a direct reading of the definition on random e
         CHECK(losses[k].period == events[take].period);
         CHECK(losses[k].place == lastBallPlace(events[last]));
     }
+}
+
+// ---------------------------------------------------------------------------------------------
+// The moments behind a zone (model/moments.h) add up to the tallies
+
+namespace {
+
+/// A match's moments added up per zone the way their counts say (docs/moments.md): num the
+/// successes; den the successes and the rest of a share's items, or the exposure events, or the
+/// match itself for a per-match count.
+MatchTally tallyFromMoments(const Match& m, const MetricSpec& spec, const ZoneGrid& grid) {
+    MatchTally t(static_cast<std::size_t>(grid.zoneCount()));
+    for (const Moment& mo : matchMoments(m, spec, grid, std::nullopt)) {
+        ZoneTally& z = t[static_cast<std::size_t>(grid.indexOf(Zone{mo.band, mo.lane}))];
+        if (mo.count == MomentCount::Success) ++z.num;
+        const bool share = spec.per == MetricSpec::Per::Items;
+        if (mo.count == MomentCount::Exposure || (share && mo.count != MomentCount::Censored)) ++z.den;
+    }
+    if (spec.per == MetricSpec::Per::Match)
+        for (auto& z : t) z.den = 1;
+    return t;
+}
+
+} // namespace
+
+TEST_CASE("moments add up to the tallies of every metric, zone and grid") {
+    std::vector<MetricSpec> specs = builtinMetrics();
+    // The user metrics above whose counting differs from the built-in ones: censoring off, an
+    // exposure binned at a carry's end, their losses.
+    specs.push_back(specFrom(R"({"id": "regain_all", "better": "higher", "items": {"losses_of": "us"},
+        "success": {"followed_by": {"side": "same", "gives_control": true}, "within_s": 5,
+        "censor": false}, "per": "items"})"));
+    specs.push_back(specFrom(R"({"id": "tackles_per_carry", "better": "higher",
+        "items": {"side": "us", "type": "tackle"}, "per": {"side": "us", "type": "carry", "at": "end"}})"));
+    specs.push_back(specFrom(R"({"id": "their_losses", "better": "higher",
+        "items": {"losses_of": "opp"}, "per": "match"})"));
+    const ZoneGrid grid = GENERATE(ZoneGrid(), ZoneGrid::markings(6), ZoneGrid::equal(3, 4));
+    std::vector<Match> matches{lossMatch(), randomMatch(20261205u, 2000)};
+    // ... and the demo season, every match file of the sample club.
+    for (const auto& file : std::filesystem::directory_iterator(
+             pitchloop::testutil::sourcePath("sample-club/matches"))) {
+        auto read = readMatchFile(file.path());
+        REQUIRE(read.ok());
+        matches.push_back(std::move(*read.match));
+    }
+    REQUIRE(matches.size() >= 30);
+    for (const Match& m : matches) {
+        for (const MetricSpec& spec : specs) {
+            INFO(spec.id << " on " << grid.name() << ", " << m.events.size() << " events");
+            CHECK(firstDifference(tallyFromMoments(m, spec, grid), tallyOf(m, spec, grid), grid).empty());
+        }
+    }
+}
+
+TEST_CASE("moments of the hand-checked match say what happened and when") {
+    const Match m = lossMatch();
+    // regain_5s in (3,1): J regained by their ball out 5 s after the take at 401; K not (our
+    // recovery 5.1 s after the take at 501 is too late).
+    const auto moments = matchMoments(m, builtin("regain_5s"), ZoneGrid(), Zone{3, 1});
+    REQUIRE(moments.size() == 2);
+    CHECK(moments[0].count == MomentCount::Success);
+    CHECK(moments[0].t == 401);
+    CHECK(moments[0].startT == 400); // our failed pass: where the ball was lost
+    REQUIRE(moments[0].answerAfterS);
+    CHECK(*moments[0].answerAfterS == Approx(5.0));
+    CHECK(moments[0].endT == 406);
+    CHECK(moments[0].what == "we lost the ball (pass) to their interception → their ball out after 5.0 s");
+    CHECK(moments[1].count == MomentCount::NoSuccess);
+    CHECK(moments[1].what == "we lost the ball (pass) to their interception → nothing within 5.0 s");
+    CHECK(moments[1].endT == 506);
+    // G: their shot is itself the take event, so it is a shot after the loss at once.
+    const auto shots = matchMoments(m, builtin("shot_after_loss"), ZoneGrid(), Zone{5, 4});
+    REQUIRE(shots.size() == 1);
+    CHECK(shots[0].count == MomentCount::Success);
+    CHECK(*shots[0].answerAfterS == 0);
+    CHECK(shots[0].what == "we lost the ball (pass) to their shot, saved (itself the answer)");
 }
