@@ -1,7 +1,6 @@
 #include "moments.h"
 
 #include "exports.h"
-#include "zonenames.h"
 
 #include <algorithm>
 #include <cmath>
@@ -150,6 +149,60 @@ std::vector<Moment> matchMoments(const Match& match, const MetricSpec& spec, con
     return out;
 }
 
+MomentsResult storedMoments(const ClubRepository& repo, const MomentsRequest& request) {
+    MomentsResult out;
+    const auto where = repo.seasonOfMatch(request.matchId);
+    if (!where) {
+        out.problem = "no match '" + request.matchId + "' in the club file";
+        return out;
+    }
+    const auto metrics = repo.metrics();
+    const auto metric = std::find_if(metrics.begin(), metrics.end(),
+                                     [&](const MetricSpec& m) { return m.id == request.metricId; });
+    if (metric == metrics.end()) {
+        out.problem = "no metric '" + request.metricId + "'";
+        return out;
+    }
+    if (request.window.kind == Window::Kind::Ewma) {
+        out.problem = "a weighted window counts every match of the season a little, so it has no "
+                      "list of moments: choose this match, the last N matches or the season";
+        return out;
+    }
+    const ZoneGrid grid = repo.tallyGrid();
+    if (const auto& z = request.zone;
+        z && (z->band < 1 || z->band > grid.bands() || z->lane < 1 || z->lane > grid.lanes())) {
+        out.problem = "zone " + std::to_string(z->band) + "," + std::to_string(z->lane) +
+                      " is not on the club's grid (" + std::to_string(grid.bands()) + " bands × " +
+                      std::to_string(grid.lanes()) + " lanes)";
+        return out;
+    }
+    std::vector<MatchSummary> season;
+    for (auto& m : repo.matches())
+        if (m.squad == where->first && m.season == where->second) season.push_back(std::move(m));
+    std::size_t focal = 0;
+    while (focal < season.size() && season[focal].id != request.matchId) ++focal;
+    std::size_t first = focal;
+    if (request.window.kind == Window::Kind::Season) first = 0;
+    else if (request.window.kind == Window::Kind::LastN)
+        first = focal + 1 > static_cast<std::size_t>(request.window.n) ? focal + 1 - static_cast<std::size_t>(request.window.n) : 0;
+    for (std::size_t i = first; i <= focal && i < season.size(); ++i) {
+        const auto match = repo.loadMatch(season[i].id);
+        if (!match) continue;
+        auto moments = matchMoments(*match, *metric, grid, request.zone);
+        for (const Moment& m : moments) {
+            if (m.count == MomentCount::Success) ++out.num;
+            if (m.count == MomentCount::Exposure ||
+                (metric->per == MetricSpec::Per::Items && m.count != MomentCount::Censored))
+                ++out.den;
+        }
+        if (metric->per == MetricSpec::Per::Match && zonesKnownOn(match->info, grid)) ++out.den;
+        out.moments.insert(out.moments.end(), std::make_move_iterator(moments.begin()),
+                           std::make_move_iterator(moments.end()));
+        out.matches.push_back(season[i]);
+    }
+    return out;
+}
+
 std::string periodClock(double t) {
     const long s = std::lround(std::floor(std::max(0.0, t)));
     return twoDigits(s / 60) + ":" + twoDigits(s % 60);
@@ -200,6 +253,60 @@ std::vector<Clip> clipsOf(const MatchInfo& info, const std::vector<Moment>& mome
     return clips;
 }
 
+namespace {
+
+std::string decimal(double v, int places) {
+    char buf[48];
+    std::snprintf(buf, sizeof buf, "%.*f", places, v);
+    return buf;
+}
+
+std::string playersText(const std::vector<std::string>& players) {
+    std::string s;
+    for (const auto& p : players) s += (s.empty() ? "" : " ") + p;
+    return s;
+}
+
+} // namespace
+
+std::string momentsCsv(const std::vector<Moment>& moments) {
+    std::string out = "match_id,date,opponent,period,period_clock,match_clock,band,lane,counts,after_s,"
+                      "what,players,x,y,to_x,to_y\r\n";
+    for (const Moment& m : moments) {
+        out += csvField(m.matchId) + "," + m.date + "," + csvField(m.opponent) + "," +
+               std::to_string(m.period) + "," + periodClock(m.t) + "," + csvField(matchClock(m.period, m.t)) +
+               "," + std::to_string(m.band) + "," + std::to_string(m.lane) + "," +
+               std::string(toString(m.count)) + "," + (m.answerAfterS ? decimal(*m.answerAfterS, 1) : "") +
+               "," + csvField(m.what) + "," +
+               csvField(playersText(m.players)) + "," + decimal(m.from.x, 1) + "," + decimal(m.from.y, 1) +
+               "," + (m.to ? decimal(m.to->x, 1) : "") + "," + (m.to ? decimal(m.to->y, 1) : "") + "\r\n";
+    }
+    return out;
+}
+
+nlohmann::json toJson(const Moment& m) {
+    nlohmann::json j;
+    j["match_id"] = m.matchId;
+    j["date"] = m.date;
+    j["opponent"] = m.opponent;
+    j["period"] = m.period;
+    j["t"] = m.t;
+    j["start_t"] = m.startT;
+    j["end_t"] = m.endT;
+    j["period_clock"] = periodClock(m.t);
+    j["match_clock"] = matchClock(m.period, m.t);
+    j["band"] = m.band;
+    j["lane"] = m.lane;
+    j["counts"] = toString(m.count);
+    j["after_s"] = m.answerAfterS ? nlohmann::json(*m.answerAfterS) : nlohmann::json();
+    j["what"] = m.what;
+    j["players"] = m.players;
+    j["from"] = {{"x", m.from.x}, {"y", m.from.y}};
+    j["to"] = m.to ? nlohmann::json{{"x", m.to->x}, {"y", m.to->y}} : nlohmann::json();
+    j["event_index"] = m.event;
+    return j;
+}
+
 std::string vttTime(double seconds) {
     const long ms = std::lround(std::max(0.0, seconds) * 1000);
     char buf[32];
@@ -213,7 +320,13 @@ namespace {
 /// WebVTT cue text: '&', '<' and '>' escaped, no line terminators, never "-->".
 std::string vttText(const std::string& text) {
     std::string out;
-    for (char c : text) {
+    for (std::size_t i = 0; i < text.size(); ++i) {
+        const char c = text[i];
+        if (text.compare(i, 3, "-->") == 0) {
+            out += "-&gt;";
+            i += 2;
+            continue;
+        }
         if (c == '&') out += "&amp;";
         else if (c == '<') out += "&lt;";
         else if (c == '>') out += "&gt;";
@@ -246,8 +359,8 @@ std::string clipsWebVtt(const MatchInfo& info, const std::vector<Moment>& moment
 
 std::string clipsCsv(const MatchInfo& info, const std::vector<Moment>& moments,
                      const std::vector<Clip>& clips) {
-    std::string out = "match_id,clip,start_s,end_s,start,end,period,period_clock,match_clock,zone,"
-                      "counts,after_s,what,players\n";
+    std::string out = "match_id,clip,start_s,end_s,start,end,period,period_clock,match_clock,band,lane,"
+                      "counts,after_s,what,players\r\n";
     int n = 0;
     char buf[64];
     for (const Clip& c : clips) {
@@ -255,18 +368,13 @@ std::string clipsCsv(const MatchInfo& info, const std::vector<Moment>& moments,
         for (std::size_t i : c.moments) {
             const Moment& m = moments[i];
             std::snprintf(buf, sizeof buf, "%.3f,%.3f", c.startS, c.endS);
-            std::string players;
-            for (const auto& p : m.players) players += (players.empty() ? "" : " ") + p;
-            std::string after;
-            if (m.answerAfterS) {
-                char a[32];
-                std::snprintf(a, sizeof a, "%.1f", *m.answerAfterS);
-                after = a;
-            }
+            const std::string players = playersText(m.players);
+            const std::string after = m.answerAfterS ? decimal(*m.answerAfterS, 1) : "";
             out += csvField(info.id) + "," + std::to_string(n) + "," + buf + "," + vttTime(c.startS) + "," +
                    vttTime(c.endS) + "," + std::to_string(m.period) + "," + periodClock(m.t) + "," +
-                   csvField(matchClock(m.period, m.t)) + "," + zoneCode(m.band, m.lane) + "," + std::string(toString(m.count)) + "," + after + "," +
-                   csvField(m.what) + "," + csvField(players) + "\n";
+                   csvField(matchClock(m.period, m.t)) + "," + std::to_string(m.band) + "," +
+                   std::to_string(m.lane) + "," + std::string(toString(m.count)) + "," + after + "," +
+                   csvField(m.what) + "," + csvField(players) + "\r\n";
         }
     }
     return out;

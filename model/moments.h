@@ -4,6 +4,10 @@
 // and clip lists of them for a video player (WebVTT chapters, CSV).
 
 #include "metricengine.h"
+#include "repository.h"
+#include "status.h"
+
+#include <nlohmann/json.hpp>
 
 #include <map>
 #include <optional>
@@ -48,6 +52,31 @@ struct Moment {
 std::vector<Moment> matchMoments(const Match& match, const MetricSpec& spec, const ZoneGrid& grid,
                                  std::optional<Zone> zone);
 
+/// The matches of a window ending at a stored match, oldest first: the match itself, the last
+/// N of its season up to it, or its season so far — the matches its status adds up.
+struct MomentsRequest {
+    std::string matchId;
+    std::string metricId;
+    std::optional<Zone> zone; ///< nullopt: the whole pitch
+    Window window{Window::Kind::Match, 1, 0.3};
+};
+
+/// What a request found: the window's matches (oldest first) and their moments in match order,
+/// or a problem in words ("no match 'X'", "no metric 'Y'", a window of weights) and nothing else.
+struct MomentsResult {
+    std::vector<MatchSummary> matches;
+    std::vector<Moment> moments;
+    std::string problem;
+    /// The zone's numbers from these moments: successes, and the denominator as the tallies
+    /// count it (a per-match count's: the matches).
+    long num = 0;
+    long den = 0;
+};
+
+/// The moments behind a zone's number in a window, read from the club file's stored events.
+/// An EWMA window weighs every match, so it has no list of its own and is refused.
+MomentsResult storedMoments(const ClubRepository& repo, const MomentsRequest& request);
+
 /// The clock in a period: "26:04" (minutes may pass 59: "61:30").
 std::string periodClock(double t);
 /// The match clock as football reads it (Laws of the Game, Law 7: halves of 45 minutes, extra
@@ -87,6 +116,13 @@ std::string clipsWebVtt(const MatchInfo& info, const std::vector<Moment>& moment
 /// hh:mm:ss.ttt, period, clocks, what happened, players (RFC 4180).
 std::string clipsCsv(const MatchInfo& info, const std::vector<Moment>& moments,
                      const std::vector<Clip>& clips);
+
+/// The moments as CSV, one row each (RFC 4180; docs/moments.md): match, date, opponent, period,
+/// clocks, zone, how it counts, seconds to the answer, what happened, players, the arrow.
+std::string momentsCsv(const std::vector<Moment>& moments);
+
+/// One moment as JSON, the same fields as the CSV.
+nlohmann::json toJson(const Moment& m);
 
 /// hh:mm:ss.ttt as WebVTT writes a cue time.
 std::string vttTime(double seconds);

@@ -4,6 +4,7 @@
 #include "drills_verbs.h"
 #include "export_verbs.h"
 #include "focus_verbs.h"
+#include "moments_verbs.h"
 #include "plan_verbs.h"
 #include "verbs.h"
 
@@ -410,6 +411,7 @@ int run(int argc, char** argv, std::ostream& out, std::ostream& err) {
     FocusVerbs focusVerbs(app);
     PlanVerbs planVerbs(app);
     ExportVerbs exportVerbs(app);
+    MomentVerbs momentVerbs(app); // after ExportVerbs: it adds `export clips`
 
     auto* metrics = app.add_subcommand("metrics", "List, show and add metric definitions");
     metrics->require_subcommand(1);
@@ -504,6 +506,7 @@ int run(int argc, char** argv, std::ostream& out, std::ostream& err) {
         if (drillVerbs.chosen()) return drillVerbs.run(g, out, err);
         if (focusVerbs.chosen()) return focusVerbs.run(g, out, err);
         if (planVerbs.chosen()) return planVerbs.run(g, out, err);
+        if (momentVerbs.chosen()) return momentVerbs.run(g, out, err);
         if (exportVerbs.chosen()) return exportVerbs.run(g, out, err);
         if (*metricsList) return cmdMetricsList(g, out);
         if (*metricsShow) return cmdMetricsShow(g, showId, out, err);

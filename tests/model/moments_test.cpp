@@ -108,8 +108,8 @@ TEST_CASE("a WebVTT chapter list and a CSV clip list", "[moments]") {
     CHECK(contains(vtt, "Harbour &lt;Rovers&gt; &amp; Co")); // cue text escapes
     CHECK_FALSE(contains(vtt.substr(vtt.find("-->") + 3), "<"));
     const std::string csv = clipsCsv(m.info, moments, clips);
-    CHECK(csv.rfind("match_id,clip,start_s,end_s,start,end,period,period_clock,match_clock,zone,counts,after_s,what,players\n", 0) == 0);
-    CHECK(contains(csv, "KB-TEST,1,52.000,74.000,00:00:52.000,00:01:14.000,1,01:01,01:01,B3·L1,success,2.0,"));
+    CHECK(csv.rfind("match_id,clip,start_s,end_s,start,end,period,period_clock,match_clock,band,lane,counts,after_s,what,players\r\n", 0) == 0);
+    CHECK(contains(csv, "KB-TEST,1,52.000,74.000,00:00:52.000,00:01:14.000,1,01:01,01:01,3,1,success,2.0,"));
     CHECK(contains(csv, ",no_success,,"));
     CHECK(vttTime(3723.4567) == "01:02:03.457");
 }

@@ -1,0 +1,251 @@
+#include "moments_verbs.h"
+
+#include "commands.h"
+#include "exports.h"
+#include "moments.h"
+#include "wording.h"
+#include "zonenames.h"
+
+#include <nlohmann/json.hpp>
+
+#include <algorithm>
+#include <cstdio>
+#include <limits>
+
+namespace pitchloop::cli {
+
+using namespace pitchloop::model;
+
+namespace {
+
+/// "[[hh:]mm:]ss[.fff]" in seconds; nullopt when malformed or negative.
+std::optional<double> clockSeconds(const std::string& text) {
+    double total = 0;
+    std::size_t pos = 0;
+    int parts = 0;
+    while (pos <= text.size()) {
+        const std::size_t colon = text.find(':', pos);
+        const std::string part = text.substr(pos, colon == std::string::npos ? std::string::npos : colon - pos);
+        if (part.empty() || ++parts > 3) return std::nullopt;
+        std::size_t used = 0;
+        double v = 0;
+        try {
+            v = std::stod(part, &used);
+        } catch (const std::exception&) {
+            return std::nullopt;
+        }
+        if (used != part.size() || v < 0) return std::nullopt;
+        total = total * 60 + v;
+        if (colon == std::string::npos) break;
+        pos = colon + 1;
+    }
+    return total;
+}
+
+std::string countWord(MomentCount c) {
+    switch (c) {
+    case MomentCount::Success: return "yes";
+    case MomentCount::NoSuccess: return "no";
+    case MomentCount::Censored: return "not counted";
+    case MomentCount::Exposure: return "exposure";
+    }
+    return "";
+}
+
+std::string shortPeriod(int period) {
+    switch (period) {
+    case 1: return "1st";
+    case 2: return "2nd";
+    default: return "p" + std::to_string(period);
+    }
+}
+
+} // namespace
+
+MomentVerbs::MomentVerbs(CLI::App& app) {
+    auto request = [&](CLI::App* sub) {
+        sub->add_option("match", m_match, "The match (the window ends with it)")->required();
+        sub->add_option("--metric", m_metric, "Metric id")->required();
+        sub->add_option("--zone", m_zone, "Zone BAND,LANE (0,0 or none: the whole pitch)");
+        sub->add_option("--window", m_window, "match, lastN or season")->capture_default_str();
+    };
+    m_list = app.add_subcommand("moments", "The losses, passes and actions behind a zone's number, "
+                                           "with the match clock (docs/moments.md)");
+    request(m_list);
+    m_list->add_option("--format", m_format, "table, csv or json")
+        ->capture_default_str()
+        ->check(CLI::IsMember({"table", "csv", "json"}));
+
+    CLI::App* exportGroup = app.get_subcommand("export");
+    m_clips = exportGroup->add_subcommand("clips", "The moments behind a zone as a clip list for a "
+                                                   "video player: WebVTT chapters or CSV");
+    request(m_clips);
+    m_clips->add_option("--format", m_clipFormat, "vtt (WebVTT chapters) or csv")
+        ->capture_default_str()
+        ->check(CLI::IsMember({"vtt", "csv"}));
+    m_clips->add_option("--lead-in", m_leadIn, "Seconds of video before each moment")
+        ->capture_default_str()
+        ->check(CLI::Range(0.0, 600.0));
+    m_clips->add_option("--lead-out", m_leadOut, "Seconds of video after each moment")
+        ->capture_default_str()
+        ->check(CLI::Range(0.0, 600.0));
+    m_clips->add_option("--period-start", m_periodStarts,
+                        "Where a period starts in the video, PERIOD=[hh:]mm:ss (repeatable; "
+                        "default: the 1st at 0:00, each next one right after the one before)");
+    m_clips->add_option("-o,--out", m_out, "The file to write; - for standard output")->required();
+}
+
+int MomentVerbs::run(const Globals& g, std::ostream& out, std::ostream& err) {
+    auto repo = openClub(g);
+    return m_list->parsed() ? runList(*repo, out, err) : runClips(*repo, out, err);
+}
+
+namespace {
+
+std::optional<MomentsResult> findMoments(ClubRepository& repo, const std::string& match,
+                                         const std::string& metric, const std::string& zoneText,
+                                         const std::string& windowText, std::ostream& err) {
+    MomentsRequest request;
+    request.matchId = match;
+    request.metricId = metric;
+    if (!zoneText.empty() && zoneText != "0,0") {
+        request.zone = parseZone(zoneText);
+        if (!request.zone) {
+            err << "error: --zone '" << zoneText << "': expected BAND,LANE, e.g. 2,5 (0,0: the whole pitch)\n";
+            return std::nullopt;
+        }
+    }
+    const auto window = Window::parse(windowText);
+    if (!window) {
+        err << "error: --window '" << windowText << "': expected match, lastN or season\n";
+        return std::nullopt;
+    }
+    request.window = *window;
+    auto result = storedMoments(repo, request);
+    if (!result.problem.empty()) {
+        err << "error: " << result.problem;
+        if (result.problem.rfind("no match", 0) == 0) err << " (see: pitchloop matches)";
+        if (result.problem.rfind("no metric", 0) == 0) err << " (see: pitchloop metrics list)";
+        err << "\n";
+        return std::nullopt;
+    }
+    return result;
+}
+
+} // namespace
+
+int MomentVerbs::runList(ClubRepository& repo, std::ostream& out, std::ostream& err) {
+    const auto found = findMoments(repo, m_match, m_metric, m_zone, m_window, err);
+    if (!found) return kExitBadInput;
+    const auto& moments = found->moments;
+    if (m_format == "csv") {
+        out << momentsCsv(moments);
+        return kExitOk;
+    }
+    const ZoneGrid grid = repo.tallyGrid();
+    const auto zone = parseZone(m_zone);
+    const int band = zone ? zone->band : 0, lane = zone ? zone->lane : 0;
+    const auto metrics = repo.metrics();
+    const MetricSpec& metric = *std::find_if(metrics.begin(), metrics.end(),
+                                             [&](const MetricSpec& m) { return m.id == m_metric; });
+    if (m_format == "json") {
+        nlohmann::json j;
+        j["match_id"] = m_match;
+        j["metric"] = m_metric;
+        j["band"] = band;
+        j["lane"] = lane;
+        j["window"] = Window::parse(m_window)->name();
+        j["matches"] = nlohmann::json::array();
+        for (const auto& s : found->matches) j["matches"].push_back(s.id);
+        j["num"] = found->num;
+        j["den"] = found->den;
+        j["moments"] = nlohmann::json::array();
+        for (const Moment& m : moments) j["moments"].push_back(toJson(m));
+        out << j.dump(2) << "\n";
+        return kExitOk;
+    }
+    const Window window = *Window::parse(m_window);
+    out << (metric.name.empty() ? metric.id : metric.name) << " · " << zoneName(band, lane, grid) << " · "
+        << words::windowName(window) << " (" << found->matches.size()
+        << (found->matches.size() == 1 ? " match" : " matches") << " to " << m_match << ")\n";
+    const double value = found->den > 0 ? static_cast<double>(found->num) / static_cast<double>(found->den)
+                                        : std::numeric_limits<double>::quiet_NaN();
+    out << moments.size() << (moments.size() == 1 ? " moment" : " moments") << "; the number from them: "
+        << found->num << " / " << found->den
+        << (metric.per == MetricSpec::Per::Match ? (found->den == 1 ? " match" : " matches") : "") << " = "
+        << formatValue(metric.kind(), value) << "\n";
+    if (moments.empty()) return kExitOk;
+    out << "\n";
+    char line[160];
+    std::snprintf(line, sizeof line, "%-12s %-18s %-7s %-12s %s\n", "match", "clock", "zone", "counts", "what");
+    out << line;
+    for (const Moment& m : moments) {
+        const std::string clock = shortPeriod(m.period) + " " + periodClock(m.t) + " (" + matchClock(m.period, m.t) + ")";
+        std::snprintf(line, sizeof line, "%-12s %-18s ", m.matchId.c_str(), clock.c_str());
+        // zone codes hold a two-byte '·': pad by hand
+        std::string code = zoneCode(m.band, m.lane);
+        code += std::string(code.size() < 8 ? 8 - code.size() : 1, ' ');
+        std::string counts = countWord(m.count);
+        counts += std::string(counts.size() < 13 ? 13 - counts.size() : 1, ' ');
+        out << line << code << counts << m.what << "\n";
+    }
+    return kExitOk;
+}
+
+int MomentVerbs::runClips(ClubRepository& repo, std::ostream& out, std::ostream& err) {
+    VideoClock clock;
+    clock.leadInS = m_leadIn;
+    clock.leadOutS = m_leadOut;
+    for (const auto& text : m_periodStarts) {
+        const auto eq = text.find('=');
+        std::optional<double> at;
+        int period = 0;
+        if (eq != std::string::npos) {
+            try {
+                std::size_t used = 0;
+                period = std::stoi(text.substr(0, eq), &used);
+                if (used != eq) period = 0;
+            } catch (const std::exception&) {
+                period = 0;
+            }
+            at = clockSeconds(text.substr(eq + 1));
+        }
+        if (period < 1 || !at) {
+            err << "error: --period-start '" << text << "': expected PERIOD=[hh:]mm:ss, e.g. 2=47:30\n";
+            return kExitBadInput;
+        }
+        clock.periodStartS[period] = *at;
+    }
+    const auto found = findMoments(repo, m_match, m_metric, m_zone, m_window, err);
+    if (!found) return kExitBadInput;
+    if (found->matches.size() != 1) {
+        err << "error: --window " << m_window << ": a clip list describes one match's video, and this window has "
+            << found->matches.size() << " matches; use --window match (the default) for each match\n";
+        return kExitBadInput;
+    }
+    const auto match = repo.loadMatch(m_match);
+    const auto clips = clipsOf(match->info, found->moments, clock);
+    const auto metrics = repo.metrics();
+    const MetricSpec& metric = *std::find_if(metrics.begin(), metrics.end(),
+                                             [&](const MetricSpec& m) { return m.id == m_metric; });
+    const auto zone = parseZone(m_zone);
+    const std::string title = (metric.name.empty() ? metric.id : metric.name) + " · " +
+                              zoneName(zone ? zone->band : 0, zone ? zone->lane : 0, repo.tallyGrid());
+    const std::string bytes = m_clipFormat == "vtt" ? clipsWebVtt(match->info, found->moments, clips, title)
+                                                    : clipsCsv(match->info, found->moments, clips);
+    if (m_out == "-") {
+        out << bytes;
+        return kExitOk;
+    }
+    try {
+        writeFileAtomically(m_out, bytes);
+    } catch (const IoError& e) {
+        err << "error: " << e.what() << "\n";
+        return kExitBadInput;
+    }
+    err << "wrote " << clips.size() << (clips.size() == 1 ? " clip" : " clips") << " of "
+        << found->moments.size() << (found->moments.size() == 1 ? " moment" : " moments") << " to " << m_out << "\n";
+    return kExitOk;
+}
+
+} // namespace pitchloop::cli

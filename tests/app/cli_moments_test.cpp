@@ -1,0 +1,109 @@
+// `moments` and `export clips` on the command line: the demo's off-target zone leads to its
+// moments, and bad requests are named and write nothing. That the moments add up to the
+// tallies for every metric and zone is checked from outside (tests/python/clips_check.py).
+
+#include "clirun.h"
+#include "testutil.h"
+
+#include <catch2/catch.hpp>
+#include <filesystem>
+#include <nlohmann/json.hpp>
+
+namespace fs = std::filesystem;
+
+using pitchloop::testutil::cli;
+using pitchloop::testutil::contains;
+using pitchloop::testutil::dataSnapshot;
+using pitchloop::testutil::freshTempDir;
+using pitchloop::testutil::sourcePath;
+
+namespace {
+
+/// The demo's matches 1–8.
+struct DemoMatches {
+    fs::path dir = freshTempDir("moments-cli");
+    std::string db = (dir / "club.sqlite").string();
+
+    DemoMatches() {
+        std::vector<std::string> args{"--db", db, "ingest"};
+        for (int i = 1; i <= 8; ++i) {
+            char name[48];
+            std::snprintf(name, sizeof name, "sample-club/matches/KB-2026-%02d.json", i);
+            args.push_back(sourcePath(name).string());
+        }
+        REQUIRE(cli(args).code == 0);
+    }
+};
+
+} // namespace
+
+TEST_CASE("moments: the slipped zone of the demo's match 8 leads to its moments", "[cli][moments]") {
+    const DemoMatches demo;
+    // The debrief of match 8 flags their passes before their shots in our left-back area
+    // (11 in the match, 34 over the last five: 6.8 a match).
+    auto r = cli({"--db", demo.db, "moments", "KB-2026-08", "--metric", "pre_shot_passes_against",
+                  "--zone", "2,5"});
+    INFO(r.err);
+    REQUIRE(r.code == 0);
+    CHECK(contains(r.out, "Their passes before their shots · our left-back area (B2·L5) · this match"));
+    CHECK(contains(r.out, "11 moments; the number from them: 11 / 1 match = 11"));
+    CHECK(contains(r.out, "KB-2026-08   2nd 28:00 (73:00)"));
+    r = cli({"--db", demo.db, "moments", "KB-2026-08", "--metric", "pre_shot_passes_against",
+             "--zone", "2,5", "--window", "last5", "--format", "json"});
+    REQUIRE(r.code == 0);
+    const auto j = nlohmann::json::parse(r.out);
+    CHECK(j["num"] == 34);
+    CHECK(j["den"] == 5);
+    CHECK(j["matches"].size() == 5);
+    CHECK(j["moments"].size() == 34);
+    CHECK(j["moments"][0]["match_id"] == "KB-2026-04");
+}
+
+TEST_CASE("moments and clips: bad requests are named and write nothing", "[cli][moments]") {
+    const DemoMatches demo;
+    const std::string before = dataSnapshot(demo.db);
+    const std::string out = (demo.dir / "clips.vtt").string();
+    struct Case {
+        std::vector<std::string> args;
+        std::string message;
+    };
+    const std::vector<Case> cases{
+        {{"moments", "KB-2099-01", "--metric", "regain_5s"}, "no match 'KB-2099-01' in the club file"},
+        {{"moments", "KB-2026-08", "--metric", "regain_6s"}, "no metric 'regain_6s'"},
+        {{"moments", "KB-2026-08", "--metric", "regain_5s", "--zone", "7,1"},
+         "zone 7,1 is not on the club's grid (6 bands × 5 lanes)"},
+        {{"moments", "KB-2026-08", "--metric", "regain_5s", "--zone", "left"}, "--zone 'left'"},
+        {{"moments", "KB-2026-08", "--metric", "regain_5s", "--window", "ewma0.3"},
+         "a weighted window counts every match"},
+        {{"export", "clips", "KB-2026-08", "--metric", "regain_5s", "--window", "last5", "-o", out},
+         "a clip list describes one match's video"},
+        {{"export", "clips", "KB-2026-08", "--metric", "regain_5s", "--period-start", "2=47.30x",
+          "-o", out},
+         "--period-start '2=47.30x': expected PERIOD=[hh:]mm:ss"},
+        {{"export", "clips", "KB-2026-08", "--metric", "regain_5s", "--period-start", "0=1:00",
+          "-o", out},
+         "--period-start '0=1:00'"},
+    };
+    for (const auto& c : cases) {
+        std::vector<std::string> args{"--db", demo.db};
+        args.insert(args.end(), c.args.begin(), c.args.end());
+        const auto r = cli(args);
+        INFO(c.message << "\n" << r.err);
+        CHECK(r.code == 2);
+        CHECK(contains(r.err, c.message));
+    }
+    CHECK_FALSE(fs::exists(out));
+    CHECK(dataSnapshot(demo.db) == before);
+}
+
+TEST_CASE("export clips writes a WebVTT chapter file", "[cli][moments]") {
+    const DemoMatches demo;
+    const std::string out = (demo.dir / "clips.vtt").string();
+    const auto r = cli({"--db", demo.db, "export", "clips", "KB-2026-08", "--metric",
+                        "pre_shot_passes_against", "--zone", "2,5", "--lead-in", "10", "-o", out});
+    INFO(r.err);
+    REQUIRE(r.code == 0);
+    CHECK(contains(r.err, "of 11 moments to"));
+    REQUIRE(fs::exists(out));
+    CHECK(fs::file_size(out) > 200);
+}
