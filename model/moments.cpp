@@ -307,6 +307,29 @@ nlohmann::json toJson(const Moment& m) {
     return j;
 }
 
+std::optional<double> parseClock(std::string_view text) {
+    double total = 0;
+    int parts = 0;
+    std::size_t pos = 0;
+    while (true) {
+        const std::size_t colon = text.find(':', pos);
+        const std::string part(text.substr(pos, colon == std::string_view::npos ? std::string_view::npos : colon - pos));
+        if (part.empty() || ++parts > 3 || part.find_first_not_of("0123456789.") != std::string::npos)
+            return std::nullopt;
+        std::size_t used = 0;
+        double v = 0;
+        try {
+            v = std::stod(part, &used);
+        } catch (const std::exception&) {
+            return std::nullopt;
+        }
+        if (used != part.size()) return std::nullopt;
+        total = total * 60 + v;
+        if (colon == std::string_view::npos) return total;
+        pos = colon + 1;
+    }
+}
+
 std::string vttTime(double seconds) {
     const long ms = std::lround(std::max(0.0, seconds) * 1000);
     char buf[32];

@@ -124,6 +124,10 @@ std::string momentsCsv(const std::vector<Moment>& moments);
 /// One moment as JSON, the same fields as the CSV.
 nlohmann::json toJson(const Moment& m);
 
+/// Reads a clock "[hh:]mm:ss[.fff]" ("47:30", "1:02:03.5", "95") in seconds; nullopt when it is
+/// not one (a part missing, not a number, negative).
+std::optional<double> parseClock(std::string_view text);
+
 /// hh:mm:ss.ttt as WebVTT writes a cue time.
 std::string vttTime(double seconds);
 

@@ -46,6 +46,18 @@ ApplicationWindow {
         showPage("zone")
     }
 
+    // The moments behind the debrief's chosen zone; false when no zone is chosen (self-test and
+    // screenshots).
+    function openDebriefMoments(): bool {
+        return debriefPage.openSelectedMoments()
+    }
+
+    // The zone page opened on the moments behind a zone's number (two clicks from a debrief).
+    function openMoments(metricId: string, band: int, lane: int, matchId: string) {
+        zonePage.showMoments(metricId, band, lane, matchId)
+        showPage("zone")
+    }
+
     // Opens a table in the mapping assistant of Load matches (a file path).
     function mapTable(path: string) {
         showPage("import")
@@ -233,6 +245,7 @@ ApplicationWindow {
                 id: debriefPage
                 session: root.session
                 onOpenZone: (metricId, band, lane, matchId) => root.openZone(metricId, band, lane, matchId)
+                onOpenMoments: (metricId, band, lane, matchId) => root.openMoments(metricId, band, lane, matchId)
                 onOpenFocus: (metricId, band, lane, matchId) => root.openFocus(metricId, band, lane, matchId)
             }
             ZonePage {

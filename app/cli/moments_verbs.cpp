@@ -18,30 +18,6 @@ using namespace pitchloop::model;
 
 namespace {
 
-/// "[[hh:]mm:]ss[.fff]" in seconds; nullopt when malformed or negative.
-std::optional<double> clockSeconds(const std::string& text) {
-    double total = 0;
-    std::size_t pos = 0;
-    int parts = 0;
-    while (pos <= text.size()) {
-        const std::size_t colon = text.find(':', pos);
-        const std::string part = text.substr(pos, colon == std::string::npos ? std::string::npos : colon - pos);
-        if (part.empty() || ++parts > 3) return std::nullopt;
-        std::size_t used = 0;
-        double v = 0;
-        try {
-            v = std::stod(part, &used);
-        } catch (const std::exception&) {
-            return std::nullopt;
-        }
-        if (used != part.size() || v < 0) return std::nullopt;
-        total = total * 60 + v;
-        if (colon == std::string::npos) break;
-        pos = colon + 1;
-    }
-    return total;
-}
-
 std::string countWord(MomentCount c) {
     switch (c) {
     case MomentCount::Success: return "yes";
@@ -208,7 +184,7 @@ int MomentVerbs::runClips(ClubRepository& repo, std::ostream& out, std::ostream&
             } catch (const std::exception&) {
                 period = 0;
             }
-            at = clockSeconds(text.substr(eq + 1));
+            at = parseClock(text.substr(eq + 1));
         }
         if (period < 1 || !at) {
             err << "error: --period-start '" << text << "': expected PERIOD=[hh:]mm:ss, e.g. 2=47:30\n";

@@ -127,6 +127,10 @@ int main(int argc, char* argv[]) {
     window->resize(1280, 800);
     window->show();
     QStringList problems = visitPages(window, screenshotDir);
+    // The moments behind the debrief's chosen zone (a page's second view: load and draw it too).
+    bool shown = false;
+    QMetaObject::invokeMethod(window, "openDebriefMoments", Q_RETURN_ARG(bool, shown));
+    if (shown) problems << grabCurrent(window, screenshotDir, QStringLiteral("moments"), 1);
     if (!tableToMap.isEmpty()) {
         mapTable();
         problems << grabCurrent(window, screenshotDir, QStringLiteral("layout-assistant"));

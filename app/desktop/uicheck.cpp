@@ -48,10 +48,10 @@ QStringList save(QQuickWindow* window, const QString& dir, int number, const QSt
 
 } // namespace
 
-QStringList grabCurrent(QQuickWindow* window, const QString& screenshotDir, const QString& name) {
+QStringList grabCurrent(QQuickWindow* window, const QString& screenshotDir, const QString& name, int after) {
     if (!waitForFrames(window, 3)) return {QStringLiteral("%1 was not drawn").arg(name)};
     if (screenshotDir.isEmpty()) return {};
-    return save(window, screenshotDir, window->property("pageCount").toInt() + 1, name);
+    return save(window, screenshotDir, window->property("pageCount").toInt() + 1 + after, name);
 }
 
 void WarningCounter::install() { previousHandler = qInstallMessageHandler(countingHandler); }

@@ -27,7 +27,8 @@ public:
 QStringList visitPages(QQuickWindow* window, const QString& screenshotDir);
 
 /// Waits until what the window shows now is drawn and, when `screenshotDir` is not empty, saves
-/// it as NN-name.png after the pages' own (NN = pageCount + 1). Returns the problems found.
-QStringList grabCurrent(QQuickWindow* window, const QString& screenshotDir, const QString& name);
+/// it as NN-name.png after the pages' own (NN = pageCount + 1 + `after`, so that several such
+/// views get numbers of their own). Returns the problems found.
+QStringList grabCurrent(QQuickWindow* window, const QString& screenshotDir, const QString& name, int after = 0);
 
 } // namespace pitchloop::desktop

@@ -16,6 +16,11 @@ Item {
     property int selectedBand: 0
     property int selectedLane: 0
     property bool showValues: true
+    /// Moments to draw as arrows (a MomentListModel: fromX, fromY, toX, toY in drawing metres,
+    /// counts, hasArrow); null for none.
+    property var arrows: null
+    /// The arrow row to draw strongest (the moment chosen in a list), -1 for none.
+    property int highlightedArrow: -1
 
     signal zoneClicked(int band, int lane)
 
@@ -82,6 +87,14 @@ Item {
                 strokeWidth: 1
                 fillColor: Theme.line
                 PathSvg { path: root.geometry.spotsPath(root.pxPerMetre) }
+            }
+        }
+
+        Repeater {
+            model: root.arrows
+            delegate: MomentArrowDelegate {
+                pxPerMetre: root.pxPerMetre
+                highlighted: index === root.highlightedArrow
             }
         }
 

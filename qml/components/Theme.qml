@@ -75,6 +75,9 @@ QtObject {
     readonly property color likelyOff: "#cc79a7"
     readonly property color onTarget: "#009e73"
     readonly property color tooLittleData: "#6f7782"
+    // Moments on a pitch: counted as yes (solid) and as no (dashed), light on the grass.
+    readonly property color momentYes: "#ffffff"
+    readonly property color momentNo: "#9ad0ff"
 
     function stateColour(state: int): color {
         switch (state) {

@@ -23,7 +23,19 @@ Item {
     width: area.width * pxPerMetre
     height: area.height * pxPerMetre
 
+    // A chip of the cell's own colour under the value, so the pitch's lines (the centre circle,
+    // the arcs, the spots) pass behind the number and never through it.
+    Rectangle {
+        visible: valueLabel.visible
+        anchors.centerIn: valueLabel
+        width: valueLabel.contentWidth + 6
+        height: valueLabel.contentHeight + 2
+        radius: 3
+        color: root.hasValue ? Theme.scaleColour(root.scaled) : Theme.noData
+    }
+
     Text {
+        id: valueLabel
         anchors.centerIn: parent
         anchors.verticalCenterOffset: root.height > 40 ? 3 : 0
         visible: root.showValues && root.width >= 38 && root.height >= 22

@@ -16,6 +16,14 @@ Page {
     property bool plainWords: true
 
     signal openZone(string metricId, int band, int lane, string matchId)
+    signal openMoments(string metricId, int band, int lane, string matchId)
+
+    function openSelectedMoments(): bool {
+        if (debrief.selectedBand <= 0)
+            return false
+        root.openMoments(debrief.metricId, debrief.selectedBand, debrief.selectedLane, debrief.matchId)
+        return true
+    }
     signal openFocus(string metricId, int band, int lane, string matchId)
 
     function showMatch(matchId: string) {
@@ -203,6 +211,14 @@ Page {
                       : qsTr("Pick a zone for its trend")
                 enabled: debrief.selectedBand > 0
                 onClicked: root.openZone(debrief.metricId, debrief.selectedBand, debrief.selectedLane, debrief.matchId)
+            }
+            Button {
+                objectName: "debriefMomentsButton"
+                text: debrief.selectedBand > 0
+                      ? qsTr("Moments of B%1·L%2").arg(debrief.selectedBand).arg(debrief.selectedLane)
+                      : qsTr("Moments behind the zone")
+                enabled: debrief.selectedBand > 0
+                onClicked: root.openMoments(debrief.metricId, debrief.selectedBand, debrief.selectedLane, debrief.matchId)
             }
             Button {
                 text: qsTr("Open a focus on it…")

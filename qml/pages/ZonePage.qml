@@ -17,12 +17,26 @@ Page {
     function show(metricId: string, band: int, lane: int, matchId: string) {
         trend.select(metricId, band, lane, matchId)
     }
+    /// The same, opening the moments behind the zone's number.
+    function showMoments(metricId: string, band: int, lane: int, matchId: string) {
+        show(metricId, band, lane, matchId)
+        lowerTabs.currentIndex = 1
+    }
 
     background: Rectangle { color: Theme.window }
 
     ZoneSeries {
         id: trend
         session: root.session
+    }
+
+    MomentsView {
+        id: moments
+        session: root.session
+        metricId: trend.metricId
+        band: trend.band
+        lane: trend.lane
+        matchId: trend.matchId
     }
 
     Label {
@@ -174,11 +188,32 @@ Page {
         }
 
         Card {
-            title: qsTr("Match by match · %1").arg(trend.seasonText)
+            title: lowerTabs.currentIndex === 0 ? qsTr("Match by match · %1").arg(trend.seasonText)
+                                                : qsTr("The moments behind the number · %1 · %2").arg(trend.zoneText).arg(trend.metricName)
             Layout.fillWidth: true
             Layout.fillHeight: true
 
+            TabBar {
+                id: lowerTabs
+                objectName: "zoneLowerTabs"
+                Layout.preferredWidth: 460
+                TabButton { text: qsTr("Match by match") }
+                TabButton {
+                    objectName: "momentsTab"
+                    text: qsTr("The moments behind it (%1)").arg(moments.moments.count)
+                }
+            }
+
+            MomentsPanel {
+                visible: lowerTabs.currentIndex === 1
+                Layout.fillWidth: true
+                Layout.fillHeight: true
+                view: moments
+                geometry: trend.geometry
+            }
+
             SeriesChart {
+                visible: lowerTabs.currentIndex === 0
                 Layout.fillWidth: true
                 Layout.fillHeight: true
                 series: trend.series
@@ -189,11 +224,13 @@ Page {
                 levelText: trend.levelText
             }
             SeriesKey {
+                visible: lowerTabs.currentIndex === 0
                 windowText: trend.windowText
                 ewmaText: root.plainWords ? qsTr("Recent form (recent matches count most)") : trend.ewmaText
                 levelText: root.plainWords ? qsTr("Likely range") : trend.levelText
             }
             Label {
+                visible: lowerTabs.currentIndex === 0
                 Layout.fillWidth: true
                 text: trend.focusLines.length > 0
                       ? qsTr("Focuses on this zone and metric:\n%1").arg(trend.focusLines.join("\n"))

@@ -113,3 +113,14 @@ TEST_CASE("a WebVTT chapter list and a CSV clip list", "[moments]") {
     CHECK(contains(csv, ",no_success,,"));
     CHECK(vttTime(3723.4567) == "01:02:03.457");
 }
+
+TEST_CASE("a clock typed by the staff", "[moments]") {
+    CHECK(parseClock("47:30") == 2850);
+    CHECK(parseClock("1:02:03.5") == 3723.5);
+    CHECK(parseClock("95") == 95);
+    CHECK_FALSE(parseClock(""));
+    CHECK_FALSE(parseClock("47:"));
+    CHECK_FALSE(parseClock("-1:00"));
+    CHECK_FALSE(parseClock("1:2:3:4"));
+    CHECK_FALSE(parseClock("4x:00"));
+}
