@@ -19,7 +19,7 @@ packages=(
   qml6-module-qtquick-dialogs qml6-module-qt-labs-folderlistmodel qml6-module-qt-labs-settings
   qml6-module-qttest xvfb xauth fonts-dejavu-core poppler-utils
   python3 python3-numpy python3-scipy python3-jsonschema python3-pandas python3-statsmodels
-  python3-icalendar
+  python3-icalendar python3-colorspacious
 )
 
 install_missing() {
