@@ -3,6 +3,7 @@
 #include <boost/math/distributions/gamma.hpp>
 
 #include <algorithm>
+#include <map>
 #include <cmath>
 
 namespace pitchloop::model {
@@ -121,6 +122,28 @@ PooledMap poolZones(const std::vector<ZoneCount>& zones, const ZoneGrid& grid, M
         if (reference > 0) p.spread = (p.interval.high - p.interval.low) / reference;
     }
     return map;
+}
+
+void poolStatuses(std::vector<ZoneStatus>& statuses, const std::vector<MetricSpec>& metrics,
+                  const ZoneGrid& grid) {
+    // Group by metric and window, keeping the statuses' order.
+    std::map<std::pair<std::string, std::string>, std::vector<ZoneStatus*>> groups;
+    for (ZoneStatus& s : statuses)
+        if (s.band > 0) groups[{s.metric, s.window.name()}].push_back(&s);
+    for (auto& [key, group] : groups) {
+        const auto metric = std::find_if(metrics.begin(), metrics.end(),
+                                         [&](const MetricSpec& m) { return m.id == key.first; });
+        if (metric == metrics.end()) continue;
+        std::vector<ZoneCount> counts;
+        counts.reserve(group.size());
+        for (const ZoneStatus* s : group) counts.push_back({s->band, s->lane, s->sum.effNum, s->sum.effDen});
+        const PooledMap map = poolZones(counts, grid, metric->kind(), group.front()->level, 1.0);
+        for (std::size_t i = 0; i < group.size(); ++i) {
+            group[i]->pooled = map.zones[i].pooled;
+            group[i]->pooledInterval = map.zones[i].interval;
+            group[i]->pooledWeight = map.zones[i].ownWeight();
+        }
+    }
 }
 
 } // namespace pitchloop::model

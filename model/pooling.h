@@ -5,6 +5,7 @@
 
 #include "metricspec.h"
 #include "stats.h"
+#include "status.h"
 #include "zones.h"
 
 #include <limits>
@@ -61,5 +62,11 @@ struct PooledMap {
 /// data always count). `reference` is the width a spread of 1 stands for (the colour scale's).
 PooledMap poolZones(const std::vector<ZoneCount>& zones, const ZoneGrid& grid, MetricKind kind,
                     double level, double reference);
+
+/// Fills ZoneStatus::pooled, pooledInterval and pooledWeight of every zone (not the whole
+/// pitch), pooling each metric's zones in each window on their effective counts — the map the
+/// app draws and `status --format json` prints. `metrics` gives each status's kind.
+void poolStatuses(std::vector<ZoneStatus>& statuses, const std::vector<MetricSpec>& metrics,
+                  const ZoneGrid& grid);
 
 } // namespace pitchloop::model

@@ -426,6 +426,12 @@ nlohmann::json toJson(const ZoneStatus& s) {
     put("effective_den", s.sum.effDen);
     put("dispersion", s.dispersion);
     put("match_tail", s.matchTail);
+    if (!std::isnan(s.pooled)) {
+        put("pooled", s.pooled);
+        put("pooled_low", s.pooledInterval.low);
+        put("pooled_high", s.pooledInterval.high);
+        put("pooled_weight", s.pooledWeight);
+    }
     if (s.target) {
         j["target"] = {{"direction", toString(s.target->direction)},
                        {"value", s.target->value},

@@ -127,6 +127,13 @@ struct ZoneStatus {
     /// unusual this match alone would be for a team exactly on its target — P(a match this far
     /// past it or further), negative binomial with the dispersion. NaN otherwise.
     double matchTail = std::numeric_limits<double>::quiet_NaN();
+    /// The zone's value pooled toward its neighbours and the whole pitch (pooling.h,
+    /// poolStatuses), with its interval at `level` and the zone's own data's share of it; NaN
+    /// until a map asks for it. Never for the whole pitch.
+    double pooled = std::numeric_limits<double>::quiet_NaN();
+    stats::Interval pooledInterval{std::numeric_limits<double>::quiet_NaN(),
+                                   std::numeric_limits<double>::quiet_NaN()};
+    double pooledWeight = std::numeric_limits<double>::quiet_NaN();
 };
 
 /// A season of one squad up to the match in question: match dates in order and, per metric,

@@ -2,6 +2,7 @@
 #include "debrief.h"
 #include "exports.h"
 #include "gridchange.h"
+#include "pooling.h"
 #include "format.h"
 #include "verbs.h"
 #include "wording.h"
@@ -196,7 +197,10 @@ int StatusVerbs::runStatus(ClubRepository& repo, std::ostream& out, std::ostream
         }
         j["chance_off_flags"] = chance;
         j["zones"] = nlohmann::json::array();
-        for (const auto& s : statuses) j["zones"].push_back(toJson(s));
+        // Every zone's value pooled toward its neighbours, as the app's maps draw it.
+        std::vector<ZoneStatus> pooled = statuses;
+        poolStatuses(pooled, metrics, grid);
+        for (const auto& s : pooled) j["zones"].push_back(toJson(s));
         out << j.dump(2) << "\n";
         return kExitOk;
     }

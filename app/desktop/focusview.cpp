@@ -810,15 +810,13 @@ void FocusView::refreshDraft() {
 
     // The judged window's map at that match, to pick the zones on.
     std::vector<const ZoneStatus*> zones;
-    std::vector<double> values;
     for (int i = 0; i < grid.zoneCount(); ++i) {
         const Zone z = grid.zoneAt(i);
         if (const ZoneStatus* st = season->find(*focal, metric->id, z.band, z.lane, w.judged)) {
             zones.push_back(st);
-            values.push_back(st->value);
         }
     }
-    const ScaleDomain domain = scaleDomain(kind, values);
+    const ScaleDomain domain = scaleDomain(kind, pooledValues(zones, kind, grid));
     ZoneMapModel::Header header{windowText(w.judged), qs(match->id), {}, ZoneState::NoTarget,
                                 scaleLabels(kind, domain), levelText(s->flagSettings().level)};
     if (const ZoneStatus* whole = season->find(*focal, metric->id, 0, 0, w.judged)) {

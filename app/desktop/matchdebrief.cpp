@@ -152,7 +152,6 @@ void MatchDebrief::refresh() {
     // One metric's zones in the match and over the judged window, on one shared colour scale.
     const ZoneGrid& grid = s->grid();
     std::vector<const ZoneStatus*> inMatch, inWindow;
-    std::vector<double> values;
     for (int i = 0; i < grid.zoneCount(); ++i) {
         const Zone z = grid.zoneAt(i);
         const ZoneStatus* a = season->find(*focal, metric->id, z.band, z.lane, windows.match);
@@ -160,9 +159,10 @@ void MatchDebrief::refresh() {
         if (!a || !b) continue;
         inMatch.push_back(a);
         inWindow.push_back(b);
-        values.push_back(a->value);
-        values.push_back(b->value);
     }
+    // The scale spans the values the maps colour: each zone pooled toward its neighbours.
+    std::vector<double> values = pooledValues(inMatch, kind, grid);
+    for (const double v : pooledValues(inWindow, kind, grid)) values.push_back(v);
     const ScaleDomain domain = scaleDomain(kind, values);
     const QStringList labels = scaleLabels(kind, domain);
     const QString level = levelText(s->flagSettings().level);

@@ -346,7 +346,6 @@ void TargetsView::refresh() {
     const std::string on = asOf();
     std::vector<TargetZone> zones;
     std::vector<const ZoneStatus*> cells;
-    std::vector<double> values;
     for (int i = 0; i < grid.zoneCount(); ++i) {
         const Zone z = grid.zoneAt(i);
         TargetZone t;
@@ -360,7 +359,6 @@ void TargetsView::refresh() {
             t.hasLastSeason = true;
             t.lastSeasonText = desktop::valueText(kind, a->value);
             cells.push_back(a);
-            values.push_back(a->value);
         }
         t.selected = isSelected(z.band, z.lane);
         zones.push_back(std::move(t));
@@ -371,7 +369,7 @@ void TargetsView::refresh() {
     const ZoneStatus* wholeAchieved = achievedAt(0, 0);
     m_wholePitchLastSeason = wholeAchieved ? desktop::valueText(kind, wholeAchieved->value) : QString();
     if (m_hasPreviousSeason) {
-        const ScaleDomain domain = scaleDomain(kind, values);
+        const ScaleDomain domain = scaleDomain(kind, pooledValues(cells, kind, grid));
         ZoneMapModel::Header h{tr("%1 achieved").arg(m_previousSeason), m_metricName, {},
                                ZoneState::NoTarget, scaleLabels(kind, domain),
                                levelText(s->flagSettings().level)};

@@ -1,5 +1,7 @@
 #include "zonemapmodel.h"
 
+#include "palette.h"
+#include "pooling.h"
 #include "targets.h"
 #include "zonestate.h"
 
@@ -9,25 +11,58 @@ namespace pitchloop::desktop {
 
 using namespace pitchloop::model;
 
+namespace {
+
+PooledMap poolStatusZones(const std::vector<const ZoneStatus*>& statuses, MetricKind kind, const ZoneGrid& grid,
+                          double reference) {
+    std::vector<ZoneCount> counts;
+    counts.reserve(statuses.size());
+    for (const ZoneStatus* s : statuses) counts.push_back({s->band, s->lane, s->sum.effNum, s->sum.effDen});
+    const double level = statuses.empty() ? 0.9 : statuses.front()->level;
+    return poolZones(counts, grid, kind, level, reference);
+}
+
+} // namespace
+
+std::vector<double> pooledValues(const std::vector<const ZoneStatus*>& statuses, MetricKind kind,
+                                 const ZoneGrid& grid) {
+    std::vector<double> out;
+    const PooledMap map = poolStatusZones(statuses, kind, grid, 1.0);
+    for (std::size_t i = 0; i < statuses.size(); ++i)
+        out.push_back(std::isnan(statuses[i]->value) ? std::nan("") : map.zones[i].pooled);
+    return out;
+}
+
 std::vector<ZoneCell> zoneCells(const std::vector<const ZoneStatus*>& statuses, MetricKind kind,
                                 const ScaleDomain& domain, const ZoneGrid& grid) {
     std::vector<ZoneCell> out;
     out.reserve(statuses.size());
     const long minSample = defaultMinSample(kind);
-    for (const ZoneStatus* s : statuses) {
+    const PooledMap pooled = poolStatusZones(statuses, kind, grid, domain.high - domain.low);
+    for (std::size_t i = 0; i < statuses.size(); ++i) {
+        const ZoneStatus* s = statuses[i];
+        const PooledZone& p = pooled.zones[i];
         ZoneCell c;
         c.band = s->band;
         c.lane = s->lane;
         c.zoneName = zoneText(s->band, s->lane, grid);
-        c.hasValue = !std::isnan(s->value);
-        c.value = c.hasValue ? s->value : 0;
-        c.scaled = c.hasValue ? domain.position(s->value) : 0;
+        c.hasValue = !std::isnan(s->value) && !std::isnan(p.pooled);
+        c.raw = c.hasValue ? s->value : 0;
+        c.value = c.hasValue ? p.pooled : 0;
+        c.scaled = c.hasValue ? domain.position(p.pooled) : 0;
+        c.certaintyRow = c.hasValue ? palette::levelOf(p.spread) : palette::kLevels - 1;
+        const palette::Rgb colour = c.hasValue ? palette::colour(c.certaintyRow, palette::stepOf(c.scaled, c.certaintyRow))
+                                               : palette::fromHex("#c9cdd3");
+        c.colour = QString::fromStdString(palette::toHex(colour));
+        c.darkText = palette::darkTextOn(colour);
         // Counts are per match whatever the window; shares and exposures rest on their items.
         c.thin = c.hasValue && kind != MetricKind::Count &&
                  s->sum.den < static_cast<double>(s->target ? s->target->minSample : minSample);
-        c.valueText = valueText(kind, s->value);
+        c.valueText = valueText(kind, c.hasValue ? p.pooled : s->value);
         c.sampleText = sampleText(kind, s->sum, s->window);
-        c.intervalText = c.hasValue ? intervalText(kind, s->interval) : QString();
+        c.intervalText = c.hasValue ? intervalText(kind, p.interval) : QString();
+        c.rawText = c.hasValue ? QStringLiteral("This zone alone: %1 · %2").arg(valueText(kind, s->value), c.sampleText)
+                               : QString();
         c.targetText = targetText(kind, s->target);
         c.state = ZoneState::from(s->state);
         c.stateText = stateText(s->state);
@@ -106,6 +141,11 @@ QVariant ZoneMapModel::data(const QModelIndex& index, int role) const {
     case StateRole: return c.state;
     case StateTextRole: return c.stateText;
     case CertaintyTextRole: return c.certaintyText;
+    case RawRole: return c.raw;
+    case RawTextRole: return c.rawText;
+    case ColourRole: return c.colour;
+    case DarkTextRole: return c.darkText;
+    case CertaintyRowRole: return c.certaintyRow;
     default: return {};
     }
 }
@@ -124,7 +164,12 @@ QHash<int, QByteArray> ZoneMapModel::roleNames() const {
             {TargetTextRole, "targetText"},
             {StateRole, "zoneState"},
             {StateTextRole, "stateText"},
-            {CertaintyTextRole, "certaintyText"}};
+            {CertaintyTextRole, "certaintyText"},
+            {RawRole, "raw"},
+            {RawTextRole, "rawText"},
+            {ColourRole, "colour"},
+            {DarkTextRole, "darkText"},
+            {CertaintyRowRole, "certaintyRow"}};
 }
 
 } // namespace pitchloop::desktop

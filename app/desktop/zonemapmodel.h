@@ -20,8 +20,16 @@ struct ZoneCell {
     int lane = 0;
     QString zoneName; ///< "Our left-back area (B2·L5)"
     bool hasValue = false;
-    double value = 0;
-    double scaled = 0; ///< position on the colour scale, 0..1
+    double value = 0;  ///< the zone's value pooled toward its neighbours (model/pooling.h)
+    double scaled = 0; ///< the pooled value's position on the colour scale, 0..1
+    double raw = 0;    ///< the zone's own num/den
+    /// "This zone alone: 66.7% · n = 3": the raw value and sample, one hover away.
+    QString rawText;
+    /// The cell's colour from the value-suppressing palette (model/palette.h): its row from how
+    /// wide the pooled interval is against the scale, its step from the pooled value.
+    QString colour;
+    bool darkText = false;  ///< text on the cell reads dark (a light colour)
+    int certaintyRow = 0;   ///< the palette's row: 0 most certain … 3 too unsure to colour
     bool thin = false; ///< a share or exposure on fewer items than a target needs to be judged
     QString valueText;
     QString sampleText;
@@ -33,7 +41,14 @@ struct ZoneCell {
 };
 
 /// Builds the cells of one metric in one window from statuses; `domain` places values on the
-/// colour scale. Zones come in grid order (band-major).
+/// colour scale. Each value is pooled toward its neighbours and the whole pitch on the statuses'
+/// effective counts (model/pooling.h); the raw value is kept for the hover. Zones come in grid
+/// order (band-major).
+/// The values zoneCells colours (each zone pooled toward its neighbours), for the colour scale's
+/// domain; NaN for zones without data.
+std::vector<double> pooledValues(const std::vector<const model::ZoneStatus*>& statuses,
+                                 model::MetricKind kind, const model::ZoneGrid& grid);
+
 std::vector<ZoneCell> zoneCells(const std::vector<const model::ZoneStatus*>& statuses,
                                 model::MetricKind kind, const ScaleDomain& domain,
                                 const model::ZoneGrid& grid);
@@ -68,6 +83,11 @@ public:
         StateRole,
         StateTextRole,
         CertaintyTextRole,
+        RawRole,
+        RawTextRole,
+        ColourRole,
+        DarkTextRole,
+        CertaintyRowRole,
     };
     Q_ENUM(Role)
 

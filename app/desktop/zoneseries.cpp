@@ -221,15 +221,13 @@ void ZoneSeries::refresh() {
 
     // The zone picker: every zone over the judged window ending at the chosen match.
     std::vector<const ZoneStatus*> zones;
-    std::vector<double> values;
     for (int i = 0; i < grid.zoneCount(); ++i) {
         const Zone z = grid.zoneAt(i);
         if (const ZoneStatus* st = season->find(*focal, metric->id, z.band, z.lane, w.judged)) {
             zones.push_back(st);
-            values.push_back(st->value);
         }
     }
-    const ScaleDomain domain = scaleDomain(kind, values);
+    const ScaleDomain domain = scaleDomain(kind, pooledValues(zones, kind, grid));
     ZoneMapModel::Header header{m_windowText, m_matchId, {}, ZoneState::NoTarget,
                                 scaleLabels(kind, domain), m_levelText};
     if (const ZoneStatus* whole = season->find(*focal, metric->id, 0, 0, w.judged)) {

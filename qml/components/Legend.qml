@@ -4,8 +4,9 @@ import QtQuick.Controls
 import QtQuick.Layouts
 import Pitchloop
 
-// The key to a heat map: the value scale with its labels (evenly spaced from its low to its
-// high end), the swatches for no data and thin data, and the state shapes with their names.
+// The key to a heat map: the value-suppressing palette (value across, certainty down) with the
+// scale's labels (evenly spaced from its low to its high end), the swatches for no data and thin
+// data, and the state shapes with their names.
 // Wide: the scale beside the key; compact: the key below the scale.
 GridLayout {
     id: root
@@ -46,23 +47,45 @@ GridLayout {
             color: Theme.textMuted
             font.pixelSize: Theme.fontSmall
         }
-        Rectangle {
-            id: bar
-            Layout.preferredWidth: root.compact ? 240 : 280
-            Layout.preferredHeight: 12
-            radius: 2
-            border.color: Theme.border
-            gradient: Gradient {
-                orientation: Gradient.Horizontal
-                GradientStop { position: 0 / 8; color: Theme.scaleStops[0] }
-                GradientStop { position: 1 / 8; color: Theme.scaleStops[1] }
-                GradientStop { position: 2 / 8; color: Theme.scaleStops[2] }
-                GradientStop { position: 3 / 8; color: Theme.scaleStops[3] }
-                GradientStop { position: 4 / 8; color: Theme.scaleStops[4] }
-                GradientStop { position: 5 / 8; color: Theme.scaleStops[5] }
-                GradientStop { position: 6 / 8; color: Theme.scaleStops[6] }
-                GradientStop { position: 7 / 8; color: Theme.scaleStops[7] }
-                GradientStop { position: 8 / 8; color: Theme.scaleStops[8] }
+        // The two-dimensional key of the value-suppressing palette: across, the value; down,
+        // how sure it is — each row keeps fewer steps and fades toward the neutral.
+        RowLayout {
+            spacing: Theme.gap
+            Column {
+                id: bar
+                objectName: "paletteKey"
+                Layout.preferredWidth: root.compact ? 240 : 280
+                spacing: 1
+                Repeater {
+                    model: MapPalette.rows
+                    delegate: Row {
+                        id: paletteRow
+                        required property int index
+                        readonly property var colours: MapPalette.row(index)
+                        Repeater {
+                            model: paletteRow.colours
+                            delegate: Rectangle {
+                                required property string modelData
+                                width: bar.Layout.preferredWidth / paletteRow.colours.length
+                                height: 7
+                                color: modelData
+                            }
+                        }
+                    }
+                }
+            }
+            ColumnLayout {
+                spacing: 6
+                Label {
+                    text: qsTr("sure")
+                    color: Theme.textMuted
+                    font.pixelSize: Theme.fontSmall - 1
+                }
+                Label {
+                    text: qsTr("unsure")
+                    color: Theme.textMuted
+                    font.pixelSize: Theme.fontSmall - 1
+                }
             }
         }
         Item {
@@ -80,6 +103,14 @@ GridLayout {
                     font.pixelSize: Theme.fontSmall
                 }
             }
+        }
+        Label {
+            objectName: "pooledNote"
+            Layout.preferredWidth: bar.Layout.preferredWidth + 60
+            text: qsTr("Each zone pulled toward its neighbours; hover for the zone alone.")
+            color: Theme.textMuted
+            font.pixelSize: Theme.fontSmall
+            wrapMode: Text.WordWrap
         }
     }
 

@@ -166,9 +166,13 @@ Item {
     // A zone's numbers in a few lines: name, value and sample, interval, target and state.
     function describe(z: var): string {
         if (!z || z.zoneName === undefined) return ""
-        let lines = [z.zoneName, z.valueText + "  ·  " + z.sampleText]
-        if (z.intervalText.length > 0)
-            lines.push(root.zones.levelText + " " + z.intervalText)
+        let lines = [z.zoneName]
+        if (z.rawText.length > 0) {
+            lines.push(qsTr("%1 with its neighbours (%2 %3)").arg(z.valueText).arg(root.zones.levelText).arg(z.intervalText))
+            lines.push(z.rawText)
+        } else {
+            lines.push(z.valueText + "  ·  " + z.sampleText)
+        }
         if (z.targetText.length > 0)
             lines.push(qsTr("target %1 · %2").arg(z.targetText).arg(z.stateText)
                        + (z.certaintyText.length > 0 ? " · " + z.certaintyText : ""))

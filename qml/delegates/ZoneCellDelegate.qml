@@ -2,8 +2,9 @@ import QtQuick
 import QtQuick.Shapes
 import Pitchloop
 
-// One zone's fill on a pitch map: its value as a colour of the theme's scale, grey without
-// items, hatched when it rests on too few items to be judged.
+// One zone's fill on a pitch map: its pooled value in the value-suppressing palette (the less
+// certain, the nearer the neutral; model/palette.h), grey without items, hatched when it rests
+// on too few items to be judged against a target.
 Item {
     id: root
 
@@ -12,6 +13,7 @@ Item {
     required property bool hasValue
     required property real scaled
     required property bool thin
+    required property string colour
     required property PitchGeometry geometry
     required property real pxPerMetre
 
@@ -26,7 +28,7 @@ Item {
 
     Rectangle {
         anchors.fill: parent
-        color: root.hasValue ? Theme.scaleColour(root.scaled) : Theme.noData
+        color: root.hasValue ? root.colour : Theme.noData
         border.color: Qt.rgba(0, 0, 0, 0.28)
         border.width: 1
     }

@@ -14,6 +14,8 @@ Item {
     required property PitchGeometry geometry
     required property real pxPerMetre
     required property bool showValues
+    required property string colour
+    required property bool darkText
 
     readonly property rect area: geometry.bandEdges.length > 0 ? geometry.zoneRect(band, lane)
                                                                : Qt.rect(0, 0, 0, 0)
@@ -31,7 +33,7 @@ Item {
         width: valueLabel.contentWidth + 6
         height: valueLabel.contentHeight + 2
         radius: 3
-        color: root.hasValue ? Theme.scaleColour(root.scaled) : Theme.noData
+        color: root.hasValue ? root.colour : Theme.noData
     }
 
     Text {
@@ -40,7 +42,7 @@ Item {
         anchors.verticalCenterOffset: root.height > 40 ? 3 : 0
         visible: root.showValues && root.width >= 38 && root.height >= 22
         text: root.valueText
-        color: root.hasValue ? Theme.textOnScale(root.scaled) : Theme.textMuted
+        color: root.hasValue ? (root.darkText ? Theme.text : "#ffffff") : Theme.textMuted
         font.family: Theme.fontFamily
         font.pixelSize: Math.max(9, Math.min(Theme.fontBody, root.height * 0.26, root.width * 0.19))
         font.bold: true

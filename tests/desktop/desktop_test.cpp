@@ -15,6 +15,8 @@
 #include "matchlistmodel.h"
 #include "metriclistmodel.h"
 #include "pitchgeometry.h"
+#include "palette.h"
+#include "pooling.h"
 #include "seasonoverview.h"
 #include "seriesmodel.h"
 #include "startup.h"
@@ -180,22 +182,48 @@ void DesktopTest::debriefMaps() {
 
     const model::FlagSettings settings = m_reference->flagSettings();
     const model::Window match{model::Window::Kind::Match, 1, 0.3};
+    // The maps colour each zone pooled toward its neighbours (model/pooling.h) from the same
+    // statuses' effective counts; the zone's own value stays one hover away ("raw").
+    auto pooledMap = [&](const model::Window& w) {
+        std::vector<model::ZoneCount> counts;
+        const model::ZoneGrid grid;
+        for (int i = 0; i < grid.zoneCount(); ++i) {
+            const model::Zone z = grid.zoneAt(i);
+            const auto st = referenceStatus(*m_reference, kMatches - 1, "regain_5s", z.band, z.lane, w);
+            counts.push_back({z.band, z.lane, st.sum.effNum, st.sum.effDen});
+        }
+        return model::poolZones(counts, grid, model::MetricKind::Rate, settings.level, 1.0);
+    };
+    const model::PooledMap pooledMatch = pooledMap(match), pooledWindow = pooledMap(settings.window);
     for (const auto& [band, lane] : {std::pair{5, 1}, {2, 5}, {1, 1}}) {
+        const std::size_t at = static_cast<std::size_t>(model::ZoneGrid{}.indexOf({band, lane}));
         const QVariantMap inMatch = debrief.matchMap()->zone(band, lane);
         const QVariantMap inWindow = debrief.windowMap()->zone(band, lane);
         const auto a = referenceStatus(*m_reference, kMatches - 1, "regain_5s", band, lane, match);
         const auto b = referenceStatus(*m_reference, kMatches - 1, "regain_5s", band, lane, settings.window);
         QCOMPARE(inMatch.value(QStringLiteral("hasValue")).toBool(), !std::isnan(a.value));
         if (!std::isnan(a.value)) {
-            QCOMPARE(inMatch.value(QStringLiteral("value")).toDouble(), a.value);
+            QCOMPARE(inMatch.value(QStringLiteral("raw")).toDouble(), a.value);
+            QCOMPARE(inMatch.value(QStringLiteral("value")).toDouble(), pooledMatch.zones[at].pooled);
             QCOMPARE(inMatch.value(QStringLiteral("valueText")).toString(),
-                     valueText(model::MetricKind::Rate, a.value));
+                     valueText(model::MetricKind::Rate, pooledMatch.zones[at].pooled));
+            QVERIFY(inMatch.value(QStringLiteral("rawText")).toString().startsWith(
+                QStringLiteral("This zone alone: %1").arg(valueText(model::MetricKind::Rate, a.value))));
         }
-        QCOMPARE(inWindow.value(QStringLiteral("value")).toDouble(), std::isnan(b.value) ? 0 : b.value);
+        QCOMPARE(inWindow.value(QStringLiteral("raw")).toDouble(), std::isnan(b.value) ? 0 : b.value);
+        QCOMPARE(inWindow.value(QStringLiteral("value")).toDouble(), std::isnan(b.value) ? 0 : pooledWindow.zones[at].pooled);
         QCOMPARE(inWindow.value(QStringLiteral("zoneState")).toInt(), static_cast<int>(ZoneState::from(b.state)));
         QCOMPARE(inWindow.value(QStringLiteral("zoneName")).toString(), zoneText(band, lane, model::ZoneGrid{}));
         const double scaled = inWindow.value(QStringLiteral("scaled")).toDouble();
         QVERIFY(scaled >= 0 && scaled <= 1);
+        // Its colour: the palette's row from how sure the pooled value is, its step from the value.
+        if (!std::isnan(b.value)) {
+            namespace palette = model::palette;
+            const int row = inWindow.value(QStringLiteral("certaintyRow")).toInt();
+            QVERIFY(row >= 0 && row < palette::kLevels);
+            QCOMPARE(inWindow.value(QStringLiteral("colour")).toString(),
+                     QString::fromStdString(palette::toHex(palette::colour(row, palette::stepOf(scaled, row)))));
+        }
     }
     // Both maps share one colour scale: its labels run from its low to its high end.
     QCOMPARE(debrief.matchMap()->scaleLabels(), debrief.windowMap()->scaleLabels());
@@ -211,7 +239,7 @@ void DesktopTest::debriefMaps() {
     const auto tally = m_reference->matchTally("KB-2026-03", "losses");
     const model::ZoneGrid grid;
     const auto z = tally[static_cast<std::size_t>(grid.indexOf({3, 2}))];
-    QCOMPARE(debrief.matchMap()->zone(3, 2).value(QStringLiteral("value")).toDouble(),
+    QCOMPARE(debrief.matchMap()->zone(3, 2).value(QStringLiteral("raw")).toDouble(),
              static_cast<double>(z.num) / static_cast<double>(z.den));
     // An unknown match falls back to the latest.
     debrief.setMatchId(QStringLiteral("no-such-match"));
