@@ -65,6 +65,7 @@ void ZoneSeries::clear() {
     m_summaryStateText.clear();
     m_summaryCertainty.clear();
     m_summaryMatchText.clear();
+    m_summaryPooledText.clear();
     m_summaryEwmaText.clear();
     m_summaryCoachText.clear();
     m_focusSpans.clear();
@@ -235,6 +236,12 @@ void ZoneSeries::refresh() {
         header.wholePitchState = ZoneState::from(whole->state);
     }
     m_map->reset(std::move(header), zoneCells(zones, kind, domain, grid));
+    if (m_band > 0) {
+        const QVariantMap cell = m_map->zone(m_band, m_lane);
+        if (cell.value(QStringLiteral("hasValue")).toBool())
+            m_summaryPooledText = tr("On the map, pulled toward its neighbours: %1")
+                                      .arg(cell.value(QStringLiteral("valueText")).toString());
+    }
     emit changed();
 }
 

@@ -58,6 +58,9 @@ class ZoneSeries : public pitchloop::desktop::SessionClient {
     Q_PROPERTY(QString summaryCertainty READ summaryCertainty NOTIFY changed)
     /// "This match alone: 42.0% · n = 143" and "EWMA, λ 0.30: 41.8%" at the chosen match.
     Q_PROPERTY(QString summaryMatchText READ summaryMatchText NOTIFY changed)
+    /// "On the map, pulled toward its neighbours: 0.9": the zone's pooled value as the map
+    /// colours it (model/pooling.h); empty for the whole pitch or without data.
+    Q_PROPERTY(QString summaryPooledText READ summaryPooledText NOTIFY changed)
     Q_PROPERTY(QString summaryEwmaText READ summaryEwmaText NOTIFY changed)
     /// The judged window's value in the coach's words (model/wording.h); empty without one.
     Q_PROPERTY(QString summaryCoachText READ summaryCoachText NOTIFY changed)
@@ -103,6 +106,7 @@ public:
     QString summaryStateText() const { return m_summaryStateText; }
     QString summaryCertainty() const { return m_summaryCertainty; }
     QString summaryMatchText() const { return m_summaryMatchText; }
+    QString summaryPooledText() const { return m_summaryPooledText; }
     QString summaryEwmaText() const { return m_summaryEwmaText; }
     QString summaryCoachText() const { return m_summaryCoachText; }
     QVariantList focusSpans() const { return m_focusSpans; }
@@ -148,6 +152,7 @@ private:
     QString m_summaryStateText;
     QString m_summaryCertainty;
     QString m_summaryMatchText;
+    QString m_summaryPooledText;
     QString m_summaryEwmaText;
     QString m_summaryCoachText;
     QVariantList m_focusSpans;

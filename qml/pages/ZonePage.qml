@@ -163,6 +163,12 @@ Page {
                     color: Theme.textMuted
                 }
                 Label {
+                    objectName: "zonePooledText"
+                    visible: trend.summaryPooledText.length > 0
+                    text: trend.summaryPooledText
+                    color: Theme.textMuted
+                }
+                Label {
                     visible: !root.plainWords
                     text: trend.summaryEwmaText
                     color: Theme.textMuted

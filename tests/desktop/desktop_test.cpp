@@ -430,6 +430,9 @@ void DesktopTest::zoneSeries() {
     const auto* series = trend.series();
     QCOMPARE(series->rowCount(), kMatches);
     QCOMPARE(trend.map()->rowCount(), 30);
+    // The card names the value the map colours for the zone (pooled), beside its own.
+    QCOMPARE(trend.summaryPooledText(), QStringLiteral("On the map, pulled toward its neighbours: %1")
+                                            .arg(trend.map()->zone(5, 1).value(QStringLiteral("valueText")).toString()));
     const model::ZoneGrid grid;
     const auto zone = static_cast<std::size_t>(grid.indexOf({5, 1}));
     const auto ids = m_reference->seasonTallies("First team", "2026-27").matchIds;
