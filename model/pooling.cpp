@@ -109,6 +109,7 @@ PooledMap poolZones(const std::vector<ZoneCount>& zones, const ZoneGrid& grid, M
         const double priorShare = p.strength / total;
         const double n = neighbourDen[i], m0 = fit.averageDen;
         variance += priorShare * priorShare * s * n / ((n + m0) * (n + m0));
+        p.sd = std::sqrt(variance);
         if (rate && m > 0 && m < 1 && variance > 0 && variance < m * (1 - m)) {
             const double k = m * (1 - m) / variance - 1; // a Beta with this mean and variance
             p.interval = stats::betaSummary(m * k, (1 - m) * k, level).interval;

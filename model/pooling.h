@@ -42,6 +42,7 @@ struct PooledZone {
     double strength = 0;  ///< κ: what the neighbourhood counts for, in the den's units
     double pooled = std::numeric_limits<double>::quiet_NaN(); ///< (num + κμ) / (den + κ)
     stats::Interval interval{0, 0}; ///< equal-tailed, at the level asked (posterior)
+    double sd = std::numeric_limits<double>::quiet_NaN(); ///< the posterior's SD (with μ's noise)
     /// How sure the pooled value is: the interval's width as a share of `reference` (the
     /// map's colour range); 0 = exact. Drives the value-suppressing palette (palette.h).
     double spread = 0;

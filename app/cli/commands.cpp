@@ -1,6 +1,7 @@
 #include "commands.h"
 
 #include "common.h"
+#include "compare_verbs.h"
 #include "drills_verbs.h"
 #include "export_verbs.h"
 #include "focus_verbs.h"
@@ -412,6 +413,7 @@ int run(int argc, char** argv, std::ostream& out, std::ostream& err) {
     PlanVerbs planVerbs(app);
     ExportVerbs exportVerbs(app);
     MomentVerbs momentVerbs(app); // after ExportVerbs: it adds `export clips`
+    CompareVerbs compareVerbs(app);
 
     auto* metrics = app.add_subcommand("metrics", "List, show and add metric definitions");
     metrics->require_subcommand(1);
@@ -507,6 +509,7 @@ int run(int argc, char** argv, std::ostream& out, std::ostream& err) {
         if (focusVerbs.chosen()) return focusVerbs.run(g, out, err);
         if (planVerbs.chosen()) return planVerbs.run(g, out, err);
         if (momentVerbs.chosen()) return momentVerbs.run(g, out, err);
+        if (compareVerbs.chosen()) return compareVerbs.run(g, out, err);
         if (exportVerbs.chosen()) return exportVerbs.run(g, out, err);
         if (*metricsList) return cmdMetricsList(g, out);
         if (*metricsShow) return cmdMetricsShow(g, showId, out, err);
