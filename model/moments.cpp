@@ -203,6 +203,19 @@ MomentsResult storedMoments(const ClubRepository& repo, const MomentsRequest& re
     return out;
 }
 
+std::vector<Moment> storedMomentsIn(const ClubRepository& repo, const MetricSpec& metric, const ZoneGrid& grid,
+                                    const std::vector<Zone>& zones, const std::vector<std::string>& matchIds) {
+    std::vector<Moment> out;
+    for (const std::string& id : matchIds) {
+        const auto match = repo.loadMatch(id);
+        if (!match) continue;
+        for (Moment& m : matchMoments(*match, metric, grid, std::nullopt))
+            if (std::any_of(zones.begin(), zones.end(), [&](const Zone& z) { return z.band == m.band && z.lane == m.lane; }))
+                out.push_back(std::move(m));
+    }
+    return out;
+}
+
 std::string periodClock(double t) {
     const long s = std::lround(std::floor(std::max(0.0, t)));
     return twoDigits(s / 60) + ":" + twoDigits(s % 60);
@@ -280,6 +293,24 @@ std::string momentsCsv(const std::vector<Moment>& moments) {
                "," + csvField(m.what) + "," +
                csvField(playersText(m.players)) + "," + decimal(m.from.x, 1) + "," + decimal(m.from.y, 1) +
                "," + (m.to ? decimal(m.to->x, 1) : "") + "," + (m.to ? decimal(m.to->y, 1) : "") + "\r\n";
+    }
+    return out;
+}
+
+std::string reviewMomentsCsv(const std::vector<Moment>& before, const std::vector<Moment>& after) {
+    std::string out;
+    for (const auto& [side, moments] : {std::pair{"before", &before}, std::pair{"after", &after}}) {
+        const std::string csv = momentsCsv(*moments);
+        std::size_t line = 0;
+        bool header = true;
+        while (line < csv.size()) {
+            const std::size_t end = csv.find("\r\n", line);
+            const std::string row = csv.substr(line, end - line);
+            if (header && out.empty()) out += "side," + row + "\r\n";
+            else if (!header) out += std::string(side) + "," + row + "\r\n";
+            header = false;
+            line = end + 2;
+        }
     }
     return out;
 }

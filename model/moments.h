@@ -77,6 +77,15 @@ struct MomentsResult {
 /// An EWMA window weighs every match, so it has no list of its own and is refused.
 MomentsResult storedMoments(const ClubRepository& repo, const MomentsRequest& request);
 
+/// The moments of `metric` in any of `zones` of `grid` over the stored matches `matchIds`, in
+/// the order given (a review's baseline or its matches after the start).
+std::vector<Moment> storedMomentsIn(const ClubRepository& repo, const MetricSpec& metric, const ZoneGrid& grid,
+                                    const std::vector<Zone>& zones, const std::vector<std::string>& matchIds);
+
+/// A review's moments side by side as CSV: momentsCsv's columns after a first column `side`
+/// ("before" or "after").
+std::string reviewMomentsCsv(const std::vector<Moment>& before, const std::vector<Moment>& after);
+
 /// The clock in a period: "26:04" (minutes may pass 59: "61:30").
 std::string periodClock(double t);
 /// The match clock as football reads it (Laws of the Game, Law 7: halves of 45 minutes, extra

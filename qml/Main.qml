@@ -260,6 +260,7 @@ ApplicationWindow {
                 plainWords: root.plainWords
                 id: focusesPage
                 session: root.session
+                onOpenMoments: (metricId, band, lane, matchId) => root.openMoments(metricId, band, lane, matchId)
             }
             PlannerPage {
                 plainWords: root.plainWords

@@ -3,6 +3,8 @@
 #include "commands.h"
 #include "focus.h"
 #include "format.h"
+#include "moments.h"
+#include "exports.h"
 #include "sessions.h"
 #include "wording.h"
 
@@ -76,6 +78,9 @@ FocusVerbs::FocusVerbs(CLI::App& app) {
         ->check(CLI::IsMember({"worked", "partly", "no_change", "cant_tell"}));
     m_review->add_option("--by", m_by, "Who records the verdict");
     m_review->add_option("--note", m_note, "The coach's notes with the verdict");
+    m_review->add_option("--moments", m_momentsOut,
+                         "Also write the moments behind the baseline and the matches after, side by "
+                         "side, as CSV to this file (docs/moments.md)");
 }
 
 int FocusVerbs::run(const Globals& g, std::ostream& out, std::ostream& err) {
@@ -333,6 +338,18 @@ int FocusVerbs::runReview(ClubRepository& repo, std::ostream& out, std::ostream&
     r.trainingMinutes = held.heldMinutes;
     r.trainingNote = trainingNote(held, f->startDate, r.after.dates.back()) + " (the last match reviewed)";
     const std::string json = reviewToJson(r);
+    if (!m_momentsOut.empty()) {
+        const auto before = storedMomentsIn(repo, *metric, f->grid, f->zones, r.before.matchIds);
+        const auto after = storedMomentsIn(repo, *metric, f->grid, f->zones, r.after.matchIds);
+        try {
+            writeFileAtomically(m_momentsOut, reviewMomentsCsv(before, after));
+        } catch (const IoError& e) {
+            err << "error: " << e.what() << "\n";
+            return kExitBadInput;
+        }
+        err << "wrote " << before.size() << " moments before and " << after.size() << " after to "
+            << m_momentsOut << "\n";
+    }
     if (!m_verdict.empty()) {
         if (m_by.empty()) {
             err << "error: --verdict needs --by NAME (who records it)\n";

@@ -41,6 +41,7 @@ private:
     std::string m_start;
     int m_reviewAfter = 5;
     std::string m_reviewOn;
+    std::string m_momentsOut;
     std::string m_note;
     std::optional<double> m_minChange;
     std::int64_t m_focus = 0;

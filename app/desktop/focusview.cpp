@@ -1,4 +1,7 @@
 #include "focusview.h"
+#include <QFile>
+#include "exports.h"
+#include "moments.h"
 
 #include "appclock.h"
 #include "clubsession.h"
@@ -212,6 +215,9 @@ void FocusView::refreshList() {
 }
 
 void FocusView::clearDetail() {
+    m_momentsAtOpening.clear();
+    m_reviewBeforeIds.clear();
+    m_reviewAfterIds.clear();
     m_title.clear();
     m_zonesText.clear();
     m_phase = FocusPhase::Open;
@@ -299,6 +305,13 @@ void FocusView::refreshDetail() {
 
     const FocusEvidence evidence = readEvidence(f.evidence, settings.window.name());
     m_evidence->reset(evidence.zones, kind, settings.window.name(), f.grid);
+    if (!ownGrid && !f.zones.empty()) {
+        const bool whole = static_cast<int>(f.zones.size()) == f.grid.zoneCount();
+        m_momentsAtOpening = {{QStringLiteral("metricId"), qs(f.metric)},
+                              {QStringLiteral("band"), whole ? 0 : f.zones.front().band},
+                              {QStringLiteral("lane"), whole ? 0 : f.zones.front().lane},
+                              {QStringLiteral("matchId"), qs(f.openedAfterMatch)}};
+    }
     m_evidenceTitle = tr("Frozen %1 from %2 (%3); judged over %4")
                           .arg(compactDateText(evidence.frozenAt.substr(0, 10)), qs(evidence.matchId),
                                compactDateText(evidence.date), windowPhrase(settings.window));
@@ -339,6 +352,8 @@ void FocusView::refreshDetail() {
             r.trainingMinutes = reviewed.heldMinutes;
             r.trainingNote = trainingNote(reviewed, f.startDate, r.after.dates.back()) + " (the last match reviewed)";
             m_reviewJson = reviewToJson(r);
+            m_reviewBeforeIds = r.before.matchIds;
+            m_reviewAfterIds = r.after.matchIds;
             showReview(r, false);
             m_reviewSourceText = state == FocusState::DueForReview
                                      ? tr("Computed now from the club file. The review point is reached: record the staff's verdict.")
@@ -346,6 +361,35 @@ void FocusView::refreshDetail() {
         }
     }
     emit detailChanged();
+}
+
+bool FocusView::exportReviewMoments(const QUrl& file) {
+    ClubRepository* repo = repository();
+    const auto focus = repo && m_selectedId != 0 ? FocusStore(*repo).get(m_selectedId) : std::nullopt;
+    const MetricSpec* metric = focus ? session()->metricSpec(focus->metric) : nullptr;
+    const QString path = localPath(file);
+    auto done = [&](const QString& message) {
+        m_momentsMessage = message;
+        emit momentsExported();
+    };
+    if (!metric || !canExportReviewMoments()) {
+        done(tr("This focus has no review with matches before and after yet."));
+        return false;
+    }
+    if (path.isEmpty()) {
+        done(tr("Choose a file to write the moments to."));
+        return false;
+    }
+    try {
+        const auto before = storedMomentsIn(*repo, *metric, focus->grid, focus->zones, m_reviewBeforeIds);
+        const auto after = storedMomentsIn(*repo, *metric, focus->grid, focus->zones, m_reviewAfterIds);
+        writeFileAtomically(QFile::encodeName(path).toStdString(), reviewMomentsCsv(before, after));
+        done(tr("Wrote %1 moments before and %2 after to %3.").arg(before.size()).arg(after.size()).arg(path));
+        return true;
+    } catch (const std::exception& e) {
+        done(QString::fromStdString(e.what()));
+        return false;
+    }
 }
 
 void FocusView::showReview(const Review& r, bool stored) {

@@ -9,6 +9,8 @@
 #include <QString>
 #include <QStringList>
 #include <QVariantList>
+#include <QUrl>
+#include <QVariantMap>
 #include <QtQml/qqmlregistration.h>
 
 #include <cstdint>
@@ -60,6 +62,14 @@ class FocusView : public pitchloop::desktop::SessionClient {
     Q_PROPERTY(bool closed READ closed NOTIFY detailChanged)
     Q_PROPERTY(QString evidenceTitle READ evidenceTitle NOTIFY detailChanged)
     Q_PROPERTY(pitchloop::desktop::EvidenceListModel* evidence READ evidence CONSTANT)
+    /// Where the moments behind the evidence are: {metricId, band, lane, matchId} of the focus's
+    /// first zone (0, 0 for the whole pitch) at the match that opened it; empty when the focus is
+    /// on another grid than the club's.
+    Q_PROPERTY(QVariantMap momentsAtOpening READ momentsAtOpening NOTIFY detailChanged)
+    /// Whether the review computed now has matches before and after to list moments of.
+    Q_PROPERTY(bool canExportReviewMoments READ canExportReviewMoments NOTIFY detailChanged)
+    /// What the last moments export did ("Wrote 17 moments before and 11 after to …"), or why not.
+    Q_PROPERTY(QString momentsMessage READ momentsMessage NOTIFY momentsExported)
     Q_PROPERTY(pitchloop::desktop::DrillListModel* linked READ linked CONSTANT)
 
     // Its review
@@ -142,6 +152,9 @@ public:
     QString minutesText() const { return m_minutesText; }
     QString verdictText() const { return m_verdictText; }
     bool closed() const { return m_closed; }
+    bool canExportReviewMoments() const { return !m_reviewBeforeIds.empty() && !m_reviewAfterIds.empty(); }
+    QString momentsMessage() const { return m_momentsMessage; }
+    QVariantMap momentsAtOpening() const { return m_momentsAtOpening; }
     QString evidenceTitle() const { return m_evidenceTitle; }
     EvidenceListModel* evidence() const { return m_evidence; }
     DrillListModel* linked() const { return m_linked; }
@@ -216,6 +229,9 @@ public:
     /// Closes the chosen focus with the verdict form's choice, note and name, storing the
     /// review's numbers with it (FocusStore::close with reviewToJson).
     Q_INVOKABLE bool recordVerdict();
+    /// Writes the moments behind the review's baseline and its matches after the start, side by
+    /// side, as CSV (model/moments.h reviewMomentsCsv; the command line's review --moments).
+    Q_INVOKABLE bool exportReviewMoments(const QUrl& file);
 
     /// Starts opening a focus on one flagged zone (band 0, lane 0: the whole pitch) after a match.
     Q_INVOKABLE void openFromZone(const QString& metricId, int band, int lane, const QString& matchId);
@@ -233,6 +249,7 @@ public:
     Q_INVOKABLE bool confirmDraft();
 
 signals:
+    void momentsExported();
     void listChanged();
     void detailChanged();
     void verdictFormChanged();
@@ -267,6 +284,10 @@ private:
     int m_phase = 0;
     QString m_phaseText, m_openedText, m_reviewPointText, m_noteText, m_minutesText, m_verdictText;
     bool m_closed = false;
+    std::vector<std::string> m_reviewBeforeIds; ///< the review computed now: its baseline's matches
+    std::vector<std::string> m_reviewAfterIds;
+    QString m_momentsMessage;
+    QVariantMap m_momentsAtOpening;
     QString m_evidenceTitle;
     EvidenceListModel* m_evidence;
     DrillListModel* m_linked;

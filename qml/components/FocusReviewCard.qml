@@ -2,6 +2,7 @@ pragma ComponentBehavior: Bound
 import QtQuick
 import QtQuick.Controls
 import QtQuick.Layouts
+import QtQuick.Dialogs
 import Pitchloop
 
 // A focus's follow-up review: before and after with their intervals, the change and its test,
@@ -211,5 +212,37 @@ Card {
             color: Theme.error
             wrapMode: Text.WordWrap
         }
+        RowLayout {
+            visible: root.view.canExportReviewMoments
+            Layout.fillWidth: true
+            spacing: Theme.gap
+            Button {
+                objectName: "reviewMomentsButton"
+                text: qsTr("Moments before and after (CSV)…")
+                ToolTip.visible: hovered
+                ToolTip.delay: 400
+                ToolTip.text: qsTr("Every moment behind the baseline's and the after matches' numbers, side by side, to watch again")
+                onClicked: {
+                    momentsDialog.selectedFile = "review-moments.csv"
+                    momentsDialog.open()
+                }
+            }
+            Label {
+                Layout.fillWidth: true
+                text: root.view.momentsMessage
+                color: Theme.textMuted
+                font.pixelSize: Theme.fontSmall
+                elide: Text.ElideMiddle
+            }
+        }
+    }
+
+    FileDialog {
+        id: momentsDialog
+        title: qsTr("Save the review's moments as CSV")
+        fileMode: FileDialog.SaveFile
+        defaultSuffix: "csv"
+        nameFilters: [qsTr("CSV files (*.csv)")]
+        onAccepted: root.view.exportReviewMoments(selectedFile)
     }
 }

@@ -15,6 +15,9 @@ Page {
     /// Plain sentences for the coach, or the analyst's numbers (Main.qml, remembered).
     property bool plainWords: true
 
+    /// The moments behind a zone's number (the zone page's second tab).
+    signal openMoments(string metricId, int band, int lane, string matchId)
+
     /// Starts opening a focus on a zone (band 0, lane 0: the whole pitch) flagged after a match.
     function openFromZone(metricId: string, band: int, lane: int, matchId: string) {
         board.openFromZone(metricId, band, lane, matchId)
@@ -215,6 +218,13 @@ Page {
                                 delegate: EvidenceRowDelegate {
                                     Layout.fillWidth: true
                                 }
+                            }
+                            Button {
+                                objectName: "evidenceMomentsButton"
+                                visible: board.momentsAtOpening.metricId !== undefined
+                                text: qsTr("The moments behind it…")
+                                onClicked: root.openMoments(board.momentsAtOpening.metricId, board.momentsAtOpening.band,
+                                                            board.momentsAtOpening.lane, board.momentsAtOpening.matchId)
                             }
                         }
 

@@ -7,6 +7,7 @@
 
 #include <catch2/catch.hpp>
 #include <filesystem>
+#include <fstream>
 #include <nlohmann/json.hpp>
 
 namespace fs = std::filesystem;
@@ -106,4 +107,39 @@ TEST_CASE("export clips writes a WebVTT chapter file", "[cli][moments]") {
     CHECK(contains(r.err, "of 11 moments to"));
     REQUIRE(fs::exists(out));
     CHECK(fs::file_size(out) > 200);
+}
+
+TEST_CASE("review --moments writes the baseline's and the after matches' moments side by side", "[cli][moments]") {
+    fs::path dir = freshTempDir("review-moments-cli");
+    const std::string db = (dir / "club.sqlite").string();
+    std::vector<std::string> args{"--db", db, "ingest"};
+    for (int i = 1; i <= 16; ++i) {
+        char name[48];
+        std::snprintf(name, sizeof name, "sample-club/matches/KB-2026-%02d.json", i);
+        args.push_back(sourcePath(name).string());
+    }
+    REQUIRE(cli(args).code == 0);
+    REQUIRE(cli({"--db", db, "focus", "open", "--match", "KB-2026-08", "--metric", "pre_shot_passes_against",
+                 "--zone", "2,5", "--by", "T. Test"}).code == 0);
+    const std::string file = (dir / "review-moments.csv").string();
+    const auto r = cli({"--db", db, "review", "1", "--format", "json", "--moments", file});
+    INFO(r.err);
+    REQUIRE(r.code == 0);
+    const auto j = nlohmann::json::parse(r.out);
+    std::ifstream in(file, std::ios::binary);
+    std::string line;
+    long before = 0, after = 0, rows = 0;
+    while (std::getline(in, line)) {
+        if (rows++ == 0) {
+            CHECK(line.rfind("side,match_id,", 0) == 0);
+            continue;
+        }
+        before += line.rfind("before,", 0) == 0;
+        after += line.rfind("after,", 0) == 0;
+    }
+    // A per-match count: one row per pass behind the number, so the rows add up to the review's
+    // own numerators.
+    CHECK(before == j["before"]["num"].get<long>());
+    CHECK(after == j["after"]["num"].get<long>());
+    CHECK(before + after == rows - 1);
 }

@@ -239,6 +239,12 @@ void FocusViewTest::openFromZone() {
     QCOMPARE(view.evidence()->rowCount(), 3);
     QCOMPARE(view.linked()->rowCount(), 2);
     QCOMPARE(role(*view.evidence(), 1, "zoneText").toString(), QStringLiteral("Our left-back area (B2·L5)"));
+    // Its moments are one click away: the zone at the match that opened it.
+    const QVariantMap moments = view.momentsAtOpening();
+    QCOMPARE(moments.value(QStringLiteral("metricId")).toString(), QString::fromStdString(kMetric));
+    QCOMPARE(moments.value(QStringLiteral("band")).toInt(), 2);
+    QCOMPARE(moments.value(QStringLiteral("lane")).toInt(), 5);
+    QCOMPARE(moments.value(QStringLiteral("matchId")).toString(), QStringLiteral("KB-2026-08"));
 }
 
 void FocusViewTest::listAndTrainingMinutes() {
@@ -338,6 +344,19 @@ void FocusViewTest::reviewAgainstModel() {
     QVERIFY(view.beforeText().contains(QStringLiteral("%1 in %2 matches").arg(r.before.totalNum).arg(r.before.matchIds.size())));
     QVERIFY(view.beforeText().contains(QString::fromStdString(r.baselineNote)));
     QVERIFY(view.afterText().contains(QString::fromStdString(r.after.matchIds.front())));
+    // The moments behind both windows, side by side: as many rows as the review's numerators
+    // (a per-match count counts one pass a row).
+    QVERIFY(view.canExportReviewMoments());
+    QTemporaryDir dir;
+    const QString csv = dir.filePath(QStringLiteral("moments.csv"));
+    QVERIFY2(view.exportReviewMoments(QUrl::fromLocalFile(csv)), qPrintable(view.momentsMessage()));
+    QCOMPARE(view.momentsMessage(), QStringLiteral("Wrote %1 moments before and %2 after to %3.")
+                                        .arg(r.before.totalNum).arg(r.after.totalNum).arg(csv));
+    QFile file(csv);
+    QVERIFY(file.open(QIODevice::ReadOnly));
+    const QByteArray bytes = file.readAll();
+    QCOMPARE(bytes.count("\r\nbefore,"), static_cast<qsizetype>(r.before.totalNum));
+    QCOMPARE(bytes.count("\r\nafter,"), static_cast<qsizetype>(r.after.totalNum));
     QVERIFY(view.caveatText().contains(QStringLiteral("cannot show that the drills caused")));
     QVERIFY(!view.testText().isEmpty());
     QVERIFY(view.beliefText().contains(QStringLiteral("Target at most")));
