@@ -970,6 +970,24 @@ SeasonTallies ClubRepository::seasonTallies(const std::string& squad, const std:
     return out;
 }
 
+std::vector<MatchExposure> ClubRepository::seasonExposures(const std::string& squad,
+                                                         const std::string& season) const {
+    return guarded("cannot read the season's minutes and passes", [&] {
+        std::vector<MatchExposure> out;
+        SQLite::Statement q(*m_db,
+                            "SELECT (SELECT COALESCE(SUM(p.length_s), 0) FROM period p WHERE p.match_id = m.id), "
+                            "(SELECT COUNT(*) FROM event e WHERE e.match_id = m.id AND e.side = 'opp' AND "
+                            "e.type = 'pass') FROM match m JOIN season se ON se.id = m.season_id "
+                            "JOIN squad sq ON sq.id = se.squad_id WHERE sq.name = ? AND se.name = ? "
+                            "ORDER BY m.date, m.code");
+        q.bind(1, squad);
+        q.bind(2, season);
+        while (q.executeStep())
+            out.push_back({q.getColumn(0).getDouble() / 60, q.getColumn(1).getInt64()});
+        return out;
+    });
+}
+
 SeasonTallies ClubRepository::seasonTallies(const std::string& squad,
                                             const std::string& season) const {
     const ZoneGrid grid = tallyGrid();

@@ -2,6 +2,7 @@
 // The club file: one SQLite database per club holding squads, seasons, matches, their events,
 // metric definitions and per-match zone tallies (docs/storage.md).
 
+#include "countscale.h"
 #include "metricengine.h"
 #include "metricspec.h"
 #include "status.h"
@@ -128,6 +129,9 @@ public:
     /// The season of a match up to its last stored match: match ids and dates in date order,
     /// and dense tallies per metric; `focal` is set to the match's index.
     SeasonTallies seasonTallies(const std::string& squad, const std::string& season) const;
+    /// Each match's minutes played and the opponent's passes, in seasonTallies' match order
+    /// (for count maps read per 90 minutes or per 100 of their passes; countscale.h).
+    std::vector<MatchExposure> seasonExposures(const std::string& squad, const std::string& season) const;
     /// The same on `grid`: the stored tallies when it is the club's grid, else counted from
     /// the stored events (a focus opened on an earlier grid is reviewed on its own zones).
     SeasonTallies seasonTallies(const std::string& squad, const std::string& season,

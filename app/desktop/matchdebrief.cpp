@@ -55,6 +55,13 @@ void MatchDebrief::setMetricId(const QString& id) {
     update();
 }
 
+void MatchDebrief::setCountScale(const QString& scale) {
+    if (scale == m_countScale || !countScaleFromString(scale.toStdString())) return;
+    m_countScale = scale;
+    emit countScaleChanged();
+    update();
+}
+
 void MatchDebrief::selectZone(int band, int lane) {
     if (band == m_selectedBand && lane == m_selectedLane) return;
     m_selectedBand = band;
@@ -160,11 +167,29 @@ void MatchDebrief::refresh() {
         inMatch.push_back(a);
         inWindow.push_back(b);
     }
+    // What a count map is read per: the windows' exposures come from the season's matches.
+    m_scalable = kind == MetricKind::Count;
+    const CountScale scale = countScaleFromString(m_countScale.toStdString()).value_or(CountScale::PerMatch);
+    MapScale matchScale, windowScale;
+    if (m_scalable && scale != CountScale::PerMatch) {
+        if (const std::string key = season->squad() + '/' + season->season() + '/' +
+                                    std::to_string(season->tallies().matchIds.size());
+            key != m_exposuresFor) {
+            m_exposures = s->repository()->seasonExposures(season->squad(), season->season());
+            m_exposuresFor = key;
+        }
+        matchScale = {scale, exposurePerMatch(m_exposures, *focal, windows.match, scale),
+                      season->find(*focal, metric->id, 0, 0, windows.match)};
+        windowScale = {scale, exposurePerMatch(m_exposures, *focal, windows.judged, scale),
+                       season->find(*focal, metric->id, 0, 0, windows.judged)};
+    }
+    m_scaleText = QString::fromStdString(scaleWords(m_scalable ? scale : CountScale::PerMatch));
     // The scale spans the values the maps colour: each zone pooled toward its neighbours.
-    std::vector<double> values = pooledValues(inMatch, kind, grid);
-    for (const double v : pooledValues(inWindow, kind, grid)) values.push_back(v);
-    const ScaleDomain domain = scaleDomain(kind, values);
-    const QStringList labels = scaleLabels(kind, domain);
+    std::vector<double> values = pooledValues(inMatch, kind, grid, matchScale);
+    for (const double v : pooledValues(inWindow, kind, grid, windowScale)) values.push_back(v);
+    const MetricKind shown = matchScale.appliesTo(kind) ? scaledKind(scale) : kind;
+    const ScaleDomain domain = scaleDomain(shown, values);
+    const QStringList labels = scaleLabels(shown, domain);
     const QString level = levelText(s->flagSettings().level);
     const auto header = [&](const QString& title, const QString& subtitle, const Window& w) {
         ZoneMapModel::Header h{title, subtitle, {}, ZoneState::NoTarget, labels, level};
@@ -178,12 +203,12 @@ void MatchDebrief::refresh() {
     m_matchMap->reset(header(tr("This match"),
                              QStringLiteral("%1 v %2").arg(m_matchId, QString::fromStdString(match->opponent)),
                              windows.match),
-                      zoneCells(inMatch, kind, domain, grid));
+                      zoneCells(inMatch, kind, domain, grid, matchScale));
     m_windowMap->reset(header(tr("%1 — judged").arg(m_windowText),
                               QStringLiteral("%1 … %2").arg(QString::fromStdString(season->tallies().matchIds[first]),
                                                             m_matchId),
                               windows.judged),
-                       zoneCells(inWindow, kind, domain, grid));
+                       zoneCells(inWindow, kind, domain, grid, windowScale));
 
     if (m_hasTargets) {
         const QString phrase = windowPhrase(windows.judged);

@@ -2,6 +2,7 @@
 // A match judged against the season's targets (the debrief page): one metric's zones in this
 // match and over the judged window, and every slipped or watched target, most certain first.
 
+#include "countscale.h"
 #include "sessionclient.h"
 
 #include <QString>
@@ -26,6 +27,13 @@ class MatchDebrief : public pitchloop::desktop::SessionClient {
     QML_ELEMENT
     Q_PROPERTY(QString matchId READ matchId WRITE setMatchId NOTIFY matchIdChanged)
     Q_PROPERTY(QString metricId READ metricId WRITE setMetricId NOTIFY metricIdChanged)
+    /// What a count metric's maps are read per: "match", "per90", "per_opponent_passes" or
+    /// "share" (model/countscale.h); other metrics ignore it.
+    Q_PROPERTY(QString countScale READ countScale WRITE setCountScale NOTIFY countScaleChanged)
+    /// Whether the metric is a per-match count (the scale choice applies).
+    Q_PROPERTY(bool scalable READ scalable NOTIFY changed)
+    /// "a match", "per 90 minutes", ...: what the maps' values are, for their key.
+    Q_PROPERTY(QString scaleText READ scaleText NOTIFY changed)
     /// The zone picked on both maps: the most certain flag of the shown metric when the match or
     /// metric changes, else what the user picks; (0, 0) for none.
     Q_PROPERTY(int selectedBand READ selectedBand NOTIFY selectionChanged)
@@ -57,6 +65,10 @@ public:
     void setMatchId(const QString& id);
     QString metricId() const { return m_metricId; }
     void setMetricId(const QString& id);
+    QString countScale() const { return m_countScale; }
+    void setCountScale(const QString& scale);
+    bool scalable() const { return m_scalable; }
+    QString scaleText() const { return m_scaleText; }
     int selectedBand() const { return m_selectedBand; }
     int selectedLane() const { return m_selectedLane; }
     Q_INVOKABLE void selectZone(int band, int lane);
@@ -89,6 +101,7 @@ public:
     PitchGeometry* geometry() const { return m_geometry; }
 
 signals:
+    void countScaleChanged();
     void matchIdChanged();
     void metricIdChanged();
     void selectionChanged();
@@ -107,6 +120,11 @@ private:
 
     QString m_matchId;
     QString m_metricId;
+    QString m_countScale = QStringLiteral("match");
+    bool m_scalable = false;
+    QString m_scaleText;
+    std::string m_exposuresFor; ///< squad/season of m_exposures
+    std::vector<pitchloop::model::MatchExposure> m_exposures;
     int m_selectedBand = 0;
     int m_selectedLane = 0;
     QString m_selectionFor; ///< match and metric the selection was made for

@@ -13,32 +13,48 @@ using namespace pitchloop::model;
 
 namespace {
 
-PooledMap poolStatusZones(const std::vector<const ZoneStatus*>& statuses, MetricKind kind, const ZoneGrid& grid,
-                          double reference) {
+/// The zones' effective counts on the map's scale (as they are unless a count scale applies).
+std::vector<ZoneCount> scaledCounts(const std::vector<const ZoneStatus*>& statuses, MetricKind kind,
+                                    const MapScale& scale) {
     std::vector<ZoneCount> counts;
     counts.reserve(statuses.size());
-    for (const ZoneStatus* s : statuses) counts.push_back({s->band, s->lane, s->sum.effNum, s->sum.effDen});
+    for (const ZoneStatus* s : statuses)
+        counts.push_back(scale.appliesTo(kind) ? scaledCount(*s, scale.wholePitch ? *scale.wholePitch : *s,
+                                                             scale.scale, scale.exposure)
+                                               : ZoneCount{s->band, s->lane, s->sum.effNum, s->sum.effDen});
+    return counts;
+}
+
+MetricKind mapKind(MetricKind kind, const MapScale& scale) {
+    return scale.appliesTo(kind) ? scaledKind(scale.scale) : kind;
+}
+
+PooledMap poolStatusZones(const std::vector<const ZoneStatus*>& statuses, MetricKind kind, const ZoneGrid& grid,
+                          double reference, const MapScale& scale) {
     const double level = statuses.empty() ? 0.9 : statuses.front()->level;
-    return poolZones(counts, grid, kind, level, reference);
+    return poolZones(scaledCounts(statuses, kind, scale), grid, mapKind(kind, scale), level, reference);
 }
 
 } // namespace
 
 std::vector<double> pooledValues(const std::vector<const ZoneStatus*>& statuses, MetricKind kind,
-                                 const ZoneGrid& grid) {
+                                 const ZoneGrid& grid, const MapScale& scale) {
     std::vector<double> out;
-    const PooledMap map = poolStatusZones(statuses, kind, grid, 1.0);
+    const PooledMap map = poolStatusZones(statuses, kind, grid, 1.0, scale);
     for (std::size_t i = 0; i < statuses.size(); ++i)
         out.push_back(std::isnan(statuses[i]->value) ? std::nan("") : map.zones[i].pooled);
     return out;
 }
 
 std::vector<ZoneCell> zoneCells(const std::vector<const ZoneStatus*>& statuses, MetricKind kind,
-                                const ScaleDomain& domain, const ZoneGrid& grid) {
+                                const ScaleDomain& domain, const ZoneGrid& grid, const MapScale& scale) {
     std::vector<ZoneCell> out;
     out.reserve(statuses.size());
     const long minSample = defaultMinSample(kind);
-    const PooledMap pooled = poolStatusZones(statuses, kind, grid, domain.high - domain.low);
+    const PooledMap pooled = poolStatusZones(statuses, kind, grid, domain.high - domain.low, scale);
+    const MetricKind shown = mapKind(kind, scale);
+    const QString per = scale.appliesTo(kind) ? QStringLiteral(" ") + QString::fromStdString(scaleWords(scale.scale))
+                                              : QString();
     for (std::size_t i = 0; i < statuses.size(); ++i) {
         const ZoneStatus* s = statuses[i];
         const PooledZone& p = pooled.zones[i];
@@ -47,7 +63,7 @@ std::vector<ZoneCell> zoneCells(const std::vector<const ZoneStatus*>& statuses, 
         c.lane = s->lane;
         c.zoneName = zoneText(s->band, s->lane, grid);
         c.hasValue = !std::isnan(s->value) && !std::isnan(p.pooled);
-        c.raw = c.hasValue ? s->value : 0;
+        c.raw = !c.hasValue ? 0 : scale.appliesTo(kind) && p.den > 0 ? p.num / p.den : s->value;
         c.value = c.hasValue ? p.pooled : 0;
         c.scaled = c.hasValue ? domain.position(p.pooled) : 0;
         c.certaintyRow = c.hasValue ? palette::levelOf(p.spread) : palette::kLevels - 1;
@@ -58,10 +74,10 @@ std::vector<ZoneCell> zoneCells(const std::vector<const ZoneStatus*>& statuses, 
         // Counts are per match whatever the window; shares and exposures rest on their items.
         c.thin = c.hasValue && kind != MetricKind::Count &&
                  s->sum.den < static_cast<double>(s->target ? s->target->minSample : minSample);
-        c.valueText = valueText(kind, c.hasValue ? p.pooled : s->value);
+        c.valueText = valueText(shown, c.hasValue ? p.pooled : s->value);
         c.sampleText = sampleText(kind, s->sum, s->window);
-        c.intervalText = c.hasValue ? intervalText(kind, p.interval) : QString();
-        c.rawText = c.hasValue ? QStringLiteral("This zone alone: %1 · %2").arg(valueText(kind, s->value), c.sampleText)
+        c.intervalText = c.hasValue ? intervalText(shown, p.interval) : QString();
+        c.rawText = c.hasValue ? QStringLiteral("This zone alone: %1%2 · %3").arg(valueText(shown, c.raw), per, c.sampleText)
                                : QString();
         c.targetText = targetText(kind, s->target);
         c.state = ZoneState::from(s->state);

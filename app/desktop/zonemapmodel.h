@@ -2,6 +2,7 @@
 // One metric's zones in one window, for a pitch heat map: value, where it sits on the colour
 // scale, sample, interval, target and state, all as display-ready roles.
 
+#include "countscale.h"
 #include "display.h"
 #include "status.h"
 
@@ -44,14 +45,28 @@ struct ZoneCell {
 /// colour scale. Each value is pooled toward its neighbours and the whole pitch on the statuses'
 /// effective counts (model/pooling.h); the raw value is kept for the hover. Zones come in grid
 /// order (band-major).
+/// What a count map is read per (model/countscale.h): the scale, the window's exposure per
+/// match in its unit, and the whole pitch's status in the same window (for shares). The default
+/// reads every metric as it is.
+struct MapScale {
+    model::CountScale scale = model::CountScale::PerMatch;
+    double exposure = 1;
+    const model::ZoneStatus* wholePitch = nullptr;
+    /// The scale applies to per-match counts only, and a share needs the whole pitch.
+    bool appliesTo(model::MetricKind kind) const {
+        return kind == model::MetricKind::Count && scale != model::CountScale::PerMatch &&
+               (scale != model::CountScale::ShareOfTotal || wholePitch != nullptr);
+    }
+};
+
 /// The values zoneCells colours (each zone pooled toward its neighbours), for the colour scale's
 /// domain; NaN for zones without data.
 std::vector<double> pooledValues(const std::vector<const model::ZoneStatus*>& statuses,
-                                 model::MetricKind kind, const model::ZoneGrid& grid);
+                                 model::MetricKind kind, const model::ZoneGrid& grid, const MapScale& scale = {});
 
 std::vector<ZoneCell> zoneCells(const std::vector<const model::ZoneStatus*>& statuses,
                                 model::MetricKind kind, const ScaleDomain& domain,
-                                const model::ZoneGrid& grid);
+                                const model::ZoneGrid& grid, const MapScale& scale = {});
 
 /// The zones of one metric in one window (the whole pitch is a property, not a row).
 class ZoneMapModel : public QAbstractListModel {

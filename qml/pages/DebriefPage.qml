@@ -141,6 +141,26 @@ Page {
                 currentIndex: debrief.metricRow
                 onActivated: debrief.metricId = currentValue
             }
+            // A count's maps read per match, per 90 minutes, per 100 of their passes or as a share.
+            ComboBox {
+                id: scaleChoice
+                objectName: "debriefScale"
+                visible: debrief.scalable
+                Layout.preferredWidth: 230
+                textRole: "text"
+                valueRole: "value"
+                model: [
+                    { text: qsTr("a match"), value: "match" },
+                    { text: qsTr("per 90 minutes"), value: "per90" },
+                    { text: qsTr("per 100 of their passes"), value: "per_opponent_passes" },
+                    { text: qsTr("share of the pitch's total"), value: "share" }
+                ]
+                currentIndex: Math.max(0, indexOfValue(debrief.countScale))
+                onActivated: debrief.countScale = currentValue
+                ToolTip.visible: hovered
+                ToolTip.delay: 400
+                ToolTip.text: qsTr("What the maps show per; the flags always judge the count a match against its target")
+            }
             Item { Layout.fillWidth: true }
             // The match's debrief to print or share, and its numbers for a spreadsheet.
             Button {
@@ -202,7 +222,8 @@ Page {
             Layout.fillWidth: true
             Legend {
                 Layout.fillWidth: true
-                title: qsTr("%1, both maps").arg(debrief.metricName)
+                title: debrief.scalable ? qsTr("%1 %2, both maps").arg(debrief.metricName).arg(debrief.scaleText)
+                                        : qsTr("%1, both maps").arg(debrief.metricName)
                 labels: debrief.matchMap.scaleLabels
             }
             Button {

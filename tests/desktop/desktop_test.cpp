@@ -83,6 +83,7 @@ private slots:
     void metricList();
     void debriefMaps();
     void debriefList();
+    void debriefCountScales();
     void appAndCommandLineSayTheSame();
     void debriefExportsFromThePage();
     void seasonOverview();
@@ -244,6 +245,43 @@ void DesktopTest::debriefMaps() {
     // An unknown match falls back to the latest.
     debrief.setMatchId(QStringLiteral("no-such-match"));
     QCOMPARE(debrief.matchId(), QStringLiteral("KB-2026-07"));
+}
+
+void DesktopTest::debriefCountScales() {
+    MatchDebrief debrief;
+    const auto matchTester = watch(debrief.matchMap());
+    debrief.setSession(&m_session);
+    debrief.setMetricId(QStringLiteral("losses"));
+    debrief.setMatchId(QStringLiteral("KB-2026-03"));
+    QVERIFY(debrief.scalable());
+    QCOMPARE(debrief.scaleText(), QStringLiteral("a match"));
+    const auto tally = m_reference->matchTally("KB-2026-03", "losses");
+    const model::ZoneGrid grid;
+    const auto zone = tally[static_cast<std::size_t>(grid.indexOf({3, 2}))];
+    long total = 0;
+    for (const auto& z : tally) total += z.num;
+    // Per 100 of their passes: this match's count over its opponent passes (the club file's
+    // events, as model::ClubRepository::seasonExposures counts them).
+    const auto exposures = m_reference->seasonExposures("First team", "2026-27");
+    const auto ids = m_reference->seasonTallies("First team", "2026-27").matchIds;
+    const auto at = static_cast<std::size_t>(std::find(ids.begin(), ids.end(), "KB-2026-03") - ids.begin());
+    debrief.setCountScale(QStringLiteral("per_opponent_passes"));
+    QCOMPARE(debrief.scaleText(), QStringLiteral("per 100 of their passes"));
+    QCOMPARE(debrief.matchMap()->zone(3, 2).value(QStringLiteral("raw")).toDouble(),
+             static_cast<double>(zone.num) / (static_cast<double>(exposures[at].opponentPasses) / 100));
+    QVERIFY(debrief.matchMap()->zone(3, 2).value(QStringLiteral("rawText")).toString().contains(
+        QStringLiteral("per 100 of their passes")));
+    // A share of the pitch's total: the zone's losses of all the match's losses.
+    debrief.setCountScale(QStringLiteral("share"));
+    QCOMPARE(debrief.matchMap()->zone(3, 2).value(QStringLiteral("raw")).toDouble(),
+             static_cast<double>(zone.num) / static_cast<double>(total));
+    QVERIFY(debrief.matchMap()->zone(3, 2).value(QStringLiteral("valueText")).toString().endsWith(QLatin1Char('%')));
+    // An unknown scale is refused; a rate metric ignores the choice.
+    debrief.setCountScale(QStringLiteral("per minute"));
+    QCOMPARE(debrief.countScale(), QStringLiteral("share"));
+    debrief.setMetricId(QStringLiteral("regain_5s"));
+    QVERIFY(!debrief.scalable());
+    QCOMPARE(debrief.scaleText(), QStringLiteral("a match"));
 }
 
 void DesktopTest::debriefList() {
