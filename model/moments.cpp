@@ -5,6 +5,7 @@
 #include <algorithm>
 #include <cmath>
 #include <cstdio>
+#include <map>
 
 namespace pitchloop::model {
 
@@ -30,11 +31,20 @@ std::string resultWord(Result r) {
     return {};
 }
 
-/// "our pass (7)", "their shot (9), saved".
-std::string eventWords(const Event& e) {
+/// Our players' names from the squad list, by id: "7" → "7 A. Example".
+using Names = std::map<std::string, std::string, std::less<>>;
+
+std::string playerLabel(const Event& e, const Names& names) {
+    if (e.side == Side::Us)
+        if (const auto it = names.find(e.player); it != names.end()) return it->second;
+    return e.player;
+}
+
+/// "our pass (7)", "their shot (9), saved"; our players named when the squad list knows them.
+std::string eventWords(const Event& e, const Names& names) {
     std::string s = std::string(e.side == Side::Us ? "our " : "their ") +
                     (e.type == EventType::Out ? std::string("ball out") : words(toString(e.type)));
-    if (!e.player.empty()) s += " (" + e.player + ")";
+    if (!e.player.empty()) s += " (" + playerLabel(e, names) + ")";
     if (const std::string r = resultWord(e.result); !r.empty()) s += ", " + r;
     return s;
 }
@@ -78,7 +88,17 @@ std::string_view toString(MomentCount c) {
 }
 
 std::vector<Moment> matchMoments(const Match& match, const MetricSpec& spec, const ZoneGrid& grid,
-                                 std::optional<Zone> zone) {
+                                 std::optional<Zone> zone, const std::vector<Player>& squadList) {
+    Names names;
+    for (const Player& p : squadList) names[p.number] = p.number + " " + p.name;
+    auto note = [&](Moment& m, const Event& e) {
+        addPlayer(m.players, e.player);
+        if (e.side == Side::Us && !e.player.empty() &&
+            std::find(m.ours.begin(), m.ours.end(), e.player) == m.ours.end()) {
+            m.ours.push_back(e.player);
+            m.ourNames.push_back(playerLabel(e, names));
+        }
+    };
     const MatchFacts facts(match);
     const auto& events = match.events;
     const bool followedBy = spec.success.kind == SuccessSpec::Kind::FollowedBy;
@@ -104,14 +124,14 @@ std::vector<Moment> matchMoments(const Match& match, const MetricSpec& spec, con
             const Event& last = events[*it.lastEvent];
             m.startT = last.t;
             m.what = std::string(last.side == Side::Us ? "we lost the ball" : "they lost the ball") +
-                     " (" + (last.player.empty() ? "" : last.player + "'s ") + words(toString(last.type)) +
-                     ") to " + eventWords(e);
-            addPlayer(m.players, last.player);
-            addPlayer(m.players, e.player);
+                     " (" + (last.player.empty() ? "" : playerLabel(last, names) + "'s ") + words(toString(last.type)) +
+                     ") to " + eventWords(e, names);
+            note(m, last);
+            note(m, e);
             m.to = e.at;
         } else {
-            m.what = eventWords(e);
-            addPlayer(m.players, e.player);
+            m.what = eventWords(e, names);
+            note(m, e);
             m.to = e.to;
         }
         if (it.exposure) {
@@ -130,8 +150,8 @@ std::vector<Moment> matchMoments(const Match& match, const MetricSpec& spec, con
                 m.answerAfterS = answer.t - e.t;
                 m.endT = std::max(e.t, answer.t);
                 m.what += it.hit.index == it.event ? " (itself the answer)"
-                                                   : " → " + eventWords(answer) + " after " + seconds(*m.answerAfterS);
-                addPlayer(m.players, answer.player);
+                                                   : " → " + eventWords(answer, names) + " after " + seconds(*m.answerAfterS);
+                note(m, answer);
             } else if (it.hit.outcome == WindowOutcome::Censored) {
                 m.what += " → the period ended within " + within +
                           (it.inDen ? " (counted as not answered)" : ": not counted");
@@ -147,6 +167,17 @@ std::vector<Moment> matchMoments(const Match& match, const MetricSpec& spec, con
         return a.period != b.period ? a.period < b.period : a.t < b.t;
     });
     return out;
+}
+
+bool involves(const Moment& m, const std::string& number) {
+    return std::find(m.ours.begin(), m.ours.end(), number) != m.ours.end();
+}
+
+bool involves(const Moment& m, Unit unit, const std::vector<Player>& squadList) {
+    return std::any_of(m.ours.begin(), m.ours.end(), [&](const std::string& number) {
+        const auto p = std::find_if(squadList.begin(), squadList.end(), [&](const Player& x) { return x.number == number; });
+        return p != squadList.end() && inUnit(p->position, unit);
+    });
 }
 
 MomentsResult storedMoments(const ClubRepository& repo, const MomentsRequest& request) {
@@ -176,6 +207,12 @@ MomentsResult storedMoments(const ClubRepository& repo, const MomentsRequest& re
                       std::to_string(grid.lanes()) + " lanes)";
         return out;
     }
+    const std::vector<Player> squadList = repo.squadList(where->first);
+    if (request.unit && squadList.empty()) {
+        out.problem = "the squad list of " + where->first +
+                      " is empty: give the players' positions to pick moments by " + unitWords(*request.unit);
+        return out;
+    }
     std::vector<MatchSummary> season;
     for (auto& m : repo.matches())
         if (m.squad == where->first && m.season == where->second) season.push_back(std::move(m));
@@ -188,7 +225,7 @@ MomentsResult storedMoments(const ClubRepository& repo, const MomentsRequest& re
     for (std::size_t i = first; i <= focal && i < season.size(); ++i) {
         const auto match = repo.loadMatch(season[i].id);
         if (!match) continue;
-        auto moments = matchMoments(*match, *metric, grid, request.zone);
+        auto moments = matchMoments(*match, *metric, grid, request.zone, squadList);
         for (const Moment& m : moments) {
             if (m.count == MomentCount::Success) ++out.num;
             if (m.count == MomentCount::Exposure ||
@@ -196,6 +233,11 @@ MomentsResult storedMoments(const ClubRepository& repo, const MomentsRequest& re
                 ++out.den;
         }
         if (metric->per == MetricSpec::Per::Match && zonesKnownOn(match->info, grid)) ++out.den;
+        out.allMoments += static_cast<long>(moments.size());
+        std::erase_if(moments, [&](const Moment& m) {
+            return (request.player && !involves(m, *request.player)) ||
+                   (request.unit && !involves(m, *request.unit, squadList));
+        });
         out.moments.insert(out.moments.end(), std::make_move_iterator(moments.begin()),
                            std::make_move_iterator(moments.end()));
         out.matches.push_back(season[i]);
@@ -274,6 +316,12 @@ std::string decimal(double v, int places) {
     return buf;
 }
 
+std::string namesText(const std::vector<std::string>& names) {
+    std::string s;
+    for (const auto& n : names) s += (s.empty() ? "" : "; ") + n;
+    return s;
+}
+
 std::string playersText(const std::vector<std::string>& players) {
     std::string s;
     for (const auto& p : players) s += (s.empty() ? "" : " ") + p;
@@ -284,7 +332,7 @@ std::string playersText(const std::vector<std::string>& players) {
 
 std::string momentsCsv(const std::vector<Moment>& moments) {
     std::string out = "match_id,date,opponent,period,period_clock,match_clock,band,lane,counts,after_s,"
-                      "what,players,x,y,to_x,to_y\r\n";
+                      "what,players,x,y,to_x,to_y,our_players\r\n";
     for (const Moment& m : moments) {
         out += csvField(m.matchId) + "," + m.date + "," + csvField(m.opponent) + "," +
                std::to_string(m.period) + "," + periodClock(m.t) + "," + csvField(matchClock(m.period, m.t)) +
@@ -292,7 +340,8 @@ std::string momentsCsv(const std::vector<Moment>& moments) {
                std::string(toString(m.count)) + "," + (m.answerAfterS ? decimal(*m.answerAfterS, 1) : "") +
                "," + csvField(m.what) + "," +
                csvField(playersText(m.players)) + "," + decimal(m.from.x, 1) + "," + decimal(m.from.y, 1) +
-               "," + (m.to ? decimal(m.to->x, 1) : "") + "," + (m.to ? decimal(m.to->y, 1) : "") + "\r\n";
+               "," + (m.to ? decimal(m.to->x, 1) : "") + "," + (m.to ? decimal(m.to->y, 1) : "") + "," +
+               csvField(namesText(m.ourNames)) + "\r\n";
     }
     return out;
 }
@@ -332,6 +381,7 @@ nlohmann::json toJson(const Moment& m) {
     j["after_s"] = m.answerAfterS ? nlohmann::json(*m.answerAfterS) : nlohmann::json();
     j["what"] = m.what;
     j["players"] = m.players;
+    j["our_players"] = m.ourNames;
     j["from"] = {{"x", m.from.x}, {"y", m.from.y}};
     j["to"] = m.to ? nlohmann::json{{"x", m.to->x}, {"y", m.to->y}} : nlohmann::json();
     j["event_index"] = m.event;

@@ -40,6 +40,8 @@ struct Moment {
     std::optional<double> answerAfterS; ///< seconds from t to the event that answered the test
     std::string what;   ///< "we lost it (#7's pass) → our tackle (#4) after 3.2 s"
     std::vector<std::string> players; ///< the players in its events, first to last, once each
+    std::vector<std::string> ours;    ///< the same, ours only
+    std::vector<std::string> ourNames; ///< ours as the squad list names them ("7 A. Example"), else the id
     Point from;                       ///< the arrow: where it starts, our frame
     std::optional<Point> to;          ///< ... and where it goes, when it goes somewhere
     std::size_t event = 0;            ///< the item's event index in the match
@@ -50,7 +52,12 @@ struct Moment {
 /// den = Success + NoSuccess for shares, + Exposure for per-exposure metrics; a per-match
 /// count's den is the match.
 std::vector<Moment> matchMoments(const Match& match, const MetricSpec& spec, const ZoneGrid& grid,
-                                 std::optional<Zone> zone);
+                                 std::optional<Zone> zone, const std::vector<Player>& squadList = {});
+
+/// Whether a moment involves one of our players (`number`), or a player of ours whose position in
+/// `squadList` is in `unit`.
+bool involves(const Moment& m, const std::string& number);
+bool involves(const Moment& m, Unit unit, const std::vector<Player>& squadList);
 
 /// The matches of a window ending at a stored match, oldest first: the match itself, the last
 /// N of its season up to it, or its season so far — the matches its status adds up.
@@ -59,13 +66,16 @@ struct MomentsRequest {
     std::string metricId;
     std::optional<Zone> zone; ///< nullopt: the whole pitch
     Window window{Window::Kind::Match, 1, 0.3};
+    std::optional<std::string> player; ///< only moments involving this player of ours
+    std::optional<Unit> unit;          ///< only moments involving a player of ours in this unit
 };
 
 /// What a request found: the window's matches (oldest first) and their moments in match order,
 /// or a problem in words ("no match 'X'", "no metric 'Y'", a window of weights) and nothing else.
 struct MomentsResult {
     std::vector<MatchSummary> matches;
-    std::vector<Moment> moments;
+    std::vector<Moment> moments; ///< those the request's player or unit filter keeps
+    long allMoments = 0;         ///< before the filter (num and den below count all of them)
     std::string problem;
     /// The zone's numbers from these moments: successes, and the denominator as the tallies
     /// count it (a per-match count's: the matches).

@@ -258,6 +258,16 @@ ALTER TABLE session ADD COLUMN recorded_at TEXT NOT NULL DEFAULT '';
 ALTER TABLE session_block ADD COLUMN held_minutes INTEGER;
 ALTER TABLE session_focus ADD COLUMN held_minutes INTEGER;
 )sql",
+    // 11: a squad's list of players (docs/moments.md, "Who was involved"): the ids match files
+    // give (shirt numbers) with a name and a position, so moments name their players.
+    R"sql(
+CREATE TABLE squad_player(
+  squad_id INTEGER NOT NULL REFERENCES squad(id) ON DELETE CASCADE,
+  number TEXT NOT NULL,
+  name TEXT NOT NULL,
+  position TEXT NOT NULL,
+  PRIMARY KEY(squad_id, number)) WITHOUT ROWID;
+)sql",
 };
 
 static_assert(std::size(kMigrations) == ClubRepository::kSchemaVersion);
@@ -808,6 +818,56 @@ std::vector<std::string> ClubRepository::seasons(const std::string& squad) const
         q.bind(1, squad);
         while (q.executeStep()) out.push_back(q.getColumn(0).getString());
         return out;
+    });
+}
+
+namespace {
+
+std::int64_t findOrMakeSquad(SQLite::Database& db, const std::string& squad) {
+    db.exec("INSERT INTO club(name) SELECT '' WHERE NOT EXISTS (SELECT 1 FROM club)");
+    const std::int64_t clubId = db.execAndGet("SELECT min(id) FROM club").getInt64();
+    SQLite::Statement sq(db, "INSERT OR IGNORE INTO squad(club_id, name) VALUES (?, ?)");
+    sq.bind(1, clubId);
+    sq.bind(2, squad);
+    sq.exec();
+    SQLite::Statement find(db, "SELECT id FROM squad WHERE club_id = ? AND name = ?");
+    find.bind(1, clubId);
+    find.bind(2, squad);
+    find.executeStep();
+    return find.getColumn(0).getInt64();
+}
+
+} // namespace
+
+std::vector<Player> ClubRepository::squadList(const std::string& squad) const {
+    return guarded("cannot read the squad list", [&] {
+        std::vector<Player> out;
+        SQLite::Statement q(*m_db, "SELECT p.number, p.name, p.position FROM squad_player p JOIN squad sq ON "
+                                   "sq.id = p.squad_id WHERE sq.name = ? ORDER BY length(p.number), p.number");
+        q.bind(1, squad);
+        while (q.executeStep())
+            out.push_back({q.getColumn(0).getString(), q.getColumn(1).getString(), q.getColumn(2).getString()});
+        return out;
+    });
+}
+
+void ClubRepository::replaceSquadList(const std::string& squad, const std::vector<Player>& players) {
+    guarded("cannot save the squad list", [&] {
+        SQLite::Transaction tx(*m_db);
+        const std::int64_t squadId = findOrMakeSquad(*m_db, squad);
+        SQLite::Statement del(*m_db, "DELETE FROM squad_player WHERE squad_id = ?");
+        del.bind(1, squadId);
+        del.exec();
+        SQLite::Statement ins(*m_db, "INSERT INTO squad_player(squad_id, number, name, position) VALUES (?, ?, ?, ?)");
+        for (const Player& p : players) {
+            ins.bind(1, squadId);
+            ins.bind(2, p.number);
+            ins.bind(3, p.name);
+            ins.bind(4, p.position);
+            ins.exec();
+            ins.reset();
+        }
+        tx.commit();
     });
 }
 

@@ -5,6 +5,7 @@
 #include "countscale.h"
 #include "metricengine.h"
 #include "metricspec.h"
+#include "squadlist.h"
 #include "status.h"
 #include "targets.h"
 #include "types.h"
@@ -64,7 +65,7 @@ struct TallyRow {
 /// Owns the SQLite connection; returns domain structs. Throws StorageError on faults.
 class ClubRepository {
 public:
-    static constexpr int kSchemaVersion = 10;
+    static constexpr int kSchemaVersion = 11;
 
     /// Opens (creating when missing) and migrates the club file. ":memory:" works for tests.
     explicit ClubRepository(const std::string& file);
@@ -129,6 +130,11 @@ public:
     /// The season of a match up to its last stored match: match ids and dates in date order,
     /// and dense tallies per metric; `focal` is set to the match's index.
     SeasonTallies seasonTallies(const std::string& squad, const std::string& season) const;
+    /// The squad's list of players (squadlist.h), by shirt number; empty when none was given.
+    std::vector<Player> squadList(const std::string& squad) const;
+    /// Replaces the squad's list in one transaction (the squad is created when new). The caller
+    /// checks the players first (parseSquadList, checkPlayer).
+    void replaceSquadList(const std::string& squad, const std::vector<Player>& players);
     /// Each match's minutes played and the opponent's passes, in seasonTallies' match order
     /// (for count maps read per 90 minutes or per 100 of their passes; countscale.h).
     std::vector<MatchExposure> seasonExposures(const std::string& squad, const std::string& season) const;

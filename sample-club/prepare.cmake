@@ -28,6 +28,12 @@ club(ingest ${matches})
 club(targets import ${here}/targets.json)
 club(drills import ${here}/drills.json)
 club(fixtures import ${here}/fixtures.csv)
+# The squad list (invented names; the numbers and positions the simulator plays them in), only
+# while the club file has none, so a list edited in the demo club stays.
+club(squad list)
+if(club_out STREQUAL "")
+    club(squad import ${here}/squad.csv)
+endif()
 
 # The story's focus: opened after match 8 on the slipped left-back zone, with three of the
 # drill book's drills for it (ids 6, 7 and 9 in drills.json's order). The focus and the week's

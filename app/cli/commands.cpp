@@ -7,6 +7,7 @@
 #include "focus_verbs.h"
 #include "moments_verbs.h"
 #include "plan_verbs.h"
+#include "squad_verbs.h"
 #include "verbs.h"
 
 #include "format.h"
@@ -414,6 +415,7 @@ int run(int argc, char** argv, std::ostream& out, std::ostream& err) {
     ExportVerbs exportVerbs(app);
     MomentVerbs momentVerbs(app); // after ExportVerbs: it adds `export clips`
     CompareVerbs compareVerbs(app);
+    SquadVerbs squadVerbs(app);
 
     auto* metrics = app.add_subcommand("metrics", "List, show and add metric definitions");
     metrics->require_subcommand(1);
@@ -510,6 +512,7 @@ int run(int argc, char** argv, std::ostream& out, std::ostream& err) {
         if (planVerbs.chosen()) return planVerbs.run(g, out, err);
         if (momentVerbs.chosen()) return momentVerbs.run(g, out, err);
         if (compareVerbs.chosen()) return compareVerbs.run(g, out, err);
+        if (squadVerbs.chosen()) return squadVerbs.run(g, out, err);
         if (exportVerbs.chosen()) return exportVerbs.run(g, out, err);
         if (*metricsList) return cmdMetricsList(g, out);
         if (*metricsShow) return cmdMetricsShow(g, showId, out, err);

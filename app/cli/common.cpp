@@ -1,5 +1,8 @@
 #include "common.h"
 
+#include "commands.h"
+#include "exports.h"
+
 #include "wording.h"
 #include "zonenames.h"
 
@@ -76,5 +79,21 @@ std::optional<Zone> parseZone(const std::string& text) {
 std::string zoneName(int band, int lane, const ZoneGrid& grid) { return zoneLabel(band, lane, grid); }
 
 std::string formatValue(MetricKind kind, double value) { return words::value(kind, value); }
+
+int deliverFile(const std::string& path, const std::string& bytes, const std::string& what, std::ostream& out,
+                std::ostream& err) {
+    if (path == "-") {
+        out << bytes;
+        return kExitOk;
+    }
+    try {
+        model::writeFileAtomically(path, bytes);
+    } catch (const model::IoError& e) {
+        err << "error: " << e.what() << "\n";
+        return kExitBadInput;
+    }
+    err << "wrote " << what << " to " << path << "\n";
+    return kExitOk;
+}
 
 } // namespace pitchloop::cli

@@ -38,6 +38,12 @@ std::optional<model::Zone> parseZone(const std::string& text);
 /// pitch" (model/zonenames.h).
 std::string zoneName(int band, int lane, const model::ZoneGrid& grid);
 
+/// Writes `bytes` to `path` all at once (a temporary file beside it, renamed), or to `out` when
+/// `path` is "-"; says "wrote WHAT to PATH" on `err`. The exit code: 0, or 2 naming the path when
+/// it cannot be written.
+int deliverFile(const std::string& path, const std::string& bytes, const std::string& what, std::ostream& out,
+                std::ostream& err);
+
 /// A value in its metric's unit for people, as everywhere (model/wording.h): "45.2%", "6.8",
 /// "0.15"; "–" without one.
 std::string formatValue(model::MetricKind kind, double value);

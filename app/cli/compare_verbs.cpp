@@ -3,6 +3,7 @@
 #include "commands.h"
 #include "comparison.h"
 #include "exports.h"
+#include "format.h"
 #include "wording.h"
 #include "zonenames.h"
 
@@ -24,13 +25,6 @@ std::string differenceText(MetricKind kind, double d) {
     if (kind == MetricKind::Rate) std::snprintf(buf, sizeof buf, "%+.1f pts", 100 * d);
     else std::snprintf(buf, sizeof buf, "%+.2f", d);
     return buf;
-}
-
-std::string pad(std::string s, std::size_t width) {
-    std::size_t shown = 0;
-    for (unsigned char c : s) shown += (c & 0xC0) != 0x80;
-    s += shown >= width ? std::string(" ") : std::string(width - shown, ' ');
-    return s;
 }
 
 nlohmann::json sideJson(const PooledZone& z) {
@@ -134,14 +128,14 @@ int CompareVerbs::run(const Globals& g, std::ostream& out, std::ostream& err) {
     std::stable_sort(rows.begin(), rows.end(), [](const ZoneDifference* a, const ZoneDifference* b) {
         return std::abs(a->probSecondHigher - 0.5) > std::abs(b->probSecondHigher - 0.5);
     });
-    out << pad("zone", 44) << pad(c.firstLabel, 16) << pad(c.secondLabel, 16)
-        << pad(c.secondLabel + " − " + c.firstLabel, 34) << "P(" << c.secondLabel << " higher)\n";
+    out << padColumn("zone", 44) << padColumn(c.firstLabel, 16) << padColumn(c.secondLabel, 16)
+        << padColumn(c.secondLabel + " − " + c.firstLabel, 34) << "P(" << c.secondLabel << " higher)\n";
     for (const ZoneDifference* d : rows) {
         const std::string interval = differenceText(kind, d->difference) + " (" +
                                      differenceText(kind, d->interval.low) + " to " +
                                      differenceText(kind, d->interval.high) + ")";
-        out << pad(zoneLabel(d->band, d->lane, grid), 44) << pad(words::value(kind, d->first.pooled), 16)
-            << pad(words::value(kind, d->second.pooled), 16) << pad(interval, 34)
+        out << padColumn(zoneLabel(d->band, d->lane, grid), 44) << padColumn(words::value(kind, d->first.pooled), 16)
+            << padColumn(words::value(kind, d->second.pooled), 16) << padColumn(interval, 34)
             << words::probability(d->probSecondHigher) << "\n";
     }
     return kExitOk;

@@ -78,26 +78,10 @@ int ExportVerbs::run(const Globals& g, std::ostream& out, std::ostream& err) {
     return print::exportDebrief(*repo, m_match, m_out, err);
 }
 
-int ExportVerbs::deliver(const std::string& bytes, const std::string& what, std::ostream& out,
-                         std::ostream& err) {
-    if (m_out == "-") {
-        out << bytes;
-        return kExitOk;
-    }
-    try {
-        writeFileAtomically(m_out, bytes);
-    } catch (const IoError& e) {
-        err << "error: " << e.what() << "\n";
-        return kExitBadInput;
-    }
-    err << "wrote " << what << " to " << m_out << "\n";
-    return kExitOk;
-}
-
 int ExportVerbs::runStatuses(ClubRepository& repo, std::ostream& out, std::ostream& err) {
     const auto run = matchStatuses(repo, m_match, m_windows, m_metrics, err);
     if (!run) return kExitBadInput;
-    return deliver(statusCsv(m_match, run->statuses),
+    return deliverFile(m_out, statusCsv(m_match, run->statuses),
                    std::to_string(run->statuses.size()) + " zone statuses", out, err);
 }
 
@@ -114,7 +98,7 @@ int ExportVerbs::runTallies(ClubRepository& repo, std::ostream& out, std::ostrea
     const auto rows = repo.talliesOnGrid(
         repo.tallyGrid(), m_match.empty() ? std::nullopt : std::optional(m_match),
         metric.empty() ? std::nullopt : std::optional(metric));
-    return deliver(talliesCsv(rows), std::to_string(rows.size()) + " tally rows", out, err);
+    return deliverFile(m_out, talliesCsv(rows), std::to_string(rows.size()) + " tally rows", out, err);
 }
 
 int ExportVerbs::runCalendar(ClubRepository& repo, std::ostream& out, std::ostream& err) {
@@ -136,7 +120,7 @@ int ExportVerbs::runCalendar(ClubRepository& repo, std::ostream& out, std::ostre
             << " (plan one with: pitchloop plan DATE ... --save)\n";
         return kExitBadInput;
     }
-    return deliver(calendar.text,
+    return deliverFile(m_out, calendar.text,
                    std::to_string(calendar.sessions) + " sessions and " +
                        std::to_string(calendar.reviews) + " review dates",
                    out, err);

@@ -23,9 +23,6 @@ class ExportVerbs {
     int runStatuses(model::ClubRepository& repo, std::ostream& out, std::ostream& err);
     int runTallies(model::ClubRepository& repo, std::ostream& out, std::ostream& err);
     int runCalendar(model::ClubRepository& repo, std::ostream& out, std::ostream& err);
-    /// Writes `bytes` to m_out ("-": `out`) all at once: a temporary file beside it, renamed.
-    int deliver(const std::string& bytes, const std::string& what, std::ostream& out,
-                std::ostream& err);
 
     CLI::App* m_group = nullptr;
     CLI::App* m_statuses = nullptr;

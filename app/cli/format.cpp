@@ -38,6 +38,12 @@ std::string pad(const std::string& s, std::size_t width) {
 
 } // namespace
 
+std::string padColumn(const std::string& s, std::size_t width) {
+    std::size_t shown = 0;
+    for (unsigned char c : s) shown += (c & 0xC0) != 0x80;
+    return shown >= width ? s + " " : s + std::string(width - shown, ' ');
+}
+
 void printZoneTable(std::ostream& out, const MetricSpec& spec, const ZoneGrid& grid,
                     const MatchTally& tally) {
     out << spec.id << " — " << spec.name << " (" << toString(spec.kind()) << ", "

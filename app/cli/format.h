@@ -20,6 +20,10 @@ using model::csvField;
 void printZoneTable(std::ostream& out, const model::MetricSpec& spec, const model::ZoneGrid& grid,
                     const model::MatchTally& tally);
 
+/// A table column: `s` padded with spaces to `width` code points (so "–" and "≥" keep the
+/// columns), and at least one space after a longer text.
+std::string padColumn(const std::string& s, std::size_t width);
+
 /// "2–1 W" style result from our side's point of view.
 std::string scoreLine(const model::MatchSummary& m);
 

@@ -2,6 +2,7 @@
 
 #include "commands.h"
 #include "exports.h"
+#include "format.h"
 #include "moments.h"
 #include "wording.h"
 #include "zonenames.h"
@@ -44,6 +45,10 @@ MomentVerbs::MomentVerbs(CLI::App& app) {
         sub->add_option("--metric", m_metric, "Metric id")->required();
         sub->add_option("--zone", m_zone, "Zone BAND,LANE (0,0 or none: the whole pitch)");
         sub->add_option("--window", m_window, "match, lastN or season")->capture_default_str();
+        sub->add_option("--player", m_player, "Only moments involving this player of ours (shirt number)");
+        sub->add_option("--unit", m_unit, "Only moments involving a player of ours in this unit: goalkeeper, "
+                                          "defence, midfield, attack, left_side, right_side or centre "
+                                          "(positions from the squad list)");
     };
     m_list = app.add_subcommand("moments", "The losses, passes and actions behind a zone's number, "
                                            "with the match clock (docs/moments.md)");
@@ -80,8 +85,18 @@ namespace {
 
 std::optional<MomentsResult> findMoments(ClubRepository& repo, const std::string& match,
                                          const std::string& metric, const std::string& zoneText,
-                                         const std::string& windowText, std::ostream& err) {
+                                         const std::string& windowText, const std::string& player,
+                                         const std::string& unit, std::ostream& err) {
     MomentsRequest request;
+    if (!player.empty()) request.player = player;
+    if (!unit.empty()) {
+        request.unit = unitFromString(unit);
+        if (!request.unit) {
+            err << "error: --unit '" << unit
+                << "': expected goalkeeper, defence, midfield, attack, left_side, right_side or centre\n";
+            return std::nullopt;
+        }
+    }
     request.matchId = match;
     request.metricId = metric;
     if (!zoneText.empty() && zoneText != "0,0") {
@@ -111,7 +126,7 @@ std::optional<MomentsResult> findMoments(ClubRepository& repo, const std::string
 } // namespace
 
 int MomentVerbs::runList(ClubRepository& repo, std::ostream& out, std::ostream& err) {
-    const auto found = findMoments(repo, m_match, m_metric, m_zone, m_window, err);
+    const auto found = findMoments(repo, m_match, m_metric, m_zone, m_window, m_player, m_unit, err);
     if (!found) return kExitBadInput;
     const auto& moments = found->moments;
     if (m_format == "csv") {
@@ -134,6 +149,7 @@ int MomentVerbs::runList(ClubRepository& repo, std::ostream& out, std::ostream& 
         j["matches"] = nlohmann::json::array();
         for (const auto& s : found->matches) j["matches"].push_back(s.id);
         j["num"] = found->num;
+        j["all_moments"] = found->allMoments;
         j["den"] = found->den;
         j["moments"] = nlohmann::json::array();
         for (const Moment& m : moments) j["moments"].push_back(toJson(m));
@@ -146,10 +162,13 @@ int MomentVerbs::runList(ClubRepository& repo, std::ostream& out, std::ostream& 
         << (found->matches.size() == 1 ? " match" : " matches") << " to " << m_match << ")\n";
     const double value = found->den > 0 ? static_cast<double>(found->num) / static_cast<double>(found->den)
                                         : std::numeric_limits<double>::quiet_NaN();
-    out << moments.size() << (moments.size() == 1 ? " moment" : " moments") << "; the number from them: "
+    out << found->allMoments << (found->allMoments == 1 ? " moment" : " moments") << "; the number from them: "
         << found->num << " / " << found->den
         << (metric.per == MetricSpec::Per::Match ? (found->den == 1 ? " match" : " matches") : "") << " = "
         << formatValue(metric.kind(), value) << "\n";
+    if (!m_player.empty() || !m_unit.empty())
+        out << moments.size() << " of them involve "
+            << (m_unit.empty() ? "player " + m_player : unitWords(*unitFromString(m_unit))) << "\n";
     if (moments.empty()) return kExitOk;
     out << "\n";
     char line[160];
@@ -158,12 +177,7 @@ int MomentVerbs::runList(ClubRepository& repo, std::ostream& out, std::ostream& 
     for (const Moment& m : moments) {
         const std::string clock = shortPeriod(m.period) + " " + periodClock(m.t) + " (" + matchClock(m.period, m.t) + ")";
         std::snprintf(line, sizeof line, "%-12s %-18s ", m.matchId.c_str(), clock.c_str());
-        // zone codes hold a two-byte '·': pad by hand
-        std::string code = zoneCode(m.band, m.lane);
-        code += std::string(code.size() < 8 ? 8 - code.size() : 1, ' ');
-        std::string counts = countWord(m.count);
-        counts += std::string(counts.size() < 13 ? 13 - counts.size() : 1, ' ');
-        out << line << code << counts << m.what << "\n";
+        out << line << padColumn(zoneCode(m.band, m.lane), 8) << padColumn(countWord(m.count), 13) << m.what << "\n";
     }
     return kExitOk;
 }
@@ -192,7 +206,7 @@ int MomentVerbs::runClips(ClubRepository& repo, std::ostream& out, std::ostream&
         }
         clock.periodStartS[period] = *at;
     }
-    const auto found = findMoments(repo, m_match, m_metric, m_zone, m_window, err);
+    const auto found = findMoments(repo, m_match, m_metric, m_zone, m_window, m_player, m_unit, err);
     if (!found) return kExitBadInput;
     if (found->matches.size() != 1) {
         err << "error: --window " << m_window << ": a clip list describes one match's video, and this window has "
@@ -209,19 +223,11 @@ int MomentVerbs::runClips(ClubRepository& repo, std::ostream& out, std::ostream&
                               zoneName(zone ? zone->band : 0, zone ? zone->lane : 0, repo.tallyGrid());
     const std::string bytes = m_clipFormat == "vtt" ? clipsWebVtt(match->info, found->moments, clips, title)
                                                     : clipsCsv(match->info, found->moments, clips);
-    if (m_out == "-") {
-        out << bytes;
-        return kExitOk;
-    }
-    try {
-        writeFileAtomically(m_out, bytes);
-    } catch (const IoError& e) {
-        err << "error: " << e.what() << "\n";
-        return kExitBadInput;
-    }
-    err << "wrote " << clips.size() << (clips.size() == 1 ? " clip" : " clips") << " of "
-        << found->moments.size() << (found->moments.size() == 1 ? " moment" : " moments") << " to " << m_out << "\n";
-    return kExitOk;
+    return deliverFile(m_out, bytes,
+                       std::to_string(clips.size()) + (clips.size() == 1 ? " clip" : " clips") + " of " +
+                           std::to_string(found->moments.size()) +
+                           (found->moments.size() == 1 ? " moment" : " moments"),
+                       out, err);
 }
 
 } // namespace pitchloop::cli

@@ -36,6 +36,8 @@ class MomentVerbs {
     double m_leadIn = 8;
     double m_leadOut = 4;
     std::vector<std::string> m_periodStarts;
+    std::string m_player;
+    std::string m_unit;
 };
 
 } // namespace pitchloop::cli

@@ -61,12 +61,6 @@ std::string targetText(MetricKind kind, const std::optional<Target>& t) {
     return words::target(t->direction, kind, t->value);
 }
 
-std::string pad(const std::string& s, std::size_t width) {
-    std::size_t shown = 0;
-    for (unsigned char c : s) shown += (c & 0xC0) != 0x80;
-    return shown >= width ? s + " " : s + std::string(width - shown, ' ');
-}
-
 } // namespace
 
 StatusVerbs::StatusVerbs(CLI::App& app) {
@@ -210,8 +204,8 @@ int StatusVerbs::runStatus(ClubRepository& repo, std::ostream& out, std::ostream
         << run->squad << " " << run->season << ", match " << run->focal + 1 << " of "
         << run->seasonMatches << " stored; intervals at " << num(100 * settings.level)
         << "%\n\n";
-    out << pad("metric", 25) << pad("zone", 44) << pad("window", 8) << pad("num/den", 13)
-        << pad("value", 8) << pad("interval", 16) << pad("target", 10) << pad("state", 18)
+    out << padColumn("metric", 25) << padColumn("zone", 44) << padColumn("window", 8) << padColumn("num/den", 13)
+        << padColumn("value", 8) << padColumn("interval", 16) << padColumn("target", 10) << padColumn("state", 18)
         << "P(miss)\n";
     std::set<std::pair<std::string, std::pair<int, int>>> withTarget;
     for (const auto& s : statuses)
@@ -224,10 +218,10 @@ int StatusVerbs::runStatus(ClubRepository& repo, std::ostream& out, std::ostream
         char nd[32];
         std::snprintf(nd, sizeof nd, s.window.kind == Window::Kind::Ewma ? "%.1f/%.1f" : "%.0f/%.0f",
                       s.sum.num, s.sum.den);
-        out << pad(s.metric, 25) << pad(zoneName(s.band, s.lane, grid), 44) << pad(s.window.name(), 8)
-            << pad(nd, 13) << pad(words::value(kind, s.value), 8)
-            << pad(words::interval(kind, s.interval), 16) << pad(targetText(kind, s.target), 10)
-            << pad(words::stateName(s.state), 18)
+        out << padColumn(s.metric, 25) << padColumn(zoneName(s.band, s.lane, grid), 44) << padColumn(s.window.name(), 8)
+            << padColumn(nd, 13) << padColumn(words::value(kind, s.value), 8)
+            << padColumn(words::interval(kind, s.interval), 16) << padColumn(targetText(kind, s.target), 10)
+            << padColumn(words::stateName(s.state), 18)
             << (s.target && s.state != FlagState::TooLittleData ? words::probability(s.pMiss) : "")
             << "\n";
     }

@@ -15,6 +15,16 @@ namespace pitchloop::desktop {
 
 using namespace pitchloop::model;
 
+namespace {
+
+/// "unit:left_side" or "player:7" (MomentsView::filter) into the request.
+void applyFilter(MomentsRequest& request, const QString& filter) {
+    if (filter.startsWith(QLatin1String("unit:"))) request.unit = unitFromString(filter.mid(5).toStdString());
+    if (filter.startsWith(QLatin1String("player:"))) request.player = filter.mid(7).toStdString();
+}
+
+} // namespace
+
 MomentListModel::MomentListModel(QObject* parent) : QAbstractListModel(parent) {}
 
 void MomentListModel::reset(const std::vector<Moment>& moments, const Pitch& pitch, double margin) {
@@ -61,9 +71,14 @@ QVariant MomentListModel::data(const QModelIndex& index, int role) const {
         }
         return {};
     case PlayersTextRole: {
-        QStringList players;
-        for (const auto& p : m.players) players << QString::fromStdString(p);
-        return players.isEmpty() ? QString() : tr("Players %1").arg(players.join(QStringLiteral(", ")));
+        QStringList ours, theirs;
+        for (const auto& p : m.ourNames) ours << QString::fromStdString(p);
+        for (const auto& p : m.players)
+            if (std::find(m.ours.begin(), m.ours.end(), p) == m.ours.end()) theirs << QString::fromStdString(p);
+        QStringList parts;
+        if (!ours.isEmpty()) parts << tr("Ours: %1").arg(ours.join(QStringLiteral(", ")));
+        if (!theirs.isEmpty()) parts << tr("theirs: %1").arg(theirs.join(QStringLiteral(", ")));
+        return parts.join(QStringLiteral(" · "));
     }
     case FromXRole: return drawX(m.from.x);
     case FromYRole: return drawY(m.from.y);
@@ -104,6 +119,13 @@ void MomentsView::setMatchId(const QString& id) {
     update();
 }
 
+void MomentsView::setFilter(const QString& filter) {
+    if (filter == m_filter) return;
+    m_filter = filter;
+    emit inputsChanged();
+    update();
+}
+
 void MomentsView::setJudgedWindow(bool judged) {
     if (judged == m_judgedWindow) return;
     m_judgedWindow = judged;
@@ -133,6 +155,21 @@ void MomentsView::refresh() {
     request.matchId = m_matchId.toStdString();
     request.metricId = m_metricId.toStdString();
     if (m_band > 0 && m_lane > 0) request.zone = Zone{m_band, m_lane};
+    // Whose moments: the choices come from the match's squad list.
+    m_filterChoices = {QVariantMap{{QStringLiteral("text"), tr("Everyone")}, {QStringLiteral("value"), QString()}}};
+    if (const auto where = s->repository()->seasonOfMatch(request.matchId)) {
+        const auto players = s->repository()->squadList(where->first);
+        if (!players.empty())
+            for (const Unit u : allUnits())
+                m_filterChoices.append(QVariantMap{
+                    {QStringLiteral("text"), QString::fromStdString(words::capitalised(unitWords(u)))},
+                    {QStringLiteral("value"), QStringLiteral("unit:%1").arg(QString::fromStdString(std::string(toString(u))))}});
+        for (const Player& p : players)
+            m_filterChoices.append(QVariantMap{
+                {QStringLiteral("text"), QString::fromStdString(p.number + " " + p.name + " (" + p.position + ")")},
+                {QStringLiteral("value"), QStringLiteral("player:%1").arg(QString::fromStdString(p.number))}});
+    }
+    applyFilter(request, m_filter);
     const Window judged = s->flagSettings().window;
     // An EWMA judges every match a little; its list would be the season's, so take the last 5.
     request.window = !m_judgedWindow ? Window{Window::Kind::Match, 1, 0.3}
@@ -151,8 +188,11 @@ void MomentsView::refresh() {
     const QString where = QString::fromStdString(words::windowName(request.window));
     const double value = result.den > 0 ? static_cast<double>(result.num) / static_cast<double>(result.den) : NAN;
     const QString valueText = desktop::valueText(metric->kind(), value);
-    const std::size_t n = result.moments.size();
+    const long n = result.allMoments;
     const QString momentsText = n == 1 ? tr("1 moment") : tr("%1 moments").arg(n);
+    const QString whose = request.unit ? QString::fromStdString(unitWords(*request.unit))
+                          : request.player ? tr("player %1").arg(QString::fromStdString(*request.player))
+                                           : QString();
     switch (metric->kind()) {
     case MetricKind::Rate: {
         const long censored = std::count_if(result.moments.begin(), result.moments.end(),
@@ -174,6 +214,8 @@ void MomentsView::refresh() {
                         .arg(result.num).arg(result.den).arg(where, valueText);
         break;
     }
+    if (!whose.isEmpty())
+        m_summary += tr(" Shown: the %1 that involve %2.").arg(result.moments.size()).arg(whose);
     emit changed();
 }
 
@@ -228,6 +270,8 @@ bool MomentsView::saveClips(const QUrl& file, const QString& format) {
         request.matchId = m_matchId.toStdString();
         request.metricId = m_metricId.toStdString();
         if (m_band > 0 && m_lane > 0) request.zone = Zone{m_band, m_lane};
+        // The clips of the moments shown: the same player or unit.
+        applyFilter(request, m_filter);
         const MomentsResult result = storedMoments(*s->repository(), request);
         const auto match = s->repository()->loadMatch(request.matchId);
         if (!result.problem.empty() || !match) {

@@ -8,6 +8,7 @@
 #include <QAbstractListModel>
 #include <QString>
 #include <QUrl>
+#include <QVariantList>
 #include <QtQml/qqmlregistration.h>
 
 #include <vector>
@@ -68,6 +69,11 @@ class MomentsView : public pitchloop::desktop::SessionClient {
     /// false: the match alone; true: the club's judged window up to the match.
     Q_PROPERTY(bool judgedWindow MEMBER m_judgedWindow WRITE setJudgedWindow NOTIFY inputsChanged)
     Q_PROPERTY(pitchloop::desktop::MomentListModel* moments READ moments CONSTANT)
+    /// Whose moments: "" everyone, "unit:left_side" a unit of ours, "player:7" one of our players.
+    Q_PROPERTY(QString filter MEMBER m_filter WRITE setFilter NOTIFY inputsChanged)
+    /// The choices for `filter`: [{text: "Everyone", value: ""}, {text: "Our left side", value:
+    /// "unit:left_side"}, ..., {text: "7 E. Tansley", value: "player:7"}] from the squad list.
+    Q_PROPERTY(QVariantList filterChoices READ filterChoices NOTIFY changed)
     /// "11 moments in this match, all of them in the number: 11 a match."
     Q_PROPERTY(QString summaryText READ summaryText NOTIFY changed)
     /// "This match" / "Last 5 matches", the two window choices' titles.
@@ -89,6 +95,8 @@ public:
     void setLane(int lane);
     void setMatchId(const QString& id);
     void setJudgedWindow(bool judged);
+    void setFilter(const QString& filter);
+    QVariantList filterChoices() const { return m_filterChoices; }
     MomentListModel* moments() const { return m_list; }
     QString summaryText() const { return m_summary; }
     QString matchWindowText() const;
@@ -119,6 +127,8 @@ private:
     int m_lane = 0;
     QString m_matchId;
     bool m_judgedWindow = false;
+    QString m_filter;
+    QVariantList m_filterChoices;
     double m_leadIn = 8;
     double m_leadOut = 4;
     QString m_secondHalfStart;

@@ -44,6 +44,18 @@ ColumnLayout {
             ButtonGroup.group: windowChoice
             onClicked: root.view.judgedWindow = true
         }
+        ComboBox {
+            objectName: "momentsWhose"
+            Layout.preferredWidth: 200
+            model: root.view.filterChoices
+            textRole: "text"
+            valueRole: "value"
+            currentIndex: Math.max(0, indexOfValue(root.view.filter))
+            onActivated: root.view.filter = currentValue
+            ToolTip.visible: hovered
+            ToolTip.delay: 400
+            ToolTip.text: qsTr("Only the moments one of our players, or a unit of ours, took part in (from the squad list in Settings)")
+        }
         Label {
             objectName: "momentsSummary"
             Layout.fillWidth: true

@@ -48,6 +48,11 @@ Page {
         onAccepted: settings.openClubFile(selectedFile)
     }
 
+    SquadListView {
+        id: squadListView
+        session: root.session
+    }
+
     ColumnLayout {
         anchors.fill: parent
         anchors.margins: Theme.margin
@@ -335,6 +340,11 @@ Page {
                     GridChangeCard {
                         Layout.fillWidth: true
                         view: gridView
+                    }
+
+                    SquadListCard {
+                        Layout.fillWidth: true
+                        view: squadListView
                     }
                 }
             }

@@ -6,30 +6,16 @@
 #include "testutil.h"
 
 #include <catch2/catch.hpp>
-#include <filesystem>
 #include <nlohmann/json.hpp>
-
-namespace fs = std::filesystem;
 
 using pitchloop::testutil::cli;
 using pitchloop::testutil::contains;
-using pitchloop::testutil::freshTempDir;
-using pitchloop::testutil::sourcePath;
+using pitchloop::testutil::demoClub;
 
 namespace {
 
 struct DemoSeason {
-    fs::path dir = freshTempDir("compare-cli");
-    std::string db = (dir / "club.sqlite").string();
-    DemoSeason() {
-        std::vector<std::string> args{"--db", db, "ingest"};
-        for (int i = 1; i <= 16; ++i) {
-            char name[48];
-            std::snprintf(name, sizeof name, "sample-club/matches/KB-2026-%02d.json", i);
-            args.push_back(sourcePath(name).string());
-        }
-        REQUIRE(cli(args).code == 0);
-    }
+    std::string db = demoClub("compare-cli", 16);
 };
 
 } // namespace

@@ -14,26 +14,15 @@ namespace fs = std::filesystem;
 
 using pitchloop::testutil::cli;
 using pitchloop::testutil::contains;
+using pitchloop::testutil::demoClub;
 using pitchloop::testutil::dataSnapshot;
-using pitchloop::testutil::freshTempDir;
-using pitchloop::testutil::sourcePath;
 
 namespace {
 
 /// The demo's matches 1–8.
 struct DemoMatches {
-    fs::path dir = freshTempDir("moments-cli");
-    std::string db = (dir / "club.sqlite").string();
-
-    DemoMatches() {
-        std::vector<std::string> args{"--db", db, "ingest"};
-        for (int i = 1; i <= 8; ++i) {
-            char name[48];
-            std::snprintf(name, sizeof name, "sample-club/matches/KB-2026-%02d.json", i);
-            args.push_back(sourcePath(name).string());
-        }
-        REQUIRE(cli(args).code == 0);
-    }
+    std::string db = demoClub("moments-cli", 8);
+    fs::path dir = fs::path(db).parent_path();
 };
 
 } // namespace
@@ -110,15 +99,8 @@ TEST_CASE("export clips writes a WebVTT chapter file", "[cli][moments]") {
 }
 
 TEST_CASE("review --moments writes the baseline's and the after matches' moments side by side", "[cli][moments]") {
-    fs::path dir = freshTempDir("review-moments-cli");
-    const std::string db = (dir / "club.sqlite").string();
-    std::vector<std::string> args{"--db", db, "ingest"};
-    for (int i = 1; i <= 16; ++i) {
-        char name[48];
-        std::snprintf(name, sizeof name, "sample-club/matches/KB-2026-%02d.json", i);
-        args.push_back(sourcePath(name).string());
-    }
-    REQUIRE(cli(args).code == 0);
+    const std::string db = demoClub("review-moments-cli", 16);
+    const fs::path dir = fs::path(db).parent_path();
     REQUIRE(cli({"--db", db, "focus", "open", "--match", "KB-2026-08", "--metric", "pre_shot_passes_against",
                  "--zone", "2,5", "--by", "T. Test"}).code == 0);
     const std::string file = (dir / "review-moments.csv").string();
@@ -142,4 +124,40 @@ TEST_CASE("review --moments writes the baseline's and the after matches' moments
     CHECK(before == j["before"]["num"].get<long>());
     CHECK(after == j["after"]["num"].get<long>());
     CHECK(before + after == rows - 1);
+}
+
+TEST_CASE("squad: a list imported, listed, edited; moments name our players and pick a unit", "[cli][moments][squad]") {
+    const std::string db = demoClub("squad-cli", 8);
+    // A bad file changes nothing and names the line and the column.
+    const fs::path bad = fs::path(db).parent_path() / "bad.csv";
+    {
+        std::ofstream f(bad);
+        f << "number,name,position\n3,N. Colterham,LB\n4,J. Weyland,XB\n";
+    }
+    auto r = cli({"--db", db, "squad", "import", bad.string()});
+    CHECK(r.code == 2);
+    CHECK(contains(r.err, "bad.csv: line 3.position: 'XB' is not a position the list knows"));
+    r = cli({"--db", db, "squad", "list"});
+    CHECK(r.out.empty());
+    // The demo's list.
+    REQUIRE(cli({"--db", db, "squad", "import", pitchloop::testutil::sourcePath("sample-club/squad.csv").string()}).code == 0);
+    r = cli({"--db", db, "squad", "list"});
+    CHECK(contains(r.out, "6    DM   L. Farrant\n"));
+    REQUIRE(cli({"--db", db, "squad", "add", "24", "--name", "T. Newcome", "--position", "cm"}).code == 0);
+    CHECK(contains(cli({"--db", db, "squad", "list"}).out, "24   CM   T. Newcome"));
+    r = cli({"--db", db, "squad", "add", "25", "--name", "X", "--position", "sweeper"});
+    CHECK(r.code == 2);
+    CHECK(contains(r.err, "--position: 'sweeper' is not a position"));
+    REQUIRE(cli({"--db", db, "squad", "remove", "24"}).code == 0);
+    CHECK(cli({"--db", db, "squad", "remove", "24"}).code == 2);
+
+    r = cli({"--db", db, "moments", "KB-2026-08", "--metric", "regain_5s", "--zone", "4,3", "--unit", "midfield"});
+    INFO(r.err);
+    REQUIRE(r.code == 0);
+    CHECK(contains(r.out, "6 moments; the number from them: 1 / 6 = 16.7%"));
+    CHECK(contains(r.out, "of them involve our midfield"));
+    CHECK(contains(r.out, "6 L. Farrant's pass"));
+    r = cli({"--db", db, "moments", "KB-2026-08", "--metric", "regain_5s", "--zone", "4,3", "--unit", "wingers"});
+    CHECK(r.code == 2);
+    CHECK(contains(r.err, "--unit 'wingers'"));
 }

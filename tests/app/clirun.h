@@ -5,7 +5,9 @@
 #include "commands.h"
 #include "testutil.h" // contains
 
+#include <cstdio>
 #include <sstream>
+#include <stdexcept>
 #include <string>
 #include <vector>
 
@@ -29,6 +31,20 @@ inline CliRun cli(std::vector<std::string> args) {
     r.out = out.str();
     r.err = err.str();
     return r;
+}
+
+/// A fresh club file in its own temporary folder `name` holding the demo's matches 1 to `matches`
+/// (sample-club/matches, ingested by the command line); its path. Throws when the ingest fails.
+inline std::string demoClub(const std::string& name, int matches) {
+    const std::string db = (freshTempDir(name) / "club.sqlite").string();
+    std::vector<std::string> args{"--db", db, "ingest"};
+    for (int i = 1; i <= matches; ++i) {
+        char file[48];
+        std::snprintf(file, sizeof file, "sample-club/matches/KB-2026-%02d.json", i);
+        args.push_back(sourcePath(file).string());
+    }
+    if (const CliRun r = cli(args); r.code != 0) throw std::runtime_error("demo ingest failed: " + r.err);
+    return db;
 }
 
 } // namespace pitchloop::testutil

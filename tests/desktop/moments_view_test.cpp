@@ -11,6 +11,7 @@
 #include "ingest.h"
 #include "moments.h"
 #include "momentsview.h"
+#include "squadlistview.h"
 #include "testmain.h"
 
 #include <QAbstractItemModelTester>
@@ -58,6 +59,7 @@ private slots:
     void savesAClipList();
     void refusedClipListsWriteNothing();
     void zonePageShowsTheMoments();
+    void squadListNamesAndPicks();
 
 private:
     std::unique_ptr<QTemporaryDir> m_dir;
@@ -193,6 +195,41 @@ void MomentsViewTest::zonePageShowsTheMoments() {
     auto* summary = window.rootObject()->findChild<QObject*>(QStringLiteral("momentsSummary"));
     QCOMPARE(summary->property("text").toString(), QStringLiteral("11 moments in this match: 11 a match."));
     QCOMPARE(WarningCounter::count(), 0);
+}
+
+void MomentsViewTest::squadListNamesAndPicks() {
+    SquadListView squad;
+    squad.setSession(m_session.get());
+    QCOMPARE(squad.squad(), QStringLiteral("First team"));
+    QVERIFY(squad.players().isEmpty());
+    // A bad player is refused and nothing is saved.
+    QVERIFY(!squad.savePlayer(QStringLiteral("3"), QStringLiteral("N. Colterham"), QStringLiteral("XB")));
+    QVERIFY(squad.failed());
+    QVERIFY(squad.message().startsWith(QStringLiteral("position: 'XB' is not a position")));
+    QVERIFY(m_session->repository()->squadList("First team").empty());
+    // The demo's file, then one change typed in.
+    QVERIFY2(squad.importFile(QUrl::fromLocalFile(kSource + QStringLiteral("/sample-club/squad.csv"))), qPrintable(squad.message()));
+    QCOMPARE(squad.players().size(), 23);
+    QVERIFY(squad.savePlayer(QStringLiteral("3"), QStringLiteral("N. Colterham"), QStringLiteral("lwb")));
+    QCOMPARE(m_session->repository()->squadList("First team")[2].position, std::string("LWB"));
+    QVERIFY(squad.removePlayer(QStringLiteral("23")));
+    QCOMPARE(squad.players().size(), 22);
+
+    // The moments view offers everyone, our units and our players, and names our players.
+    m_view->setMetricId(QStringLiteral("regain_5s"));
+    m_view->setBand(4);
+    m_view->setLane(3);
+    QCOMPARE(m_view->filterChoices().size(), 1 + 7 + 22);
+    QVERIFY(role(*m_view->moments(), 0, "playersText").toString().startsWith(QStringLiteral("Ours: 6 L. Farrant")));
+    // All six of these losses involve a midfielder (6 L. Farrant, 8 P. Hollin or 10 A. Brisco);
+    // none a left-sided player.
+    m_view->setFilter(QStringLiteral("unit:midfield"));
+    QCOMPARE(m_view->moments()->count(), 6);
+    QVERIFY(m_view->summaryText().contains(QStringLiteral("Shown: the 6 that involve our midfield.")));
+    m_view->setFilter(QStringLiteral("unit:left_side"));
+    QCOMPARE(m_view->moments()->count(), 0);
+    m_view->setFilter(QStringLiteral("player:10"));
+    QCOMPARE(m_view->moments()->count(), 2); // the two losses that 10 A. Brisco took part in
 }
 
 int main(int argc, char* argv[]) {
