@@ -135,6 +135,24 @@ std::string colourFor(double scaled, double spread) {
     return toHex(colour(level, stepOf(scaled, level)));
 }
 
+int divergingStepOf(double signedScaled, int level) {
+    return stepOf((std::clamp(signedScaled, -1.0, 1.0) + 1) / 2, level);
+}
+
+Rgb divergingColour(int level, int step) {
+    level = std::clamp(level, 0, kLevels - 1);
+    const int steps = stepsAt(level);
+    // Blue (#2166ac) to a light neutral (#f0f0ee) to orange (#d95f0e), in L*a*b*.
+    const Lab low = toLab(fromHex("#2166ac")), mid = toLab(fromHex("#f0f0ee")), high = toLab(fromHex("#d95f0e"));
+    const double t = (std::clamp(step, 0, steps - 1) + 0.5) / steps; // 0..1
+    const Lab from = t < 0.5 ? low : mid, to = t < 0.5 ? mid : high;
+    const double u = t < 0.5 ? t / 0.5 : (t - 0.5) / 0.5;
+    const Lab base{from.l + (to.l - from.l) * u, from.a + (to.a - from.a) * u, from.b + (to.b - from.b) * u};
+    const Lab grey = toLab(neutral());
+    const double f = static_cast<double>(level) / (kLevels - 1);
+    return fromLab({base.l + (grey.l - base.l) * f, base.a + (grey.a - base.a) * f, base.b + (grey.b - base.b) * f});
+}
+
 bool darkTextOn(Rgb c) { return toLab(c).l > 62; }
 
 } // namespace pitchloop::model::palette

@@ -53,6 +53,13 @@ int stepOf(double scaled, int level);
 Rgb colour(int level, int step);
 /// The same for a value and its spread, as "#rrggbb".
 std::string colourFor(double scaled, double spread);
+/// The difference maps' diverging scale, value-suppressing in the same way: `signedScaled` in
+/// −1..1 (second side lower … higher), row `level` by the difference's certainty. Row 0 keeps 8
+/// steps from blue (lower) through a light neutral to orange (higher) — a pair that deuteranopes
+/// and protanopes tell apart — and each row below keeps half the steps, nearer the neutral.
+Rgb divergingColour(int level, int step);
+int divergingStepOf(double signedScaled, int level);
+
 /// Whether text on this colour should be dark (light cells) or light.
 bool darkTextOn(Rgb c);
 

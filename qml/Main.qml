@@ -52,6 +52,12 @@ ApplicationWindow {
         return debriefPage.openSelectedMoments()
     }
 
+    // The zone page opened on two sets of matches compared (screenshots).
+    function openComparison() {
+        zonePage.showComparison()
+        showPage("zone")
+    }
+
     // The zone page opened on the moments behind a zone's number (two clicks from a debrief).
     function openMoments(metricId: string, band: int, lane: int, matchId: string) {
         zonePage.showMoments(metricId, band, lane, matchId)

@@ -11,17 +11,20 @@
 int main() {
     using namespace pitchloop::model::palette;
     nlohmann::json out;
-    for (int level = 0; level < kLevels; ++level) {
+    for (int level = 0; level < 2 * kLevels; ++level) {
+        // The sequential rows, then the difference maps' diverging rows.
+        const bool diverging = level >= kLevels;
+        const int row_level = level % kLevels;
         nlohmann::json row = nlohmann::json::array();
-        for (int s = 0; s < stepsAt(level); ++s) {
-            const Rgb c = colour(level, s);
+        for (int s = 0; s < stepsAt(row_level); ++s) {
+            const Rgb c = diverging ? divergingColour(row_level, s) : colour(row_level, s);
             auto triple = [](Rgb x) { return nlohmann::json::array({x.r, x.g, x.b}); };
             row.push_back({{"hex", toHex(c)},
                            {"rgb", triple(c)},
                            {"deuteranopia", triple(simulate(c, Vision::Deuteranopia))},
                            {"protanopia", triple(simulate(c, Vision::Protanopia))}});
         }
-        out["rows"].push_back(row);
+        out[diverging ? "diverging_rows" : "rows"].push_back(row);
     }
     for (const auto& hex : scaleStops()) {
         const Lab lab = toLab(fromHex(hex));

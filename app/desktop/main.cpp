@@ -131,6 +131,8 @@ int main(int argc, char* argv[]) {
     bool shown = false;
     QMetaObject::invokeMethod(window, "openDebriefMoments", Q_RETURN_ARG(bool, shown));
     if (shown) problems << grabCurrent(window, screenshotDir, QStringLiteral("moments"), 1);
+    QMetaObject::invokeMethod(window, "openComparison");
+    problems << grabCurrent(window, screenshotDir, QStringLiteral("compare"), 2);
     if (!tableToMap.isEmpty()) {
         mapTable();
         problems << grabCurrent(window, screenshotDir, QStringLiteral("layout-assistant"));

@@ -15,4 +15,11 @@ QStringList MapPalette::row(int level) const {
     return out;
 }
 
+QStringList MapPalette::divergingRow(int level) const {
+    QStringList out;
+    for (int s = 0; s < palette::stepsAt(level); ++s)
+        out << QString::fromStdString(palette::toHex(palette::divergingColour(level, s)));
+    return out;
+}
+
 } // namespace pitchloop::desktop

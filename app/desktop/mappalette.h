@@ -19,6 +19,8 @@ public:
     int rows() const;
     /// Row `level`'s colours, low value to high ("#rrggbb").
     Q_INVOKABLE QStringList row(int level) const;
+    /// The difference maps' diverging row `level`: lower to higher.
+    Q_INVOKABLE QStringList divergingRow(int level) const;
 };
 
 } // namespace pitchloop::desktop

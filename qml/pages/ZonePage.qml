@@ -17,6 +17,10 @@ Page {
     function show(metricId: string, band: int, lane: int, matchId: string) {
         trend.select(metricId, band, lane, matchId)
     }
+    /// The same, opening the comparison of two sets of matches (screenshots).
+    function showComparison() {
+        lowerTabs.currentIndex = 2
+    }
     /// The same, opening the moments behind the zone's number.
     function showMoments(metricId: string, band: int, lane: int, matchId: string) {
         show(metricId, band, lane, matchId)
@@ -28,6 +32,13 @@ Page {
     ZoneSeries {
         id: trend
         session: root.session
+    }
+
+    ComparisonView {
+        id: comparison
+        session: root.session
+        metricId: trend.metricId
+        matchId: trend.matchId
     }
 
     MomentsView {
@@ -195,19 +206,32 @@ Page {
 
         Card {
             title: lowerTabs.currentIndex === 0 ? qsTr("Match by match · %1").arg(trend.seasonText)
-                                                : qsTr("The moments behind the number · %1 · %2").arg(trend.zoneText).arg(trend.metricName)
+                   : lowerTabs.currentIndex === 1 ? qsTr("The moments behind the number · %1 · %2").arg(trend.zoneText).arg(trend.metricName)
+                                                  : qsTr("Two sets of matches on one map · %1 · %2").arg(trend.metricName).arg(trend.seasonText)
             Layout.fillWidth: true
             Layout.fillHeight: true
 
             TabBar {
                 id: lowerTabs
                 objectName: "zoneLowerTabs"
-                Layout.preferredWidth: 460
+                Layout.preferredWidth: 690
                 TabButton { text: qsTr("Match by match") }
                 TabButton {
                     objectName: "momentsTab"
                     text: qsTr("The moments behind it (%1)").arg(moments.moments.count)
                 }
+                TabButton {
+                    objectName: "compareTab"
+                    text: qsTr("Compare two sets of matches")
+                }
+            }
+
+            ComparePanel {
+                visible: lowerTabs.currentIndex === 2
+                Layout.fillWidth: true
+                Layout.fillHeight: true
+                view: comparison
+                geometry: trend.geometry
             }
 
             MomentsPanel {

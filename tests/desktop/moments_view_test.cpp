@@ -10,7 +10,11 @@
 #include "clubsession.h"
 #include "ingest.h"
 #include "moments.h"
+#include "comparison.h"
+#include "display.h"
+#include "comparisonview.h"
 #include "momentsview.h"
+#include "zonemapmodel.h"
 #include "squadlistview.h"
 #include "testmain.h"
 
@@ -60,6 +64,7 @@ private slots:
     void refusedClipListsWriteNothing();
     void zonePageShowsTheMoments();
     void squadListNamesAndPicks();
+    void comparisonMapIsTheModels();
 
 private:
     std::unique_ptr<QTemporaryDir> m_dir;
@@ -230,6 +235,37 @@ void MomentsViewTest::squadListNamesAndPicks() {
     QCOMPARE(m_view->moments()->count(), 0);
     m_view->setFilter(QStringLiteral("player:10"));
     QCOMPARE(m_view->moments()->count(), 2); // the two losses that 10 A. Brisco took part in
+}
+
+void MomentsViewTest::comparisonMapIsTheModels() {
+    ComparisonView view;
+    const auto tester = watch(view.map());
+    view.setSession(m_session.get());
+    view.setMetricId(kMetric);
+    view.setMatchId(QStringLiteral("KB-2026-08"));
+    view.setSplit(QStringLiteral("date:2026-09-01"));
+    QVERIFY2(view.errorString().isEmpty(), qPrintable(view.errorString()));
+    QCOMPARE(view.map()->count(), 30);
+    // The same numbers as model::compareSplit on the same season.
+    auto& repo = *m_session->repository();
+    const auto tallies = repo.seasonTallies("First team", "2026-27");
+    std::vector<model::MatchSummary> summaries = repo.matches();
+    const model::MetricSpec metric = *repo.metric(kMetric.toStdString());
+    const auto expected = model::compareSplit(tallies, summaries, metric, repo.tallyGrid(),
+                                              *model::parseSplit("date:2026-09-01"), repo.flagSettings());
+    QVERIFY(expected.problem.empty());
+    const auto& left = expected.zones[static_cast<std::size_t>(model::ZoneGrid{}.indexOf({2, 5}))];
+    QCOMPARE(view.map()->zone(2, 5).value(QStringLiteral("value")).toDouble(), left.difference);
+    // Both sides one hover away.
+    QCOMPARE(view.map()->zone(2, 5).value(QStringLiteral("rawText")).toString(),
+             QStringLiteral("before 2026-09-01 %1 · from 2026-09-01 %2")
+                 .arg(valueText(metric.kind(), left.first.pooled), valueText(metric.kind(), left.second.pooled)));
+    QVERIFY(view.summaryText().startsWith(QStringLiteral("Their passes before their shots: from 2026-09-01")));
+    QCOMPARE(view.strongest().size(), 4);
+    // A split with an empty side says so and draws nothing.
+    view.setSplit(QStringLiteral("opponent:Nobody FC"));
+    QCOMPARE(view.summaryText(), QStringLiteral("No match is Nobody FC in this season"));
+    QCOMPARE(view.map()->count(), 0);
 }
 
 int main(int argc, char* argv[]) {

@@ -82,3 +82,25 @@ TEST_CASE("neighbouring steps stay apart for normal, deuteranope and protanope e
         }
     }
 }
+
+TEST_CASE("the difference maps' diverging rows stay apart for every eye too", "[palette]") {
+    // Row 0's neighbouring steps (blue … neutral … orange) for normal, deuteranope and protanope
+    // eyes; the two middle steps sit either side of no difference.
+    for (const int v : {-1, 0, 1}) {
+        double least = 1e9;
+        for (int s = 0; s + 1 < stepsAt(0); ++s) {
+            Rgb a = divergingColour(0, s), b = divergingColour(0, s + 1);
+            if (v >= 0) {
+                a = simulate(a, static_cast<Vision>(v));
+                b = simulate(b, static_cast<Vision>(v));
+            }
+            least = std::min(least, deltaE(toLab(a), toLab(b)));
+        }
+        INFO("vision " << v << ": least ΔE " << least);
+        CHECK(least >= 8);
+    }
+    CHECK(divergingStepOf(-1, 0) == 0);
+    CHECK(divergingStepOf(1, 0) == 7);
+    CHECK(divergingStepOf(0.01, 0) == 4);
+    CHECK(toHex(divergingColour(3, 0)) == toHex(neutral()));
+}

@@ -42,7 +42,7 @@ def main():
     check(worst < 0.05, f"L*a*b* of the scale's stops agree with colorspacious (largest difference {worst:.4f})")
 
     worst = 0.0
-    for row in data["rows"]:
+    for row in data["rows"] + data["diverging_rows"]:
         for cell in row:
             for vision, name in (("deuteranopia", "deuteranomaly"), ("protanopia", "protanomaly")):
                 theirs = cspace_convert(cell["rgb"], {"name": "sRGB1+CVD", "cvd_type": name, "severity": 100}, "sRGB1")
@@ -50,12 +50,14 @@ def main():
                 worst = max(worst, max(abs(a - b) for a, b in zip(cell[vision], theirs)))
     check(worst < 0.005, f"simulated dichromat colours agree with colorspacious' Machado 2009 (largest {worst:.5f})")
 
-    for level, row in enumerate(data["rows"]):
+    for level, row in enumerate(data["rows"] + data["diverging_rows"]):
+        kind = "sequential" if level < len(data["rows"]) else "diverging"
+        level = level % len(data["rows"])
         if len(row) < 2:
             continue
         for vision in ("rgb", "deuteranopia", "protanopia"):
             least = min(deltaE(a[vision], b[vision], input_space="sRGB1") for a, b in zip(row, row[1:]))
-            check(least >= 5, f"row {level} ({len(row)} steps), {vision if vision != 'rgb' else 'normal vision'}: "
+            check(least >= 5, f"{kind} row {level} ({len(row)} steps), {vision if vision != 'rgb' else 'normal vision'}: "
                               f"neighbouring steps at least {least:.1f} CAM02-UCS apart")
     if FAILURES:
         print(f"{len(FAILURES)} check(s) failed", file=sys.stderr)
