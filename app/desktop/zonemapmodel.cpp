@@ -77,7 +77,14 @@ std::vector<ZoneCell> zoneCells(const std::vector<const ZoneStatus*>& statuses, 
         c.valueText = valueText(shown, c.hasValue ? p.pooled : s->value);
         c.sampleText = sampleText(kind, s->sum, s->window);
         c.intervalText = c.hasValue ? intervalText(shown, p.interval) : QString();
-        c.rawText = c.hasValue ? QStringLiteral("This zone alone: %1%2 · %3").arg(valueText(shown, c.raw), per, c.sampleText)
+        // The zone's own numbers: num/den as counted (weighted sums for the EWMA), then its value.
+        const auto amount = [](double v) {
+            return std::abs(v - std::round(v)) < 1e-9 ? QString::number(std::llround(v)) : QString::number(v, 'f', 1);
+        };
+        const QString counted = kind == MetricKind::Count
+                                    ? QStringLiteral("%1 in %2").arg(amount(s->sum.num), c.sampleText)
+                                    : QStringLiteral("%1 of %2").arg(amount(s->sum.num), amount(s->sum.den));
+        c.rawText = c.hasValue ? QStringLiteral("This zone alone: %1 = %2%3").arg(counted, valueText(shown, c.raw), per)
                                : QString();
         c.targetText = targetText(kind, s->target);
         c.state = ZoneState::from(s->state);

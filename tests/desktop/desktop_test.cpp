@@ -208,8 +208,12 @@ void DesktopTest::debriefMaps() {
             QCOMPARE(inMatch.value(QStringLiteral("value")).toDouble(), pooledMatch.zones[at].pooled);
             QCOMPARE(inMatch.value(QStringLiteral("valueText")).toString(),
                      valueText(model::MetricKind::Rate, pooledMatch.zones[at].pooled));
-            QVERIFY(inMatch.value(QStringLiteral("rawText")).toString().startsWith(
-                QStringLiteral("This zone alone: %1").arg(valueText(model::MetricKind::Rate, a.value))));
+            // The zone's own num/den one hover away.
+            QCOMPARE(inMatch.value(QStringLiteral("rawText")).toString(),
+                     QStringLiteral("This zone alone: %1 of %2 = %3")
+                         .arg(a.sum.num)
+                         .arg(a.sum.den)
+                         .arg(valueText(model::MetricKind::Rate, a.value)));
         }
         QCOMPARE(inWindow.value(QStringLiteral("raw")).toDouble(), std::isnan(b.value) ? 0 : b.value);
         QCOMPARE(inWindow.value(QStringLiteral("value")).toDouble(), std::isnan(b.value) ? 0 : pooledWindow.zones[at].pooled);
@@ -729,7 +733,8 @@ void DesktopTest::pitchHoverShowsNumbers() {
     QTRY_VERIFY(map->property("captionText").toString().startsWith(QStringLiteral("Right wing in their third (B5·L1)")));
     const QString caption = map->property("captionText").toString();
     QVERIFY2(caption.contains(zone.value(QStringLiteral("valueText")).toString()), qPrintable(caption));
-    QVERIFY2(caption.contains(zone.value(QStringLiteral("sampleText")).toString()), qPrintable(caption));
+    // The zone's own count beside its pooled value.
+    QVERIFY2(caption.contains(zone.value(QStringLiteral("rawText")).toString()), qPrintable(caption));
     QVERIFY2(caption.contains(QStringLiteral("90% interval ") +
                               zone.value(QStringLiteral("intervalText")).toString()),
              qPrintable(caption));
