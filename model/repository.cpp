@@ -839,6 +839,48 @@ std::int64_t findOrMakeSquad(SQLite::Database& db, const std::string& squad) {
 
 } // namespace
 
+// A match's video clock is kept as a setting "video.<match id>" = "1=0;2=2850" (period=seconds).
+std::map<int, double> ClubRepository::videoPeriodStarts(const std::string& matchId) const {
+    return guarded("cannot read the video's period starts", [&] {
+        std::map<int, double> out;
+        SQLite::Statement q(*m_db, "SELECT value FROM setting WHERE key = ?");
+        q.bind(1, "video." + matchId);
+        if (!q.executeStep()) return out;
+        const std::string text = q.getColumn(0).getString();
+        std::size_t pos = 0;
+        while (pos < text.size()) {
+            const std::size_t end = std::min(text.find(';', pos), text.size());
+            const std::string part = text.substr(pos, end - pos);
+            const std::size_t eq = part.find('=');
+            if (eq != std::string::npos) {
+                try {
+                    out[std::stoi(part.substr(0, eq))] = std::stod(part.substr(eq + 1));
+                } catch (const std::exception&) {
+                    // a hand-edited value that does not read is left out
+                }
+            }
+            pos = end + 1;
+        }
+        return out;
+    });
+}
+
+void ClubRepository::saveVideoPeriodStarts(const std::string& matchId, const std::map<int, double>& starts) {
+    guarded("cannot save the video's period starts", [&] {
+        std::string value;
+        for (const auto& [period, seconds] : starts) {
+            char buf[48];
+            std::snprintf(buf, sizeof buf, "%s%d=%.3f", value.empty() ? "" : ";", period, seconds);
+            value += buf;
+        }
+        SQLite::Statement q(*m_db, "INSERT INTO setting(key, value) VALUES (?, ?) "
+                                   "ON CONFLICT(key) DO UPDATE SET value = excluded.value");
+        q.bind(1, "video." + matchId);
+        q.bind(2, value);
+        q.exec();
+    });
+}
+
 std::vector<Player> ClubRepository::squadList(const std::string& squad) const {
     return guarded("cannot read the squad list", [&] {
         std::vector<Player> out;

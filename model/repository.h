@@ -14,6 +14,7 @@
 #include <cstdint>
 #include <filesystem>
 #include <functional>
+#include <map>
 #include <memory>
 #include <optional>
 #include <string>
@@ -130,6 +131,10 @@ public:
     /// The season of a match up to its last stored match: match ids and dates in date order,
     /// and dense tallies per metric; `focal` is set to the match's index.
     SeasonTallies seasonTallies(const std::string& squad, const std::string& season) const;
+    /// Where each period of a match's video starts, in seconds from the video's start, as the
+    /// staff last gave it for clip lists (moments.h VideoClock); empty when never given.
+    std::map<int, double> videoPeriodStarts(const std::string& matchId) const;
+    void saveVideoPeriodStarts(const std::string& matchId, const std::map<int, double>& starts);
     /// The squad's list of players (squadlist.h), by shirt number; empty when none was given.
     std::vector<Player> squadList(const std::string& squad) const;
     /// Replaces the squad's list in one transaction (the squad is created when new). The caller

@@ -71,8 +71,9 @@ MomentVerbs::MomentVerbs(CLI::App& app) {
         ->capture_default_str()
         ->check(CLI::Range(0.0, 600.0));
     m_clips->add_option("--period-start", m_periodStarts,
-                        "Where a period starts in the video, PERIOD=[hh:]mm:ss (repeatable; "
-                        "default: the 1st at 0:00, each next one right after the one before)");
+                        "Where a period starts in the video, PERIOD=[hh:]mm:ss (repeatable; remembered "
+                        "for the match; default: as last given, else the 1st at 0:00 and each next one "
+                        "right after the one before)");
     m_clips->add_option("-o,--out", m_out, "The file to write; - for standard output")->required();
 }
 
@@ -208,6 +209,9 @@ int MomentVerbs::runClips(ClubRepository& repo, std::ostream& out, std::ostream&
     }
     const auto found = findMoments(repo, m_match, m_metric, m_zone, m_window, m_player, m_unit, err);
     if (!found) return kExitBadInput;
+    // Period starts given are remembered for the match; without them, the remembered ones apply.
+    const bool given = !m_periodStarts.empty();
+    if (!given) clock.periodStartS = repo.videoPeriodStarts(m_match);
     if (found->matches.size() != 1) {
         err << "error: --window " << m_window << ": a clip list describes one match's video, and this window has "
             << found->matches.size() << " matches; use --window match (the default) for each match\n";
@@ -223,11 +227,13 @@ int MomentVerbs::runClips(ClubRepository& repo, std::ostream& out, std::ostream&
                               zoneName(zone ? zone->band : 0, zone ? zone->lane : 0, repo.tallyGrid());
     const std::string bytes = m_clipFormat == "vtt" ? clipsWebVtt(match->info, found->moments, clips, title)
                                                     : clipsCsv(match->info, found->moments, clips);
-    return deliverFile(m_out, bytes,
-                       std::to_string(clips.size()) + (clips.size() == 1 ? " clip" : " clips") + " of " +
-                           std::to_string(found->moments.size()) +
-                           (found->moments.size() == 1 ? " moment" : " moments"),
-                       out, err);
+    const int code = deliverFile(m_out, bytes,
+                                 std::to_string(clips.size()) + (clips.size() == 1 ? " clip" : " clips") + " of " +
+                                     std::to_string(found->moments.size()) +
+                                     (found->moments.size() == 1 ? " moment" : " moments"),
+                                 out, err);
+    if (code == kExitOk && given) repo.saveVideoPeriodStarts(m_match, clock.periodStartS);
+    return code;
 }
 
 } // namespace pitchloop::cli

@@ -155,6 +155,17 @@ void MomentsView::refresh() {
     request.matchId = m_matchId.toStdString();
     request.metricId = m_metricId.toStdString();
     if (m_band > 0 && m_lane > 0) request.zone = Zone{m_band, m_lane};
+    // The match's video clock as last saved: where its 2nd half starts (mm:ss).
+    if (m_clockFor != m_matchId) {
+        m_clockFor = m_matchId;
+        const auto starts = s->repository()->videoPeriodStarts(request.matchId);
+        const auto second = starts.find(2);
+        m_secondHalfStart = second == starts.end()
+                                ? QString()
+                                : QStringLiteral("%1:%2").arg(static_cast<int>(second->second) / 60)
+                                      .arg(static_cast<int>(second->second) % 60, 2, 10, QLatin1Char('0'));
+        emit clipSettingsChanged();
+    }
     // Whose moments: the choices come from the match's squad list.
     m_filterChoices = {QVariantMap{{QStringLiteral("text"), tr("Everyone")}, {QStringLiteral("value"), QString()}}};
     if (const auto where = s->repository()->seasonOfMatch(request.matchId)) {
@@ -285,6 +296,7 @@ bool MomentsView::saveClips(const QUrl& file, const QString& format) {
         const std::string bytes = format == QLatin1String("csv") ? clipsCsv(match->info, result.moments, clips)
                                                                  : clipsWebVtt(match->info, result.moments, clips, title);
         writeFileAtomically(QFile::encodeName(path).toStdString(), bytes);
+        s->repository()->saveVideoPeriodStarts(request.matchId, clock.periodStartS); // remembered for the match
         const QString clipsText = clips.size() == 1 ? tr("1 clip") : tr("%1 clips").arg(clips.size());
         exported(tr("Wrote %1 to %2.").arg(clipsText, path), false);
         return true;

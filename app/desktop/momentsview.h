@@ -132,6 +132,7 @@ private:
     double m_leadIn = 8;
     double m_leadOut = 4;
     QString m_secondHalfStart;
+    QString m_clockFor; ///< the match whose remembered video clock the field shows
     MomentListModel* m_list;
     QString m_summary;
     QString m_exportMessage;

@@ -147,7 +147,7 @@ TEST_CASE("squad: a list imported, listed, edited; moments name our players and 
     CHECK(contains(cli({"--db", db, "squad", "list"}).out, "24   CM   T. Newcome"));
     r = cli({"--db", db, "squad", "add", "25", "--name", "X", "--position", "sweeper"});
     CHECK(r.code == 2);
-    CHECK(contains(r.err, "--position: 'sweeper' is not a position"));
+    CHECK(contains(r.err, "--position: 'SWEEPER' is not a position the list knows"));
     REQUIRE(cli({"--db", db, "squad", "remove", "24"}).code == 0);
     CHECK(cli({"--db", db, "squad", "remove", "24"}).code == 2);
 
@@ -160,4 +160,19 @@ TEST_CASE("squad: a list imported, listed, edited; moments name our players and 
     r = cli({"--db", db, "moments", "KB-2026-08", "--metric", "regain_5s", "--zone", "4,3", "--unit", "wingers"});
     CHECK(r.code == 2);
     CHECK(contains(r.err, "--unit 'wingers'"));
+}
+
+TEST_CASE("export clips remembers where the match's periods start in its video", "[cli][moments]") {
+    const std::string db = demoClub("clips-clock-cli", 8);
+    const std::vector<std::string> base{"--db", db, "export", "clips", "KB-2026-08", "--metric",
+                                        "pre_shot_passes_against", "--zone", "2,5", "--format", "csv", "-o", "-"};
+    const auto plain = cli(base);
+    REQUIRE(plain.code == 0);
+    auto with = base;
+    with.insert(with.end(), {"--period-start", "2=47:30"});
+    const auto first = cli(with);
+    REQUIRE(first.code == 0);
+    CHECK(first.out != plain.out); // the 2nd half's clips move
+    // Given once, remembered: the same clips without the option.
+    CHECK(cli(base).out == first.out);
 }

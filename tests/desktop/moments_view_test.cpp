@@ -167,6 +167,12 @@ void MomentsViewTest::savesAClipList() {
     const QString csvPath = m_dir->filePath(QStringLiteral("clips.csv"));
     QVERIFY(m_view->saveClips(QUrl::fromLocalFile(csvPath), QStringLiteral("csv")));
     QCOMPARE(slurp(csvPath), QByteArray::fromStdString(model::clipsCsv(match->info, found.moments, clips)));
+    // The video clock is remembered for the match: a new view shows it.
+    MomentsView again;
+    again.setSession(m_session.get());
+    again.setMetricId(kMetric);
+    again.setMatchId(QStringLiteral("KB-2026-08"));
+    QCOMPARE(again.property("secondHalfStart").toString(), QStringLiteral("47:30"));
 }
 
 void MomentsViewTest::refusedClipListsWriteNothing() {
