@@ -44,6 +44,13 @@ void ZoneSeries::select(const QString& metricId, int band, int lane, const QStri
     update();
 }
 
+void ZoneSeries::setCountScale(const QString& scale) {
+    if (scale == m_countScale || !countScaleFromString(scale.toStdString())) return;
+    m_countScale = scale;
+    emit selectionChanged();
+    update();
+}
+
 void ZoneSeries::clear() {
     m_metricRow = -1;
     m_hasSeries = false;
@@ -228,19 +235,36 @@ void ZoneSeries::refresh() {
             zones.push_back(st);
         }
     }
-    const ScaleDomain domain = scaleDomain(kind, pooledValues(zones, kind, grid));
+    // What a count's picker map is read per (model/countscale.h), as on the debrief.
+    m_scalable = kind == MetricKind::Count;
+    const CountScale scale = countScaleFromString(m_countScale.toStdString()).value_or(CountScale::PerMatch);
+    MapScale mapScale;
+    if (m_scalable && scale != CountScale::PerMatch) {
+        if (const std::string key = season->squad() + '/' + season->season() + '/' +
+                                    std::to_string(season->tallies().matchIds.size());
+            key != m_exposuresFor) {
+            m_exposures = s->repository()->seasonExposures(season->squad(), season->season());
+            m_exposuresFor = key;
+        }
+        mapScale = {scale, exposurePerMatch(m_exposures, *focal, w.judged, scale),
+                    season->find(*focal, metric->id, 0, 0, w.judged)};
+    }
+    m_scaleText = QString::fromStdString(scaleWords(m_scalable ? scale : CountScale::PerMatch));
+    const MetricKind shown = mapScale.appliesTo(kind) ? scaledKind(scale) : kind;
+    const ScaleDomain domain = scaleDomain(shown, pooledValues(zones, kind, grid, mapScale));
     ZoneMapModel::Header header{m_windowText, m_matchId, {}, ZoneState::NoTarget,
-                                scaleLabels(kind, domain), m_levelText};
+                                scaleLabels(shown, domain), m_levelText};
     if (const ZoneStatus* whole = season->find(*focal, metric->id, 0, 0, w.judged)) {
         header.wholePitchText = wholePitchLine(*whole, kind);
         header.wholePitchState = ZoneState::from(whole->state);
     }
-    m_map->reset(std::move(header), zoneCells(zones, kind, domain, grid));
+    m_map->reset(std::move(header), zoneCells(zones, kind, domain, grid, mapScale));
     if (m_band > 0) {
         const QVariantMap cell = m_map->zone(m_band, m_lane);
         if (cell.value(QStringLiteral("hasValue")).toBool())
-            m_summaryPooledText = tr("On the map, pulled toward its neighbours: %1")
-                                      .arg(cell.value(QStringLiteral("valueText")).toString());
+            m_summaryPooledText = tr("On the map, pulled toward its neighbours: %1%2")
+                                      .arg(cell.value(QStringLiteral("valueText")).toString(),
+                                           mapScale.appliesTo(kind) ? QLatin1Char(' ') + m_scaleText : QString());
     }
     emit changed();
 }

@@ -3,6 +3,7 @@
 // window's value and interval, the EWMA and the target in force, match by match, and the
 // focuses the zone has had.
 
+#include "countscale.h"
 #include "metricspec.h"
 #include "sessionclient.h"
 
@@ -35,6 +36,11 @@ class ZoneSeries : public pitchloop::desktop::SessionClient {
     Q_PROPERTY(int band READ band WRITE setBand NOTIFY selectionChanged)
     Q_PROPERTY(int lane READ lane WRITE setLane NOTIFY selectionChanged)
     Q_PROPERTY(QString matchId READ matchId WRITE setMatchId NOTIFY selectionChanged)
+    /// What a count's picker map is read per: "match", "per90", "per_opponent_passes", "share"
+    /// (model/countscale.h); the summary and the chart stay per match, as judged.
+    Q_PROPERTY(QString countScale READ countScale WRITE setCountScale NOTIFY selectionChanged)
+    Q_PROPERTY(bool scalable READ scalable NOTIFY changed)
+    Q_PROPERTY(QString scaleText READ scaleText NOTIFY changed)
     Q_PROPERTY(int metricRow READ metricRow NOTIFY changed)
     Q_PROPERTY(bool hasSeries READ hasSeries NOTIFY changed)
     Q_PROPERTY(QString zoneText READ zoneText NOTIFY changed)
@@ -83,6 +89,10 @@ public:
     void setLane(int lane);
     QString matchId() const { return m_matchId; }
     void setMatchId(const QString& id);
+    QString countScale() const { return m_countScale; }
+    void setCountScale(const QString& scale);
+    bool scalable() const { return m_scalable; }
+    QString scaleText() const { return m_scaleText; }
     /// Sets every input at once and recomputes once.
     Q_INVOKABLE void select(const QString& metricId, int band, int lane, const QString& matchId = {});
 
@@ -152,6 +162,11 @@ private:
     QString m_summaryStateText;
     QString m_summaryCertainty;
     QString m_summaryMatchText;
+    QString m_countScale = QStringLiteral("match");
+    bool m_scalable = false;
+    QString m_scaleText;
+    std::string m_exposuresFor; ///< squad/season/matches of m_exposures
+    std::vector<model::MatchExposure> m_exposures;
     QString m_summaryPooledText;
     QString m_summaryEwmaText;
     QString m_summaryCoachText;

@@ -81,6 +81,24 @@ Page {
                 currentIndex: trend.metricRow
                 onActivated: trend.select(currentValue, trend.band, trend.lane, trend.matchId)
             }
+            ComboBox {
+                objectName: "zoneScale"
+                visible: trend.scalable
+                Layout.preferredWidth: 230
+                textRole: "text"
+                valueRole: "value"
+                model: [
+                    { text: qsTr("a match"), value: "match" },
+                    { text: qsTr("per 90 minutes"), value: "per90" },
+                    { text: qsTr("per 100 of their passes"), value: "per_opponent_passes" },
+                    { text: qsTr("share of the pitch's total"), value: "share" }
+                ]
+                currentIndex: Math.max(0, indexOfValue(trend.countScale))
+                onActivated: trend.countScale = currentValue
+                ToolTip.visible: hovered
+                ToolTip.delay: 400
+                ToolTip.text: qsTr("What the map shows per; the card, the chart and the flags stay a match")
+            }
             Item { Layout.preferredWidth: Theme.gapLarge }
             Button {
                 text: qsTr("Whole pitch")
@@ -118,7 +136,8 @@ Page {
                     Layout.preferredWidth: 360
                     compact: true
                     showStates: false
-                    title: qsTr("%1, %2").arg(trend.metricName).arg(trend.windowText.toLowerCase())
+                    title: trend.scalable ? qsTr("%1 %2, %3").arg(trend.metricName).arg(trend.scaleText).arg(trend.windowText.toLowerCase())
+                                          : qsTr("%1, %2").arg(trend.metricName).arg(trend.windowText.toLowerCase())
                     labels: trend.map.scaleLabels
                 }
             }

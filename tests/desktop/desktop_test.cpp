@@ -472,6 +472,16 @@ void DesktopTest::zoneSeries() {
     const auto* series = trend.series();
     QCOMPARE(series->rowCount(), kMatches);
     QCOMPARE(trend.map()->rowCount(), 30);
+    // A count's picker map can be read as each zone's share of the pitch's total.
+    trend.select(QStringLiteral("losses"), 5, 1);
+    QVERIFY(trend.scalable());
+    trend.setCountScale(QStringLiteral("share"));
+    QCOMPARE(trend.scaleText(), QStringLiteral("of the pitch's total"));
+    QVERIFY(trend.map()->zone(5, 1).value(QStringLiteral("valueText")).toString().endsWith(QLatin1Char('%')));
+    QVERIFY(trend.summaryPooledText().endsWith(QStringLiteral("of the pitch's total")));
+    trend.setCountScale(QStringLiteral("match"));
+    trend.select(QStringLiteral("regain_5s"), 5, 1);
+    QVERIFY(!trend.scalable());
     // The card names the value the map colours for the zone (pooled), beside its own.
     QCOMPARE(trend.summaryPooledText(), QStringLiteral("On the map, pulled toward its neighbours: %1")
                                             .arg(trend.map()->zone(5, 1).value(QStringLiteral("valueText")).toString()));
