@@ -171,17 +171,9 @@ void MatchDebrief::refresh() {
     m_scalable = kind == MetricKind::Count;
     const CountScale scale = countScaleFromString(m_countScale.toStdString()).value_or(CountScale::PerMatch);
     MapScale matchScale, windowScale;
-    if (m_scalable && scale != CountScale::PerMatch) {
-        if (const std::string key = season->squad() + '/' + season->season() + '/' +
-                                    std::to_string(season->tallies().matchIds.size());
-            key != m_exposuresFor) {
-            m_exposures = s->repository()->seasonExposures(season->squad(), season->season());
-            m_exposuresFor = key;
-        }
-        matchScale = {scale, exposurePerMatch(m_exposures, *focal, windows.match, scale),
-                      season->find(*focal, metric->id, 0, 0, windows.match)};
-        windowScale = {scale, exposurePerMatch(m_exposures, *focal, windows.judged, scale),
-                       season->find(*focal, metric->id, 0, 0, windows.judged)};
+    if (m_scalable) {
+        matchScale = m_scaler.scaleFor(scale, *s->repository(), *season, *focal, metric->id, windows.match);
+        windowScale = m_scaler.scaleFor(scale, *s->repository(), *season, *focal, metric->id, windows.judged);
     }
     m_scaleText = QString::fromStdString(scaleWords(m_scalable ? scale : CountScale::PerMatch));
     // The scale spans the values the maps colour: each zone pooled toward its neighbours.

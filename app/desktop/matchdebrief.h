@@ -3,6 +3,7 @@
 // match and over the judged window, and every slipped or watched target, most certain first.
 
 #include "countscale.h"
+#include "zonemapmodel.h"
 #include "sessionclient.h"
 
 #include <QString>
@@ -123,8 +124,7 @@ private:
     QString m_countScale = QStringLiteral("match");
     bool m_scalable = false;
     QString m_scaleText;
-    std::string m_exposuresFor; ///< squad/season of m_exposures
-    std::vector<pitchloop::model::MatchExposure> m_exposures;
+    CountScaler m_scaler;
     int m_selectedBand = 0;
     int m_selectedLane = 0;
     QString m_selectionFor; ///< match and metric the selection was made for

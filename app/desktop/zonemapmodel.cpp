@@ -1,6 +1,7 @@
 #include "zonemapmodel.h"
 
 #include "palette.h"
+#include "seasondata.h"
 #include "pooling.h"
 #include "targets.h"
 #include "zonestate.h"
@@ -36,6 +37,18 @@ PooledMap poolStatusZones(const std::vector<const ZoneStatus*>& statuses, Metric
 }
 
 } // namespace
+
+MapScale CountScaler::scaleFor(CountScale scale, const ClubRepository& repo, const SeasonData& season,
+                               std::size_t focal, const std::string& metricId, const Window& w) {
+    if (scale == CountScale::PerMatch) return {};
+    if (const std::string key = season.squad() + '/' + season.season() + '/' +
+                                std::to_string(season.tallies().matchIds.size());
+        key != m_key) {
+        m_exposures = repo.seasonExposures(season.squad(), season.season());
+        m_key = key;
+    }
+    return {scale, exposurePerMatch(m_exposures, focal, w, scale), season.find(focal, metricId, 0, 0, w)};
+}
 
 std::vector<double> pooledValues(const std::vector<const ZoneStatus*>& statuses, MetricKind kind,
                                  const ZoneGrid& grid, const MapScale& scale) {

@@ -3,6 +3,7 @@
 // scale, sample, interval, target and state, all as display-ready roles.
 
 #include "countscale.h"
+#include "repository.h"
 #include "display.h"
 #include "status.h"
 
@@ -57,6 +58,23 @@ struct MapScale {
         return kind == model::MetricKind::Count && scale != model::CountScale::PerMatch &&
                (scale != model::CountScale::ShareOfTotal || wholePitch != nullptr);
     }
+};
+
+class SeasonData;
+
+/// The scale of a count's map in one window of a season, ready for zoneCells: the season's
+/// exposures (minutes, opponent passes) are read from the club file once per squad, season and
+/// number of matches, and kept here.
+class CountScaler {
+public:
+    /// `scale` for metric `metricId` over window `w` ending at match `focal` of `season`; the
+    /// default MapScale (as judged) for PerMatch.
+    MapScale scaleFor(model::CountScale scale, const model::ClubRepository& repo, const SeasonData& season,
+                      std::size_t focal, const std::string& metricId, const model::Window& w);
+
+private:
+    std::string m_key;
+    std::vector<model::MatchExposure> m_exposures;
 };
 
 /// The values zoneCells colours (each zone pooled toward its neighbours), for the colour scale's

@@ -239,16 +239,7 @@ void ZoneSeries::refresh() {
     m_scalable = kind == MetricKind::Count;
     const CountScale scale = countScaleFromString(m_countScale.toStdString()).value_or(CountScale::PerMatch);
     MapScale mapScale;
-    if (m_scalable && scale != CountScale::PerMatch) {
-        if (const std::string key = season->squad() + '/' + season->season() + '/' +
-                                    std::to_string(season->tallies().matchIds.size());
-            key != m_exposuresFor) {
-            m_exposures = s->repository()->seasonExposures(season->squad(), season->season());
-            m_exposuresFor = key;
-        }
-        mapScale = {scale, exposurePerMatch(m_exposures, *focal, w.judged, scale),
-                    season->find(*focal, metric->id, 0, 0, w.judged)};
-    }
+    if (m_scalable) mapScale = m_scaler.scaleFor(scale, *s->repository(), *season, *focal, metric->id, w.judged);
     m_scaleText = QString::fromStdString(scaleWords(m_scalable ? scale : CountScale::PerMatch));
     const MetricKind shown = mapScale.appliesTo(kind) ? scaledKind(scale) : kind;
     const ScaleDomain domain = scaleDomain(shown, pooledValues(zones, kind, grid, mapScale));

@@ -4,6 +4,7 @@
 // focuses the zone has had.
 
 #include "countscale.h"
+#include "zonemapmodel.h"
 #include "metricspec.h"
 #include "sessionclient.h"
 
@@ -165,8 +166,7 @@ private:
     QString m_countScale = QStringLiteral("match");
     bool m_scalable = false;
     QString m_scaleText;
-    std::string m_exposuresFor; ///< squad/season/matches of m_exposures
-    std::vector<model::MatchExposure> m_exposures;
+    CountScaler m_scaler;
     QString m_summaryPooledText;
     QString m_summaryEwmaText;
     QString m_summaryCoachText;
