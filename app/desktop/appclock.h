@@ -1,5 +1,5 @@
 #pragma once
-// "Today" and "now" for the desktop app: model/clock, shared with the command line, with
+// "Today" and "now" for the desktop app: model/clock, shared by the command line, with
 // $PITCHLOOP_TODAY overriding the clock so demos and tests can replay a season. Computations in
 // model/ take the day as a parameter; only these entry points read the clock.
 

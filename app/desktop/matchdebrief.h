@@ -74,7 +74,7 @@ public:
     int selectedLane() const { return m_selectedLane; }
     Q_INVOKABLE void selectZone(int band, int lane);
 
-    /// The match's debrief as a PDF (the same sheet as `pitchloop export debrief`).
+    /// The match's debrief as a PDF (the same sheet the command line exports).
     Q_INVOKABLE bool exportPdf(const QUrl& file);
     /// Every zone's value, interval and state at this match in the club's windows, as CSV
     /// (docs/exports.md: the same bytes as the command line's statuses export).
