@@ -35,10 +35,7 @@ double exposurePerMatch(const std::vector<MatchExposure>& exposures, std::size_t
                         CountScale scale) {
     if (scale == CountScale::PerMatch || scale == CountScale::ShareOfTotal) return 1;
     if (exposures.empty() || focal >= exposures.size()) return 1;
-    std::size_t first = 0;
-    if (window.kind == Window::Kind::Match) first = focal;
-    if (window.kind == Window::Kind::LastN)
-        first = focal + 1 >= static_cast<std::size_t>(window.n) ? focal + 1 - static_cast<std::size_t>(window.n) : 0;
+    const std::size_t first = windowStart(focal, window);
     // The weights windowSum gives: 1 each, or λ(1 − λ)^age for the EWMA.
     double weight = window.kind == Window::Kind::Ewma ? window.lambda : 1, sumW = 0, sumWE = 0;
     for (std::size_t t = focal + 1; t-- > first;) {

@@ -218,10 +218,7 @@ MomentsResult storedMoments(const ClubRepository& repo, const MomentsRequest& re
         if (m.squad == where->first && m.season == where->second) season.push_back(std::move(m));
     std::size_t focal = 0;
     while (focal < season.size() && season[focal].id != request.matchId) ++focal;
-    std::size_t first = focal;
-    if (request.window.kind == Window::Kind::Season) first = 0;
-    else if (request.window.kind == Window::Kind::LastN)
-        first = focal + 1 > static_cast<std::size_t>(request.window.n) ? focal + 1 - static_cast<std::size_t>(request.window.n) : 0;
+    const std::size_t first = windowStart(focal, request.window);
     for (std::size_t i = first; i <= focal && i < season.size(); ++i) {
         const auto match = repo.loadMatch(season[i].id);
         if (!match) continue;

@@ -209,19 +209,22 @@ std::optional<Window> Window::parse(std::string_view text) {
     return std::nullopt;
 }
 
+std::size_t windowStart(std::size_t focal, const Window& w) {
+    switch (w.kind) {
+    case Window::Kind::Match: return focal;
+    case Window::Kind::LastN:
+        return focal + 1 >= static_cast<std::size_t>(w.n) ? focal + 1 - static_cast<std::size_t>(w.n) : 0;
+    case Window::Kind::Season:
+    case Window::Kind::Ewma: return 0;
+    }
+    return 0;
+}
+
 WindowSum windowSum(const std::vector<ZoneTally>& series, std::size_t focal, const Window& w,
                     const WindowVariation& v) {
     WindowSum s;
     if (series.empty() || focal >= series.size()) return s;
-    std::size_t first = 0;
-    switch (w.kind) {
-    case Window::Kind::Match: first = focal; break;
-    case Window::Kind::LastN:
-        first = focal + 1 >= static_cast<std::size_t>(w.n) ? focal + 1 - static_cast<std::size_t>(w.n) : 0;
-        break;
-    case Window::Kind::Season:
-    case Window::Kind::Ewma: first = 0; break;
-    }
+    const std::size_t first = windowStart(focal, w);
     // Weighted sums: w = 1 in a plain window, λ(1 − λ)^age in the EWMA. Σw²·d·D is the variance
     // of Σw·x in units of one chance's pure-noise variance, D the match's design effect.
     const bool ewma = w.kind == Window::Kind::Ewma;

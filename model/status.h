@@ -54,6 +54,10 @@ struct WindowVariation {
     double mean = 0;
 };
 
+/// The index of a window's first match when it ends at match `focal`: the match itself, the
+/// last N (fewer at the season's start), or the season's first (the season and the EWMA).
+std::size_t windowStart(std::size_t focal, const Window& w);
+
 /// Sums one zone's per-match tallies over the window ending at `focal` (inclusive).
 /// The EWMA weighs match t by λ(1 − λ)^(focal − t) over the real matches only (no pseudo-match
 /// at the target: a prior is used once, in the evidence), so its value is Σw·x / Σw·d — a

@@ -34,22 +34,14 @@ import shutil
 import subprocess
 import sys
 
-FAILURES = []
+from outside import check, finish
+from outside import run as run_bytes
+
 TIMING = re.compile(r"^(\d{2,}):([0-5]\d):([0-5]\d)\.(\d{3}) --> (\d{2,}):([0-5]\d):([0-5]\d)\.(\d{3})(?: .*)?$")
 
 
-def check(ok, what):
-    print(("ok    " if ok else "FAIL  ") + what)
-    if not ok:
-        FAILURES.append(what)
-
-
 def run(cli, db, *args):
-    r = subprocess.run([cli, "--db", str(db), *args], capture_output=True)
-    if r.returncode != 0:
-        print("pitchloop " + " ".join(args) + " failed:\n" + r.stderr.decode(), file=sys.stderr)
-        sys.exit(2)
-    return r.stdout.decode()
+    return run_bytes(cli, db, *args).decode()
 
 
 def parse_webvtt(text):
@@ -219,10 +211,7 @@ def main():
     check(r.returncode == 2 and b"one match's video" in r.stderr and not (work / "x.vtt").exists(),
           "a window of several matches is refused for a clip list, nothing written")
 
-    if FAILURES:
-        print(f"{len(FAILURES)} check(s) failed", file=sys.stderr)
-        return 1
-    return 0
+    return finish()
 
 
 if __name__ == "__main__":

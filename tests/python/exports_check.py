@@ -36,21 +36,7 @@ except ImportError:  # pragma: no cover
     print("python3-icalendar is missing (apt install python3-icalendar)", file=sys.stderr)
     sys.exit(2)
 
-FAILURES = []
-
-
-def check(ok, what):
-    print(("ok    " if ok else "FAIL  ") + what)
-    if not ok:
-        FAILURES.append(what)
-
-
-def run(cli, db, *args):
-    r = subprocess.run([cli, "--db", str(db), *args], capture_output=True)
-    if r.returncode != 0:
-        print("pitchloop " + " ".join(args) + " failed:\n" + r.stderr.decode(), file=sys.stderr)
-        sys.exit(2)
-    return r.stdout
+from outside import FAILURES, check, run
 
 
 def main():

@@ -23,13 +23,7 @@ except ImportError:  # pragma: no cover
     print("python3-colorspacious is missing (apt install python3-colorspacious)", file=sys.stderr)
     sys.exit(2)
 
-FAILURES = []
-
-
-def check(ok, what):
-    print(("ok    " if ok else "FAIL  ") + what)
-    if not ok:
-        FAILURES.append(what)
+from outside import check, finish
 
 
 def main():
@@ -59,10 +53,7 @@ def main():
             least = min(deltaE(a[vision], b[vision], input_space="sRGB1") for a, b in zip(row, row[1:]))
             check(least >= 5, f"{kind} row {level} ({len(row)} steps), {vision if vision != 'rgb' else 'normal vision'}: "
                               f"neighbouring steps at least {least:.1f} CAM02-UCS apart")
-    if FAILURES:
-        print(f"{len(FAILURES)} check(s) failed", file=sys.stderr)
-        return 1
-    return 0
+    return finish()
 
 
 if __name__ == "__main__":
